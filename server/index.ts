@@ -1,0 +1,73 @@
+import 'reflect-metadata';
+import type { AddressInfo } from 'node:net';
+import { createApp } from './app';
+import { ConfigError, loadConfig, type Config } from './config';
+import { openDatabase } from './db/data-source';
+import { createLogger } from './http/logger';
+
+export interface RunningServer {
+  url: string;
+  close: () => Promise<void>;
+}
+
+/** Opens the database, applies migrations, starts mail and listens. */
+export async function startServer(config: Config): Promise<RunningServer> {
+  const logger = createLogger(config);
+  const { dataSource, applied } = await openDatabase(config);
+  if (applied.length > 0) logger.info({ applied }, 'database migrated');
+
+  const app = createApp({ dataSource, config, logger });
+  const server = app.listen(config.port, config.host);
+  await new Promise<void>((resolveListen, rejectListen) => {
+    server.once('listening', resolveListen);
+    server.once('error', rejectListen);
+  });
+  const { port } = server.address() as AddressInfo;
+  const url = `http://localhost:${port}`;
+  logger.info({ url, dbPath: config.dbPath, env: config.env }, `Hoverprint listening on ${url}`);
+
+  let closing: Promise<void> | undefined;
+  const close = () =>
+    (closing ??= (async () => {
+      await new Promise<void>((r) => {
+        server.close(() => r());
+        server.closeIdleConnections();
+      });
+      if (dataSource.isInitialized) await dataSource.destroy();
+    })());
+  return { url, close };
+}
+
+async function main() {
+  let config: Config;
+  try {
+    config = loadConfig();
+  } catch (err) {
+    if (err instanceof ConfigError) {
+      process.stderr.write(`Hoverprint cannot start. ${err.message}\n`);
+      process.exit(78); // EX_CONFIG
+    }
+    throw err;
+  }
+  const running = await startServer(config);
+  const stop = (signal: string) => {
+    process.stderr.write(`\n${signal} received, shutting down\n`);
+    const force = setTimeout(() => process.exit(1), 10_000);
+    force.unref();
+    running.close().then(
+      () => process.exit(0),
+      () => process.exit(1),
+    );
+  };
+  process.once('SIGTERM', () => stop('SIGTERM'));
+  process.once('SIGINT', () => stop('SIGINT'));
+}
+
+if (process.argv[1] && /server[\\/]index\.ts$/.test(process.argv[1])) {
+  main().catch((err: unknown) => {
+    process.stderr.write(
+      `Hoverprint failed to start: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}\n`,
+    );
+    process.exit(1);
+  });
+}
