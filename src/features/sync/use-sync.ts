@@ -1,0 +1,71 @@
+import { useEffect, useSyncExternalStore } from 'react';
+import { localDb } from '../../lib/local-db';
+import { useLiveQuery } from '../../lib/use-live-query';
+import { useOnline } from '../../lib/use-online';
+import { onSyncPass, setSyncTeam, syncEngine } from './sync-engine';
+import type { SyncPassResult } from './sync-runner';
+
+/**
+ * Keeps the sync engine running while the app is open: enabled when the browser is online and
+ * someone is signed in, kicked whenever the local store changes.
+ */
+export function useSyncDriver(options: {
+  signedIn: boolean;
+  teamId: string | undefined;
+  onPass?: (result: SyncPassResult) => void;
+}) {
+  const online = useOnline();
+  const { signedIn, teamId, onPass } = options;
+
+  useEffect(() => setSyncTeam(teamId), [teamId]);
+
+  useEffect(() => {
+    const engine = syncEngine();
+    engine.setEnabled(online && signedIn);
+    if (online && signedIn) engine.kick();
+  }, [online, signedIn, teamId]);
+
+  useEffect(() => (onPass ? onSyncPass(onPass) : undefined), [onPass]);
+
+  // A new flight or a queued write: try to send it at once.
+  const changeStamp = useLiveQuery(async () => {
+    const db = localDb();
+    const [flights, writes] = await Promise.all([
+      db.flights.where('syncState').equals('pending').count(),
+      db.outbox.where('state').equals('pending').count(),
+    ]);
+    return flights * 100_003 + writes;
+  }, []);
+  useEffect(() => {
+    if (changeStamp) syncEngine().kick();
+  }, [changeStamp]);
+}
+
+export interface SyncSummary {
+  /** Local flights the server has not acknowledged yet. */
+  pendingFlights: number;
+  failedFlights: number;
+  pendingWrites: number;
+  failedWrites: number;
+  running: boolean;
+  lastError: string | null;
+}
+
+/** What the header and the fleet show about this device's unsent work. */
+export function useSyncSummary(): SyncSummary | undefined {
+  const engine = syncEngine();
+  const state = useSyncExternalStore(engine.subscribe, engine.getState, engine.getState);
+  const counts = useLiveQuery(async () => {
+    const db = localDb();
+    // Counts through the indexes: the records themselves carry whole logs.
+    const [pendingFlights, failedFlights, pendingWrites, failedWrites] = await Promise.all([
+      db.flights.where('syncState').equals('pending').count(),
+      db.flights.where('syncState').equals('failed').count(),
+      db.outbox.where('state').equals('pending').count(),
+      db.outbox.where('state').equals('failed').count(),
+    ]);
+    return { pendingFlights, failedFlights, pendingWrites, failedWrites };
+  }, []);
+  if (!counts) return undefined;
+  return { ...counts, running: state.running, lastError: state.lastError };
+}

@@ -1,0 +1,233 @@
+import Dexie, { type EntityTable } from 'dexie';
+import type { FlightReport } from '../../shared/analysis/report-schema';
+import type { ReviewDetail } from '../../shared/analysis/review-detail';
+
+/**
+ * The device's own store: every log read on this device is kept here before any network is
+ * involved, and every write made while offline waits in the outbox. Sync (src/features/sync)
+ * drains both; nothing is deleted until the server has acknowledged it.
+ */
+
+export type LocalSyncState = 'pending' | 'synced' | 'failed';
+
+export interface LocalFlight {
+  /** Client-generated UUID; the server keys the flight by it, so retries are idempotent. */
+  id: string;
+  fileName: string;
+  /** The raw log exactly as dropped (CSV or gzip). */
+  file: Blob;
+  report: FlightReport;
+  detail: ReviewDetail;
+  teamId?: string;
+  aircraftId?: string;
+  /** ISO 8601 time the flight was recorded, when the log or the pilot says so. */
+  recordedAt?: string;
+  /** ms since epoch when it was stored on this device. */
+  savedAt: number;
+  syncState: LocalSyncState;
+  /** ms since epoch when the server acknowledged both the flight and its raw log. */
+  syncedAt?: number;
+  /** The report/detail PUT was acknowledged; only the raw file is still to send. */
+  summarySynced?: boolean;
+  attempts: number;
+  /** ms since epoch before which the runner will not try again (back-off). */
+  nextAttemptAt: number;
+  lastError?: string;
+}
+
+export type OutboxMethod = 'PUT' | 'PATCH' | 'POST' | 'DELETE';
+
+export interface OutboxEntry {
+  /** Auto-incremented; the outbox is flushed in this order. */
+  seq?: number;
+  /** Client UUID of the thing written (a comment id, say), for display and de-duplication. */
+  id: string;
+  method: OutboxMethod;
+  path: string;
+  body?: unknown;
+  createdAt: number;
+  state: 'pending' | 'failed';
+  attempts: number;
+  nextAttemptAt: number;
+  lastError?: string;
+}
+
+export class LocalDatabase extends Dexie {
+  flights!: EntityTable<LocalFlight, 'id'>;
+  outbox!: EntityTable<OutboxEntry, 'seq'>;
+
+  constructor(name = 'hoverprint') {
+    super(name);
+    this.version(1).stores({
+      flights: 'id, savedAt, syncState, teamId, aircraftId',
+      outbox: '++seq, id, state',
+    });
+  }
+}
+
+let database: LocalDatabase | undefined;
+
+/** The one database of this page, opened on first use. */
+export function localDb(): LocalDatabase {
+  return (database ??= new LocalDatabase());
+}
+
+/** For tests: forget the open handle so the next call opens a fresh database. */
+export async function closeLocalDb(): Promise<void> {
+  database?.close();
+  database = undefined;
+}
+
+export interface SaveLocalFlightInput {
+  id: string;
+  fileName: string;
+  file: Blob;
+  report: FlightReport;
+  detail: ReviewDetail;
+  teamId?: string;
+  aircraftId?: string;
+  recordedAt?: string;
+}
+
+/**
+ * Keep a flight on this device and mark it for sync. Saving the same id again replaces the
+ * analysis (a re-run with another airframe) and sends it again.
+ */
+export async function saveLocalFlight(input: SaveLocalFlightInput): Promise<LocalFlight> {
+  const record: LocalFlight = {
+    ...input,
+    savedAt: Date.now(),
+    syncState: 'pending',
+    summarySynced: false,
+    attempts: 0,
+    nextAttemptAt: 0,
+  };
+  await localDb().flights.put(record);
+  return record;
+}
+
+export function getLocalFlight(id: string): Promise<LocalFlight | undefined> {
+  return localDb().flights.get(id);
+}
+
+/** Newest first. */
+export async function listLocalFlights(): Promise<LocalFlight[]> {
+  return (await localDb().flights.orderBy('savedAt').reverse().toArray()) as LocalFlight[];
+}
+
+/** Flights the server has not yet acknowledged (pending or failed), oldest first. */
+export async function listUnsyncedFlights(): Promise<LocalFlight[]> {
+  const all = await localDb().flights.orderBy('savedAt').toArray();
+  return all.filter((f) => f.syncState !== 'synced');
+}
+
+/** Give an imported flight its team and aircraft (before or after a failed sync). */
+export async function assignLocalFlight(
+  id: string,
+  target: { teamId: string; aircraftId?: string },
+): Promise<void> {
+  await localDb().flights.update(id, {
+    teamId: target.teamId,
+    aircraftId: target.aircraftId,
+    syncState: 'pending',
+    summarySynced: false,
+    nextAttemptAt: 0,
+    lastError: undefined,
+  });
+}
+
+export async function markSummarySynced(id: string): Promise<void> {
+  await localDb().flights.update(id, { summarySynced: true });
+}
+
+export async function markSynced(id: string): Promise<void> {
+  await localDb().flights.update(id, {
+    syncState: 'synced',
+    summarySynced: true,
+    syncedAt: Date.now(),
+    lastError: undefined,
+    nextAttemptAt: 0,
+  });
+}
+
+/**
+ * Record a failed attempt. `retryAt` null means the server refused for good (a 4xx that asking
+ * again will not fix): the flight stays on the device, shown as failed, until retried by hand.
+ */
+export async function markFlightAttemptFailed(
+  id: string,
+  error: string,
+  retryAt: number | null,
+): Promise<void> {
+  const flight = await localDb().flights.get(id);
+  if (!flight) return;
+  await localDb().flights.update(id, {
+    attempts: flight.attempts + 1,
+    lastError: error,
+    syncState: retryAt === null ? 'failed' : 'pending',
+    nextAttemptAt: retryAt ?? 0,
+  });
+}
+
+/** Remove a flight from this device; the caller decides whether that is safe. */
+export async function deleteLocalFlight(id: string): Promise<void> {
+  await localDb().flights.delete(id);
+}
+
+export interface EnqueueInput {
+  id: string;
+  method: OutboxMethod;
+  path: string;
+  body?: unknown;
+}
+
+/** Queue a write for the server; it is sent in order when online and signed in. */
+export async function enqueue(input: EnqueueInput): Promise<OutboxEntry> {
+  const entry: OutboxEntry = {
+    ...input,
+    createdAt: Date.now(),
+    state: 'pending',
+    attempts: 0,
+    nextAttemptAt: 0,
+  };
+  const seq = await localDb().outbox.add(entry);
+  return { ...entry, seq };
+}
+
+/** Everything still waiting (pending and failed), in the order it was written. */
+export async function listOutbox(): Promise<OutboxEntry[]> {
+  return (await localDb().outbox.orderBy('seq').toArray()) as OutboxEntry[];
+}
+
+export async function removeOutboxEntry(seq: number): Promise<void> {
+  await localDb().outbox.delete(seq);
+}
+
+export async function markOutboxAttemptFailed(
+  seq: number,
+  error: string,
+  retryAt: number | null,
+): Promise<void> {
+  const entry = await localDb().outbox.get(seq);
+  if (!entry) return;
+  await localDb().outbox.update(seq, {
+    attempts: entry.attempts + 1,
+    lastError: error,
+    state: retryAt === null ? 'failed' : 'pending',
+    nextAttemptAt: retryAt ?? 0,
+  });
+}
+
+/** Put failed flights and writes back in the queue so the next run tries them at once. */
+export async function retryFailed(): Promise<void> {
+  const db = localDb();
+  await db.transaction('rw', db.flights, db.outbox, async () => {
+    await db.flights
+      .where('syncState')
+      .equals('failed')
+      .modify({ syncState: 'pending', nextAttemptAt: 0 });
+    await db.outbox.where('state').equals('failed').modify({ state: 'pending', nextAttemptAt: 0 });
+    await db.flights.where('syncState').equals('pending').modify({ nextAttemptAt: 0 });
+    await db.outbox.where('state').equals('pending').modify({ nextAttemptAt: 0 });
+  });
+}
