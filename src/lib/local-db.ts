@@ -33,6 +33,10 @@ export interface LocalFlight {
   /** ms since epoch before which the runner will not try again (back-off). */
   nextAttemptAt: number;
   lastError?: string;
+  /** Hex SHA-256 of `file`, computed once when the flight is first sent. */
+  sha256?: string;
+  /** The server already held the same raw log as another flight; this is that flight's id. */
+  duplicateOf?: string;
 }
 
 export type OutboxMethod = 'PUT' | 'PATCH' | 'POST' | 'DELETE';
@@ -136,12 +140,20 @@ export async function assignLocalFlight(
   });
 }
 
+export async function setLocalFlightHash(id: string, sha256: string): Promise<void> {
+  await localDb().flights.update(id, { sha256 });
+}
+
 export async function markSummarySynced(id: string): Promise<void> {
   await localDb().flights.update(id, { summarySynced: true });
 }
 
-export async function markSynced(id: string): Promise<void> {
+export async function markSynced(
+  id: string,
+  options: { duplicateOf?: string } = {},
+): Promise<void> {
   await localDb().flights.update(id, {
+    ...options,
     syncState: 'synced',
     summarySynced: true,
     syncedAt: Date.now(),

@@ -7,8 +7,10 @@ import {
   markSynced,
   removeOutboxEntry,
   assignLocalFlight,
+  setLocalFlightHash,
   type LocalFlight,
 } from '../../lib/local-db';
+import type { FlightPutInput } from '../../../shared/schemas/flights';
 import { flightPath, flightRawPath } from './sync-paths';
 
 /**
@@ -33,6 +35,8 @@ export interface SyncPassResult {
   refused: number;
   /** Items that will be tried again later. */
   deferred: number;
+  /** Flights that cannot go until someone picks their team and aircraft. */
+  waiting: number;
   stoppedBy: StopReason;
   /** Earliest time a deferred item is due, ms since epoch; null when nothing waits. */
   nextRetryAt: number | null;
@@ -47,7 +51,7 @@ export function backoffDelayMs(attempts: number): number {
 }
 
 type Outcome =
-  | { kind: 'ok' }
+  | { kind: 'ok'; body?: unknown }
   | { kind: 'offline'; message: string }
   | { kind: 'signed-out' }
   | { kind: 'transient'; message: string }
@@ -60,7 +64,7 @@ async function send(deps: SyncDeps, path: string, init: RequestInit): Promise<Ou
   } catch (error) {
     return { kind: 'offline', message: error instanceof Error ? error.message : String(error) };
   }
-  if (response.ok) return { kind: 'ok' };
+  if (response.ok) return { kind: 'ok', body: await response.json().catch(() => undefined) };
   if (response.status === 401) return { kind: 'signed-out' };
   const message = await errorMessage(response);
   // Time-outs, rate limits and server faults pass; other 4xx answers will not change by asking again.
@@ -80,25 +84,49 @@ async function errorMessage(response: Response): Promise<string> {
   return `${response.status}: ${response.statusText || 'request failed'}`;
 }
 
-function flightBody(flight: LocalFlight, teamId: string) {
+/** Hex SHA-256 of the raw log as dropped; the server uses it to spot the same file twice. */
+export async function sha256Hex(blob: Blob): Promise<string> {
+  const digest = await crypto.subtle.digest('SHA-256', await blob.arrayBuffer());
+  return Array.from(new Uint8Array(digest), (b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+function flightBody(
+  flight: LocalFlight,
+  target: { teamId: string; aircraftId: string },
+  sha256: string,
+): FlightPutInput {
   return {
-    teamId,
-    aircraftId: flight.aircraftId ?? null,
+    ...target,
+    // A log without a recorded time is dated when it was read on this device.
+    recordedAt: flight.recordedAt ?? new Date(flight.savedAt).toISOString(),
     fileName: flight.fileName,
-    recordedAt: flight.recordedAt ?? null,
+    sha256,
+    sizeBytes: flight.file.size,
     report: flight.report,
     detail: flight.detail,
   };
 }
 
-async function pushFlight(deps: SyncDeps, flight: LocalFlight, teamId: string): Promise<Outcome> {
+type FlightOutcome = Outcome | { kind: 'duplicate'; of: string };
+
+async function pushFlight(
+  deps: SyncDeps,
+  flight: LocalFlight,
+  target: { teamId: string; aircraftId: string },
+): Promise<FlightOutcome> {
   if (!flight.summarySynced) {
+    const sha256 = flight.sha256 ?? (await sha256Hex(flight.file));
+    if (!flight.sha256) await setLocalFlightHash(flight.id, sha256);
     const outcome = await send(deps, flightPath(flight.id), {
       method: 'PUT',
       headers: { 'Content-Type': 'application/json', Accept: 'application/json' },
-      body: JSON.stringify(flightBody(flight, teamId)),
+      body: JSON.stringify(flightBody(flight, target, sha256)),
     });
     if (outcome.kind !== 'ok') return outcome;
+    const answer = outcome.body as { outcome?: string; flight?: { id?: string } } | undefined;
+    // The same bytes are stored already as another flight: nothing more to send.
+    if (answer?.outcome === 'duplicate' && answer.flight?.id && answer.flight.id !== flight.id)
+      return { kind: 'duplicate', of: answer.flight.id };
     await markSummarySynced(flight.id);
   }
   const form = new FormData();
@@ -112,6 +140,7 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
     writesSent: 0,
     refused: 0,
     deferred: 0,
+    waiting: 0,
     stoppedBy: null,
     nextRetryAt: null,
   };
@@ -127,13 +156,17 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
       continue;
     }
     const teamId = flight.teamId ?? deps.defaultTeamId();
-    if (!teamId) continue; // waits until the user belongs to a team
+    // The server files every flight under an aircraft; an "unknown quad" waits for the pilot.
+    if (!teamId || !flight.aircraftId) {
+      result.waiting += 1;
+      continue;
+    }
     if (!flight.teamId)
       await assignLocalFlight(flight.id, { teamId, aircraftId: flight.aircraftId });
 
-    const outcome = await pushFlight(deps, flight, teamId);
-    if (outcome.kind === 'ok') {
-      await markSynced(flight.id);
+    const outcome = await pushFlight(deps, flight, { teamId, aircraftId: flight.aircraftId });
+    if (outcome.kind === 'ok' || outcome.kind === 'duplicate') {
+      await markSynced(flight.id, outcome.kind === 'duplicate' ? { duplicateOf: outcome.of } : {});
       result.flightsSynced += 1;
     } else if (outcome.kind === 'offline' || outcome.kind === 'signed-out') {
       result.stoppedBy = outcome.kind === 'offline' ? 'offline' : 'signed-out';

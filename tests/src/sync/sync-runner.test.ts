@@ -13,6 +13,7 @@ import { sampleDetail, sampleFile, sampleReport } from '../helpers/flight-fixtur
 
 const TEAM = '11111111-1111-4111-8111-111111111111';
 const FLIGHT = '22222222-2222-4222-8222-222222222222';
+const AIRCRAFT = '33333333-3333-4333-8333-333333333333';
 
 interface Call {
   method: string;
@@ -46,13 +47,15 @@ function deps(server: ReturnType<typeof fakeServer>, now = 1_000_000): SyncDeps 
   return { fetch: server.fetch, now: () => now, defaultTeamId: () => TEAM };
 }
 
-async function saveFlight() {
+async function saveFlight(aircraftId: string | null = AIRCRAFT) {
   await saveLocalFlight({
     id: FLIGHT,
     fileName: 'heron-hover.csv',
-    file: sampleFile(),
+    file: sampleFile('abc'),
     report: sampleReport(),
     detail: sampleDetail(),
+    ...(aircraftId ? { aircraftId } : {}),
+    recordedAt: '2026-04-12T09:30:00.000Z',
   });
 }
 
@@ -78,7 +81,15 @@ describe('sync pass', () => {
       'PATCH /api/comments/c1',
     ]);
     // A flight imported signed out lands in the active team.
-    expect((server.calls[0]?.body as { teamId: string }).teamId).toBe(TEAM);
+    expect(server.calls[0]?.body).toMatchObject({
+      teamId: TEAM,
+      aircraftId: AIRCRAFT,
+      recordedAt: '2026-04-12T09:30:00.000Z',
+      fileName: 'heron-hover.csv',
+      // SHA-256("abc") from the FIPS 180-2 example (appendix B.1).
+      sha256: 'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad',
+      sizeBytes: 3,
+    });
     expect(result).toMatchObject({ flightsSynced: 1, writesSent: 2, stoppedBy: null });
     expect((await getLocalFlight(FLIGHT))?.syncState).toBe('synced');
     expect(await listOutbox()).toEqual([]);
@@ -167,6 +178,27 @@ describe('sync pass', () => {
     const result = await runSyncPass(deps(server));
     expect(result.stoppedBy).toBe('signed-out');
     expect((await getLocalFlight(FLIGHT))?.syncState).toBe('pending');
+  });
+
+  it('holds a flight with no aircraft until the pilot picks one', async () => {
+    await saveFlight(null);
+    const server = fakeServer(() => json(200, {}));
+    const result = await runSyncPass(deps(server));
+    expect(result.waiting).toBe(1);
+    expect(server.calls).toEqual([]);
+    expect((await getLocalFlight(FLIGHT))?.syncState).toBe('pending');
+  });
+
+  it('skips the raw upload when the server already holds the same file as another flight', async () => {
+    await saveFlight();
+    const other = '44444444-4444-4444-8444-444444444444';
+    const server = fakeServer(() => json(200, { outcome: 'duplicate', flight: { id: other } }));
+    const result = await runSyncPass(deps(server));
+    expect(result.flightsSynced).toBe(1);
+    expect(server.calls).toHaveLength(1);
+    const stored = await getLocalFlight(FLIGHT);
+    expect(stored?.syncState).toBe('synced');
+    expect(stored?.duplicateOf).toBe(other);
   });
 
   it('backs off exponentially up to five minutes', () => {
