@@ -79,10 +79,7 @@ export const FlightReport = z.object({
     asymmetryPct: z.number(),
   }),
   cg: z.object({ xMm: z.number(), yMm: z.number() }).nullable(),
-  vibration: z.record(
-    z.string(),
-    z.object({ bandRms: z.number(), peaks: z.array(Peak).max(8) }),
-  ),
+  vibration: z.record(z.string(), z.object({ bandRms: z.number(), peaks: z.array(Peak).max(8) })),
   power: z
     .object({
       cells: z.number().int(),
@@ -102,9 +99,7 @@ export const FlightReport = z.object({
     escPeakA: z.number().nullable(),
     escOverS: z.number(),
   }),
-  tracking: z
-    .object({ roll: AxisTracking, pitch: AxisTracking, yaw: AxisTracking })
-    .nullable(),
+  tracking: z.object({ roll: AxisTracking, pitch: AxisTracking, yaw: AxisTracking }).nullable(),
   findings: z.array(Finding),
 });
 export type FlightReport = z.infer<typeof FlightReport>;

@@ -1,0 +1,195 @@
+import { allocationMatrix, expectedHoverShares, mixerMatrix } from '../airframe/allocation';
+import { multiply } from '../airframe/linear-algebra';
+import type { Column } from '../log/types';
+import type { Airframe } from '../schemas/airframe';
+import type { Ranges } from './segments';
+
+export interface HoverMeans {
+  /** Mean output per motor over hover, 0–1. */
+  output: number[];
+  /** Mean of output^γ per motor. */
+  outputPow: number[];
+  /** Mean rpm² per motor, when every motor's rpm is logged. */
+  rpmSq: number[] | null;
+}
+
+/** Per-motor hover means (γ = the airframe's thrust exponent, default 2). */
+export function hoverMeans(
+  motors: readonly Column[],
+  rpms: readonly Column[] | null,
+  hover: Ranges,
+  gamma: number,
+): HoverMeans {
+  const output: number[] = [];
+  const outputPow: number[] = [];
+  const rpmSq: number[] | null = rpms ? [] : null;
+  let n = 0;
+  for (const [a, b] of hover) n += b - a;
+  motors.forEach((m, i) => {
+    let s = 0;
+    let sp = 0;
+    let sr = 0;
+    const r = rpms?.[i];
+    for (const [a, b] of hover) {
+      for (let k = a; k < b; k++) {
+        const u = Math.max(0, m[k]!);
+        s += u;
+        sp += gamma === 2 ? u * u : u ** gamma;
+        if (r) sr += r[k]! * r[k]!;
+      }
+    }
+    output.push(n ? s / n : NaN);
+    outputPow.push(n ? sp / n : NaN);
+    rpmSq?.push(n ? sr / n : NaN);
+  });
+  return { output, outputPow, rpmSq };
+}
+
+const normalise = (v: number[]) => {
+  const s = v.reduce((a, b) => a + b, 0);
+  return v.map((x) => (s > 0 ? x / s : NaN));
+};
+
+export interface BalanceResult {
+  expectedShare: number[];
+  measuredShare: number[];
+  deviationPct: number[];
+  /** Shares of hover output^γ (what the diagnosis reads: a weak motor shows in its output). */
+  outputShare: number[];
+  proxy: 'rpm' | 'output';
+  cwShare: number;
+  ccwShare: number;
+  asymmetryPct: number;
+  /** cw − ccw of the expected shares, % (0 for a symmetric frame). */
+  expectedAsymmetryPct: number;
+  cg: { xMm: number; yMm: number };
+}
+
+/**
+ * Balance, torque split and CG from hover means (PRODUCT.md §7 definitions). Measured shares
+ * use rpm² when logged (propeller law), output^γ otherwise; deviation compares each motor's
+ * mean output with the output that delivers its expected share at the measured total.
+ */
+export function analyseBalance(airframe: Airframe, means: HoverMeans): BalanceResult {
+  const gamma = airframe.thrustExponent ?? 2;
+  const expectedShare = expectedHoverShares(airframe);
+  const proxyValues = means.rpmSq ?? means.outputPow;
+  const measuredShare = normalise(proxyValues);
+  const outputShare = normalise(means.outputPow);
+  const totalPow = means.outputPow.reduce((a, b) => a + b, 0);
+  const deviationPct = means.output.map((u, i) => {
+    const expectedOut = (expectedShare[i]! * totalPow) ** (1 / gamma);
+    return (u / expectedOut - 1) * 100;
+  });
+  let cw = 0;
+  let ccw = 0;
+  let ecw = 0;
+  let eccw = 0;
+  let x = 0;
+  let y = 0;
+  airframe.motors.forEach((m, i) => {
+    const s = measuredShare[i] ?? 0;
+    if (m.spin === 'cw') {
+      cw += s;
+      ecw += expectedShare[i]!;
+    } else {
+      ccw += s;
+      eccw += expectedShare[i]!;
+    }
+    x += m.x * s;
+    y += m.y * s;
+  });
+  return {
+    expectedShare,
+    measuredShare,
+    deviationPct,
+    outputShare,
+    proxy: means.rpmSq ? 'rpm' : 'output',
+    cwShare: cw,
+    ccwShare: ccw,
+    asymmetryPct: (cw - ccw) * 100,
+    expectedAsymmetryPct: (ecw - eccw) * 100,
+    cg: { xMm: x, yMm: y },
+  };
+}
+
+export type Pattern = 'cg-offset' | 'weak-motor' | 'spin-set';
+
+export interface PatternFit {
+  pattern: Pattern;
+  /** 1-based motor for weak-motor. */
+  motor?: number;
+  /** Share of the deviation the pattern explains, 0–1. */
+  explained: number;
+}
+
+/** Removes the part of v along s (keeps the shares summing to 1) — changes of shares sum to 0. */
+function toShareChange(v: number[], s: number[]): number[] {
+  const sum = v.reduce((a, b) => a + b, 0);
+  return v.map((x, i) => x - sum * s[i]!);
+}
+
+const dot = (a: number[], b: number[]) => a.reduce((s, x, i) => s + x * b[i]!, 0);
+
+/** Fraction of |d|² explained by projecting d onto span(basis) (Gram–Schmidt), and the coefficient along the first basis vector. */
+function explainedBy(d: number[], basis: number[][]): { r2: number; coef: number } {
+  const ortho: number[][] = [];
+  for (const b of basis) {
+    let v = b.slice();
+    for (const o of ortho) {
+      const c = dot(v, o);
+      v = v.map((x, i) => x - c * o[i]!);
+    }
+    const n = Math.sqrt(dot(v, v));
+    if (n > 1e-12) ortho.push(v.map((x) => x / n));
+  }
+  const dd = dot(d, d);
+  if (dd <= 0) return { r2: 0, coef: 0 };
+  let p = 0;
+  for (const o of ortho) p += dot(d, o) ** 2;
+  const first = basis[0]!;
+  const coef = dot(d, first) / Math.max(1e-300, dot(first, first));
+  return { r2: p / dd, coef };
+}
+
+/**
+ * Which hover pattern explains the motors' output shares best (PRODUCT.md §6): a CG offset
+ * loads a side through the mixer's roll and pitch columns with no yaw part; a weak motor loads
+ * one motor (the mixer's projection of that motor alone, which carries a yaw part); a spin-set
+ * mismatch or tilted motor loads one spin set (the yaw column). Returns every candidate with
+ * the share of the deviation it explains, best first.
+ */
+export function fitPatterns(
+  airframe: Airframe,
+  outputShare: number[],
+  expectedShare: number[],
+): PatternFit[] {
+  const cg = airframe.cg ?? { x: 0, y: 0 };
+  const mixer = mixerMatrix(airframe.motors, cg);
+  const alloc = allocationMatrix(airframe.motors, cg);
+  const n = airframe.motors.length;
+  const column = (j: number) => mixer.map((r) => r[j]!);
+  const d = outputShare.map((v, i) => v - expectedShare[i]!);
+  const fits: PatternFit[] = [];
+  const cgFit = explainedBy(d, [
+    toShareChange(column(1), expectedShare),
+    toShareChange(column(2), expectedShare),
+  ]);
+  fits.push({ pattern: 'cg-offset', explained: cgFit.r2 });
+  const yaw = explainedBy(d, [toShareChange(column(3), expectedShare)]);
+  fits.push({ pattern: 'spin-set', explained: yaw.r2 });
+  // The mixer's response to one motor losing thrust: projection P = mixer·allocation.
+  const proj = multiply(mixer, alloc);
+  let bestMotor: PatternFit | null = null;
+  for (let i = 0; i < n; i++) {
+    const ei = proj.map((r) => r[i]!);
+    const f = explainedBy(d, [toShareChange(ei, expectedShare)]);
+    // A weak motor works harder, so only a positive load on it fits.
+    if (f.coef > 0 && (!bestMotor || f.r2 > bestMotor.explained)) {
+      bestMotor = { pattern: 'weak-motor', motor: i + 1, explained: f.r2 };
+    }
+  }
+  if (bestMotor) fits.push(bestMotor);
+  fits.sort((a, b) => b.explained - a.explained);
+  return fits;
+}

@@ -1,0 +1,99 @@
+import { realFft } from './real-fft';
+import { hannPeriodic, windowFigures } from './window';
+
+export interface WelchOptions {
+  /** Segment length, a power of two. */
+  nperseg: number;
+  /** Samples shared by neighbouring segments; default half a segment (50 % overlap). */
+  noverlap?: number;
+  /** Remove each segment's mean before windowing (scipy's default 'constant'). */
+  detrend?: 'constant' | false;
+  /** 'density': unit²/Hz (default); 'spectrum': unit², a bin-centred sine of amplitude A reads A²/2. */
+  scaling?: 'density' | 'spectrum';
+  /** Sample ranges [start, end) to draw segments from; default the whole signal. */
+  ranges?: readonly (readonly [number, number])[];
+  /** Called with each segment's own one-sided estimate (a scratch buffer: copy what you keep). */
+  onSegment?: (start: number, estimate: Float64Array) => void;
+}
+
+export interface PowerSpectrum {
+  /** Bin frequencies, Hz, 0…fs/2. */
+  hz: Float64Array;
+  /** One-sided estimate per bin in the chosen scaling. */
+  psd: Float64Array;
+  /** Bin spacing, Hz. */
+  df: number;
+  /** Segments averaged; 0 when the signal was shorter than one segment (psd is then all 0). */
+  segments: number;
+}
+
+/**
+ * Welch's averaged modified periodogram (Welch 1967) with a periodic Hann window, one-sided,
+ * the same conventions as scipy.signal.welch: DC and Nyquist bins are not doubled, only whole
+ * segments are used.
+ */
+export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): PowerSpectrum {
+  const n = options.nperseg;
+  const step = n - (options.noverlap ?? n >> 1);
+  if (step <= 0) throw new RangeError('noverlap must be smaller than nperseg');
+  const fft = realFft(n);
+  const w = hannPeriodic(n);
+  const fig = windowFigures(w);
+  const density = (options.scaling ?? 'density') === 'density';
+  const norm = density ? 1 / (fs * fig.sumSq) : 1 / (fig.sum * fig.sum);
+  const half = n >> 1;
+  const bins = half + 1;
+  const acc = new Float64Array(bins);
+  const seg = new Float64Array(n);
+  const pow = new Float64Array(bins);
+  const detrend = (options.detrend ?? 'constant') === 'constant';
+  const ranges = options.ranges ?? [[0, x.length] as const];
+  let count = 0;
+  for (const [r0, r1] of ranges) {
+    for (let s = Math.max(0, r0); s + n <= Math.min(r1, x.length); s += step) {
+      let mean = 0;
+      if (detrend) {
+        for (let i = 0; i < n; i++) mean += x[s + i]!;
+        mean /= n;
+      }
+      for (let i = 0; i < n; i++) seg[i] = (x[s + i]! - mean) * w[i]!;
+      fft.powerSpectrum(seg, pow);
+      for (let k = 0; k < bins; k++) {
+        const scale = k === 0 || k === half ? norm : 2 * norm;
+        const v = pow[k]! * scale;
+        pow[k] = v;
+        acc[k]! += v;
+      }
+      options.onSegment?.(s, pow);
+      count++;
+    }
+  }
+  if (count > 0) for (let k = 0; k < bins; k++) acc[k]! /= count;
+  const hz = new Float64Array(bins);
+  const df = fs / n;
+  for (let k = 0; k < bins; k++) hz[k] = k * df;
+  return { hz, psd: acc, df, segments: count };
+}
+
+/** 10·log10(p), floored at −300 dB so a zero bin stays finite for JSON and charts. */
+export function toDb(p: number): number {
+  return p > 1e-30 ? 10 * Math.log10(p) : -300;
+}
+
+/** RMS in channel units of everything in [fLo, fHi] of a one-sided density (Parseval). */
+export function bandRms(spec: PowerSpectrum, fLo: number, fHi = Infinity): number {
+  let s = 0;
+  for (let k = 0; k < spec.psd.length; k++) {
+    const f = spec.hz[k]!;
+    if (f >= fLo && f <= fHi) s += spec.psd[k]!;
+  }
+  return Math.sqrt(s * spec.df);
+}
+
+/** Segment length giving bins of about 4 Hz (a rotor order at hover spans a few bins), within [64, 4096] and the data. */
+export function chooseSegment(fs: number, available: number): number {
+  let n = 64;
+  while (n < 4096 && fs / n > 4 + 1e-9) n *= 2;
+  while (n > 16 && n > available) n /= 2;
+  return n;
+}
