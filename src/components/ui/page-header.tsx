@@ -1,6 +1,14 @@
 import type { ReactNode } from 'react';
 
-export function PageHeader({ title, lead, actions }: { title: string; lead?: ReactNode; actions?: ReactNode }) {
+export function PageHeader({
+  title,
+  lead,
+  actions,
+}: {
+  title: string;
+  lead?: ReactNode;
+  actions?: ReactNode;
+}) {
   return (
     <div className="mb-6 flex items-end justify-between gap-4">
       <div>
