@@ -18,10 +18,35 @@ export interface LogWarning {
   tS?: number;
 }
 
+/** A stretch of `time` where samples are missing: from `tS` for `durationS` seconds. */
+export interface TimeGap {
+  /** Time of the last sample before the gap, s. */
+  tS: number;
+  /** Length of the step across the gap, s. */
+  durationS: number;
+  /** 1-based file line of the first sample after the gap. */
+  line: number;
+}
+
+/** What the reader learnt about the `time` column. */
+export interface TimeBase {
+  /** Median step between samples, s. */
+  medianStepS: number;
+  /** Steps ≤ 0 (time repeating or running backwards). */
+  nonIncreasingSteps: number;
+  /** Root-mean-square deviation of regular steps (gaps excluded) from the median, as % of it. */
+  jitterPct: number;
+  gaps: TimeGap[];
+}
+
 export interface ParsedLog {
   /** Canonical channel names in file order: 'time', 'motor1', 'gyro_x', … */
   channels: string[];
-  /** One typed column per channel, all of length `rows`. `time` is always present. */
+  /**
+   * One typed column per channel, all of length `rows`. `time` is always present. A column
+   * may be a view on a slightly longer buffer (at most 1/16 spare); use its length, not its
+   * buffer's.
+   */
   columns: Record<string, Column>;
   rows: number;
   sampleRateHz: number;
@@ -29,4 +54,13 @@ export interface ParsedLog {
   /** `# key: value` lines before the header. */
   metadata: Record<string, string>;
   warnings: LogWarning[];
+  /** Unit each channel was written in before conversion, e.g. { gyro_x: 'rad/s' }. */
+  sourceUnits?: Record<string, string>;
+  /** Empty cells per channel (read as NaN); channels with none are left out. */
+  emptyCells?: Record<string, number>;
+  timeBase?: TimeBase;
+  /** 1-based line of the header row. */
+  headerLine?: number;
+  /** Field delimiter detected from the header. */
+  delimiter?: ',' | ';' | '\t';
 }

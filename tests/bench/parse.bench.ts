@@ -1,0 +1,66 @@
+/**
+ * Parse benchmark: our engine against papaparse (dynamic typing) on the same ~150 MB canonical
+ * CSV in the same run. Each parser runs in its own child process so peak memory is its own.
+ * Targets (PRODUCT.md §10): ≥ 250 MB/s, ≥ 10× papaparse, peak RSS ≤ 2.5× the file size.
+ */
+import { execFileSync } from 'node:child_process';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { writeCanonicalCsv } from './fixtures/canonical-csv';
+import type { Bench } from './registry';
+
+interface ChildResult {
+  ms: number;
+  rows: number;
+  maxRssMB: number;
+}
+
+const child = fileURLToPath(new URL('./fixtures/parse-child.ts', import.meta.url));
+
+function run(engine: 'ours' | 'papaparse', file: string): ChildResult {
+  const out = execFileSync(process.execPath, ['--import', 'tsx', child, engine, file], {
+    encoding: 'utf8',
+    maxBuffer: 1 << 20,
+  });
+  return JSON.parse(out.trim().split('\n').pop()!) as ChildResult;
+}
+
+const bench: Bench = async ({ json, dir }) => {
+  const file = join(dir, 'parse-canonical-1.2M.csv');
+  const bytes = writeCanonicalCsv(file);
+  const fileMB = bytes / 1e6;
+  const say = (s: string) => {
+    if (!json) console.log(s);
+  };
+  say(`file: ${file} (${fileMB.toFixed(1)} MB)`);
+  // Warm the page cache and the JIT once so both parsers read the file from memory.
+  run('ours', file);
+  const ours = run('ours', file);
+  const papa = run('papaparse', file);
+  if (ours.rows !== papa.rows) {
+    throw new Error(`row counts differ: ours ${ours.rows}, papaparse ${papa.rows}`);
+  }
+  const parseMBps = fileMB / (ours.ms / 1000);
+  const papaparseMBps = fileMB / (papa.ms / 1000);
+  const ratio = parseMBps / papaparseMBps;
+  const peakRssMB = ours.maxRssMB;
+  say(`rows: ${ours.rows}`);
+  say(
+    `hoverprint: ${parseMBps.toFixed(0)} MB/s (${ours.ms.toFixed(0)} ms), peak RSS ${peakRssMB.toFixed(0)} MB = ${(peakRssMB / fileMB).toFixed(2)}× file (target ≥ 250 MB/s, ≤ 2.5×)`,
+  );
+  say(
+    `papaparse:  ${papaparseMBps.toFixed(1)} MB/s (${papa.ms.toFixed(0)} ms), peak RSS ${papa.maxRssMB.toFixed(0)} MB`,
+  );
+  say(`ratio: ${ratio.toFixed(1)}× (target ≥ 10×)`);
+  return {
+    fileMB: round(fileMB, 1),
+    parseMBps: round(parseMBps, 1),
+    papaparseMBps: round(papaparseMBps, 1),
+    ratio: round(ratio, 2),
+    peakRssMB: round(peakRssMB, 1),
+  };
+};
+
+const round = (v: number, d: number) => Math.round(v * 10 ** d) / 10 ** d;
+
+export default bench;
