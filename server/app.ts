@@ -5,13 +5,27 @@ import helmet from 'helmet';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config';
+import { authRouter } from './auth/auth.router';
+import { commentsRouter } from './comments/comments.router';
+import { fleetRouter } from './fleet/fleet.router';
+import { flightsRouter } from './flights/flights.router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { healthRouter } from './http/health.router';
 import { createLogger, requestLogger } from './http/logger';
+import { originCheck } from './http/origin-check';
+import { sessionMiddleware } from './http/session';
+import { devMailRouter } from './mail/dev-mail.router';
+import { createMemoryMailer, type Mailer } from './mail/mailer';
+import { createServices, type Services } from './services';
+import { teamsRouter } from './teams/teams.router';
 
 export interface AppDeps {
   dataSource: DataSource;
   config: Config;
+  /** Outgoing mail; an in-memory one when not given. */
+  mailer?: Mailer;
+  /** Prebuilt services (to share them with demo loading); built from the rest when not given. */
+  services?: Services;
   logger?: Logger;
 }
 
@@ -19,6 +33,8 @@ export interface AppDeps {
 export function createApp(deps: AppDeps): Express {
   const { dataSource, config } = deps;
   const logger = deps.logger ?? createLogger(config);
+  const services =
+    deps.services ?? createServices(dataSource, config, deps.mailer ?? createMemoryMailer());
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy !== undefined) app.set('trust proxy', config.trustProxy);
@@ -37,9 +53,18 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
   app.use(requestLogger(logger));
-  app.use(express.json({ limit: '8mb' }));
+  // A flight PUT carries its report and downsampled review detail (bounded at 6 MB).
+  app.use('/api', express.json({ limit: '8mb' }));
+  app.use('/api', originCheck([config.publicUrl]));
+  app.use('/api', sessionMiddleware(services.auth.lucia));
 
   app.use(healthRouter(dataSource));
+  app.use(authRouter(services, config));
+  app.use(teamsRouter(services));
+  app.use(fleetRouter(services));
+  app.use(flightsRouter(services, config));
+  app.use(commentsRouter(services));
+  if (config.mail.fake) app.use(devMailRouter(services.mailer));
   app.use('/api', apiNotFound);
 
   if (config.env === 'production') {

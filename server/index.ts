@@ -4,6 +4,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig, type Config } from './config';
 import { openDatabase } from './db/data-source';
 import { createLogger } from './http/logger';
+import { startMailer } from './mail/mailer';
 
 export interface RunningServer {
   url: string;
@@ -16,7 +17,8 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const { dataSource, applied } = await openDatabase(config);
   if (applied.length > 0) logger.info({ applied }, 'database migrated');
 
-  const app = createApp({ dataSource, config, logger });
+  const mailer = await startMailer(config.mail, logger);
+  const app = createApp({ dataSource, config, logger, mailer });
   const server = app.listen(config.port, config.host);
   await new Promise<void>((resolveListen, rejectListen) => {
     server.once('listening', resolveListen);
@@ -33,6 +35,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         server.close(() => r());
         server.closeIdleConnections();
       });
+      await mailer.close();
       if (dataSource.isInitialized) await dataSource.destroy();
     })());
   return { url, close };

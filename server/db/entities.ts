@@ -1,5 +1,28 @@
-import type { MixedList, EntitySchema } from 'typeorm';
+import { PasswordReset } from '../auth/password-reset.entity';
+import { Session } from '../auth/session.entity';
+import { User } from '../auth/user.entity';
+import { Comment } from '../comments/comment.entity';
+import { Aircraft } from '../fleet/aircraft.entity';
+import { BenchRun } from '../fleet/bench-run.entity';
+import { ServiceEntry } from '../fleet/service-entry.entity';
+import { Flight } from '../flights/flight.entity';
+import { ImportPreset } from '../presets/preset.entity';
+import { Invite } from '../teams/invite.entity';
+import { Membership } from '../teams/membership.entity';
+import { Team } from '../teams/team.entity';
 
 /** Every TypeORM entity, listed by hand (no globs: tsx and Vite do not resolve them). */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const entities: MixedList<(new () => unknown) | EntitySchema<any>> = [];
+export const entities = [
+  User,
+  Session,
+  PasswordReset,
+  Team,
+  Membership,
+  Invite,
+  Aircraft,
+  ServiceEntry,
+  BenchRun,
+  Flight,
+  Comment,
+  ImportPreset,
+];

@@ -1,0 +1,95 @@
+import { Router } from 'express';
+import { paths } from '../../shared/api/paths';
+import {
+  AircraftInput,
+  AircraftPatch,
+  BenchRunInput,
+  ServiceEntryInput,
+  type Aircraft,
+  type AircraftList,
+  type BenchRun,
+  type BenchRunList,
+  type ServiceEntry,
+  type ServiceLog,
+  type Trends,
+} from '../../shared/schemas/aircraft';
+import { IdParam, TeamIdParam } from '../../shared/schemas/common';
+import { requireUser } from '../http/session';
+import type { Services } from '../services';
+
+export function fleetRouter({ fleet }: Services) {
+  const router = Router();
+
+  router.get(paths.teamAircraft, async (req, res) => {
+    const user = requireUser(req);
+    res.json({
+      aircraft: await fleet.list(user.id, TeamIdParam.parse(req.params).teamId),
+    } satisfies AircraftList);
+  });
+  router.post(paths.teamAircraft, async (req, res) => {
+    const user = requireUser(req);
+    const { teamId } = TeamIdParam.parse(req.params);
+    res
+      .status(201)
+      .json(
+        (await fleet.create(user.id, teamId, AircraftInput.parse(req.body))) satisfies Aircraft,
+      );
+  });
+  router.get(paths.aircraft, async (req, res) => {
+    const user = requireUser(req);
+    res.json((await fleet.get(user.id, IdParam.parse(req.params).id)) satisfies Aircraft);
+  });
+  router.patch(paths.aircraft, async (req, res) => {
+    const user = requireUser(req);
+    const { id } = IdParam.parse(req.params);
+    res.json((await fleet.update(user.id, id, AircraftPatch.parse(req.body))) satisfies Aircraft);
+  });
+  router.delete(paths.aircraft, async (req, res) => {
+    const user = requireUser(req);
+    await fleet.remove(user.id, IdParam.parse(req.params).id);
+    res.status(204).end();
+  });
+
+  router.get(paths.serviceLog, async (req, res) => {
+    const user = requireUser(req);
+    res.json({
+      entries: await fleet.serviceLog(user.id, IdParam.parse(req.params).id),
+    } satisfies ServiceLog);
+  });
+  router.post(paths.serviceLog, async (req, res) => {
+    const user = requireUser(req);
+    const { id } = IdParam.parse(req.params);
+    res
+      .status(201)
+      .json(
+        (await fleet.addServiceEntry(
+          user.id,
+          id,
+          ServiceEntryInput.parse(req.body),
+        )) satisfies ServiceEntry,
+      );
+  });
+
+  router.get(paths.benchRuns, async (req, res) => {
+    const user = requireUser(req);
+    res.json({
+      runs: await fleet.benchRuns(user.id, IdParam.parse(req.params).id),
+    } satisfies BenchRunList);
+  });
+  router.post(paths.benchRuns, async (req, res) => {
+    const user = requireUser(req);
+    const { id } = IdParam.parse(req.params);
+    res
+      .status(201)
+      .json(
+        (await fleet.addBenchRun(user.id, id, BenchRunInput.parse(req.body))) satisfies BenchRun,
+      );
+  });
+
+  router.get(paths.trends, async (req, res) => {
+    const user = requireUser(req);
+    res.json((await fleet.trends(user.id, IdParam.parse(req.params).id)) satisfies Trends);
+  });
+
+  return router;
+}

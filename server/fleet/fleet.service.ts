@@ -1,0 +1,276 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource } from 'typeorm';
+import type {
+  Aircraft as AircraftDto,
+  AircraftPatch,
+  BenchRun as BenchRunDto,
+  ServiceEntry as ServiceEntryDto,
+  ServiceKind,
+  TrendPoint,
+  Trends,
+} from '../../shared/schemas/aircraft';
+import { AircraftInput, BenchRunInput, ServiceEntryInput } from '../../shared/schemas/aircraft';
+import type { Role } from '../../shared/schemas/common';
+import { User } from '../auth/user.entity';
+import { BadRequestError, NotFoundError } from '../http/errors';
+import { Flight } from '../flights/flight.entity';
+import { severityName } from '../flights/flight-summary';
+import type { Action } from '../teams/permissions';
+import type { TeamsService } from '../teams/teams.service';
+import { iso } from '../util';
+import { Aircraft } from './aircraft.entity';
+import { BenchRun } from './bench-run.entity';
+import { ServiceEntry } from './service-entry.entity';
+
+export class FleetService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly teams: TeamsService,
+  ) {}
+
+  /** Loads an aircraft and checks the caller may do `action` in its team (404 for outsiders). */
+  async access(
+    userId: string,
+    aircraftId: string,
+    action: Action,
+  ): Promise<{ aircraft: Aircraft; role: Role }> {
+    const aircraft = await this.ds.getRepository(Aircraft).findOneBy({ id: aircraftId });
+    if (!aircraft) throw new NotFoundError('Aircraft');
+    const role = await this.teams
+      .authorize(userId, aircraft.teamId, action)
+      .catch((err: unknown) => {
+        if (err instanceof NotFoundError) throw new NotFoundError('Aircraft');
+        throw err;
+      });
+    return { aircraft, role };
+  }
+
+  private async toDtos(rows: Aircraft[]): Promise<AircraftDto[]> {
+    if (rows.length === 0) return [];
+    const ids = rows.map((a) => a.id);
+    const stats = await this.ds
+      .getRepository(Flight)
+      .createQueryBuilder('f')
+      .select('f.aircraftId', 'aircraftId')
+      .addSelect('COUNT(*)', 'flightCount')
+      .addSelect("SUM(CASE WHEN f.reviewState = 'requested' THEN 1 ELSE 0 END)", 'awaiting')
+      .where('f.aircraftId IN (:...ids)', { ids })
+      .groupBy('f.aircraftId')
+      .getRawMany<{ aircraftId: string; flightCount: number; awaiting: number }>();
+    const byId = new Map(stats.map((s) => [s.aircraftId, s]));
+    const out: AircraftDto[] = [];
+    for (const a of rows) {
+      const last = await this.ds.getRepository(Flight).findOne({
+        where: { aircraftId: a.id },
+        order: { recordedAt: 'DESC', id: 'DESC' },
+        select: {
+          id: true,
+          recordedAt: true,
+          worstSeverity: true,
+          noteCount: true,
+          watchCount: true,
+          actCount: true,
+        },
+      });
+      const s = byId.get(a.id);
+      out.push({
+        id: a.id,
+        teamId: a.teamId,
+        name: a.name,
+        airframe: a.airframe,
+        components: a.components,
+        notes: a.notes,
+        flightCount: Number(s?.flightCount ?? 0),
+        awaitingReview: Number(s?.awaiting ?? 0),
+        lastFlight: last
+          ? {
+              id: last.id,
+              recordedAt: iso(last.recordedAt),
+              worstSeverity: severityName(last.worstSeverity),
+              findingCount: last.noteCount + last.watchCount + last.actCount,
+            }
+          : null,
+        createdAt: iso(a.createdAt),
+        updatedAt: iso(a.updatedAt),
+      });
+    }
+    return out;
+  }
+
+  async list(userId: string, teamId: string): Promise<AircraftDto[]> {
+    await this.teams.authorize(userId, teamId, 'team.read');
+    const rows = await this.ds
+      .getRepository(Aircraft)
+      .find({ where: { teamId }, order: { name: 'ASC' } });
+    return this.toDtos(rows);
+  }
+
+  async create(userId: string, teamId: string, input: AircraftInput): Promise<AircraftDto> {
+    await this.teams.authorize(userId, teamId, 'aircraft.create');
+    const parsed = AircraftInput.parse(input);
+    const now = Date.now();
+    const aircraft: Aircraft = {
+      id: randomUUID(),
+      teamId,
+      ...parsed,
+      createdAt: now,
+      updatedAt: now,
+    };
+    await this.ds.getRepository(Aircraft).insert(aircraft);
+    return (await this.toDtos([aircraft]))[0]!;
+  }
+
+  async get(userId: string, id: string): Promise<AircraftDto> {
+    const { aircraft } = await this.access(userId, id, 'team.read');
+    return (await this.toDtos([aircraft]))[0]!;
+  }
+
+  async update(userId: string, id: string, patch: AircraftPatch): Promise<AircraftDto> {
+    const { aircraft } = await this.access(userId, id, 'aircraft.update');
+    const next: Aircraft = { ...aircraft, ...patch, updatedAt: Date.now() };
+    await this.ds
+      .getRepository(Aircraft)
+      .update(
+        { id },
+        {
+          name: next.name,
+          airframe: next.airframe,
+          components: next.components,
+          notes: next.notes,
+          updatedAt: next.updatedAt,
+        },
+      );
+    return (await this.toDtos([next]))[0]!;
+  }
+
+  /** Deletes the aircraft with its flights, comments, service log and bench runs. */
+  async remove(userId: string, id: string): Promise<void> {
+    await this.access(userId, id, 'aircraft.delete');
+    await this.ds.getRepository(Aircraft).delete({ id });
+  }
+
+  async serviceLog(userId: string, aircraftId: string): Promise<ServiceEntryDto[]> {
+    await this.access(userId, aircraftId, 'team.read');
+    const rows = await this.ds
+      .getRepository(ServiceEntry)
+      .createQueryBuilder('e')
+      .innerJoin(User, 'u', 'u.id = e.byId')
+      .select('e')
+      .addSelect('u.name', 'byName')
+      .where('e.aircraftId = :aircraftId', { aircraftId })
+      .orderBy('e.date', 'DESC')
+      .addOrderBy('e.createdAt', 'DESC')
+      .getRawAndEntities();
+    return rows.entities.map((e, k) =>
+      this.serviceDto(e, String((rows.raw[k] as { byName: string }).byName)),
+    );
+  }
+
+  private serviceDto(e: ServiceEntry, byName: string): ServiceEntryDto {
+    return {
+      id: e.id,
+      aircraftId: e.aircraftId,
+      date: e.date,
+      kind: e.kind as ServiceKind,
+      motor: e.motor,
+      note: e.note,
+      by: { id: e.byId, name: byName },
+      createdAt: iso(e.createdAt),
+    };
+  }
+
+  async addServiceEntry(
+    userId: string,
+    aircraftId: string,
+    body: ServiceEntryInput,
+  ): Promise<ServiceEntryDto> {
+    const { aircraft } = await this.access(userId, aircraftId, 'serviceLog.create');
+    const input = ServiceEntryInput.parse(body);
+    if (input.motor !== undefined && input.motor > aircraft.airframe.motors.length) {
+      throw new BadRequestError(
+        `${aircraft.name} has ${aircraft.airframe.motors.length} motors; there is no motor ${input.motor}.`,
+      );
+    }
+    const entry: ServiceEntry = {
+      id: randomUUID(),
+      aircraftId,
+      date: input.date,
+      kind: input.kind,
+      motor: input.motor ?? null,
+      note: input.note,
+      byId: userId,
+      createdAt: Date.now(),
+    };
+    await this.ds.getRepository(ServiceEntry).insert(entry);
+    const by = await this.ds.getRepository(User).findOneByOrFail({ id: userId });
+    return this.serviceDto(entry, by.name);
+  }
+
+  async benchRuns(userId: string, aircraftId: string): Promise<BenchRunDto[]> {
+    await this.access(userId, aircraftId, 'team.read');
+    const rows = await this.ds
+      .getRepository(BenchRun)
+      .createQueryBuilder('b')
+      .innerJoin(User, 'u', 'u.id = b.byId')
+      .select('b')
+      .addSelect('u.name', 'byName')
+      .where('b.aircraftId = :aircraftId', { aircraftId })
+      .orderBy('b.date', 'DESC')
+      .addOrderBy('b.createdAt', 'DESC')
+      .getRawAndEntities();
+    return rows.entities.map((b, k) =>
+      this.benchDto(b, String((rows.raw[k] as { byName: string }).byName)),
+    );
+  }
+
+  private benchDto(b: BenchRun, byName: string): BenchRunDto {
+    return {
+      id: b.id,
+      aircraftId: b.aircraftId,
+      date: b.date,
+      motor: b.motor,
+      prop: b.prop,
+      note: b.note,
+      rows: b.rows,
+      by: { id: b.byId, name: byName },
+      createdAt: iso(b.createdAt),
+    };
+  }
+
+  async addBenchRun(userId: string, aircraftId: string, body: BenchRunInput): Promise<BenchRunDto> {
+    await this.access(userId, aircraftId, 'benchRuns.create');
+    const input = BenchRunInput.parse(body);
+    const run: BenchRun = {
+      id: randomUUID(),
+      aircraftId,
+      date: input.date,
+      motor: input.motor,
+      prop: input.prop,
+      note: input.note,
+      rows: input.rows,
+      byId: userId,
+      createdAt: Date.now(),
+    };
+    await this.ds.getRepository(BenchRun).insert(run);
+    const by = await this.ds.getRepository(User).findOneByOrFail({ id: userId });
+    return this.benchDto(run, by.name);
+  }
+
+  /** Per-flight trend points, oldest first, read from the small trend JSON stored with each flight. */
+  async trends(userId: string, aircraftId: string, limit = 500): Promise<Trends> {
+    await this.access(userId, aircraftId, 'team.read');
+    const rows = await this.ds.getRepository(Flight).find({
+      where: { aircraftId },
+      order: { recordedAt: 'DESC', id: 'DESC' },
+      take: limit,
+      select: { id: true, recordedAt: true, trend: true, worstSeverity: true },
+    });
+    const points: TrendPoint[] = rows.reverse().map((f) => ({
+      ...(JSON.parse(f.trend) as Omit<TrendPoint, 'flightId' | 'recordedAt' | 'worstSeverity'>),
+      flightId: f.id,
+      recordedAt: iso(f.recordedAt),
+      worstSeverity: severityName(f.worstSeverity),
+    }));
+    return { aircraftId, points };
+  }
+}

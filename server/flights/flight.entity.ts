@@ -1,0 +1,60 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
+import { User } from '../auth/user.entity';
+import { Aircraft } from '../fleet/aircraft.entity';
+import { Team } from '../teams/team.entity';
+
+/**
+ * One flight log and its analysis. The id is the client's UUID. The report is kept as JSON with
+ * its schema version; the columns beside it are what lists filter and sort on.
+ */
+@Entity('flights')
+// The team's flight list, newest first, with the id as tie-breaker for the cursor.
+@Index('idx_flights_team_recorded', ['teamId', 'recordedAt', 'id'])
+@Index('idx_flights_aircraft_recorded', ['aircraftId', 'recordedAt', 'id'])
+@Index('idx_flights_team_pilot_recorded', ['teamId', 'pilotId', 'recordedAt'])
+@Index('idx_flights_team_sha256', ['teamId', 'sha256'])
+export class Flight {
+  @PrimaryColumn('text') id!: string;
+  @Column('text') teamId!: string;
+  @ManyToOne(() => Team, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'teamId' })
+  team?: Team;
+  @Column('text') aircraftId!: string;
+  @ManyToOne(() => Aircraft, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'aircraftId' })
+  aircraft?: Aircraft;
+  /** Who uploaded it. */
+  @Column('text') pilotId!: string;
+  @ManyToOne(() => User)
+  @JoinColumn({ name: 'pilotId' })
+  pilot?: User;
+  /** Unix ms. */
+  @Column('integer') recordedAt!: number;
+  @Column('real') durationS!: number;
+  @Column('real') sampleRateHz!: number;
+  @Column('text') fileName!: string;
+  @Column('text') sha256!: string;
+  @Column('integer', { nullable: true }) sizeBytes!: number | null;
+  /** Storage key of the raw log, once uploaded. */
+  @Column('text', { nullable: true }) rawKey!: string | null;
+  @Column('boolean', { default: false }) rawGzip!: boolean;
+  @Column('integer') reportVersion!: number;
+  /** FlightReport JSON. */
+  @Column('text') report!: string;
+  /** ReviewDetail JSON (downsampled traces and spectra), optional. */
+  @Column('text', { nullable: true }) detail!: string | null;
+  /** TrendPoint fields extracted from the report, so trends never parse whole reports. */
+  @Column('text') trend!: string;
+  /** 0 none, 1 note, 2 watch, 3 act. */
+  @Column('integer') worstSeverity!: number;
+  @Column('integer') noteCount!: number;
+  @Column('integer') watchCount!: number;
+  @Column('integer') actCount!: number;
+  @Column('integer', { default: 0 }) commentCount!: number;
+  /** Unresolved root comments. */
+  @Column('integer', { default: 0 }) openComments!: number;
+  @Column('text', { default: 'none' }) reviewState!: string;
+  @Column('text', { default: '' }) note!: string;
+  @Column('integer') createdAt!: number;
+  @Column('integer') updatedAt!: number;
+}

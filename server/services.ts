@@ -1,0 +1,47 @@
+import { join } from 'node:path';
+import type { DataSource } from 'typeorm';
+import { AuthService } from './auth/auth.service';
+import { CommentsService } from './comments/comments.service';
+import type { Config } from './config';
+import { FleetService } from './fleet/fleet.service';
+import { FlightsService } from './flights/flights.service';
+import { DiskRawStore, type RawStore } from './flights/raw-store';
+import type { Mailer } from './mail/mailer';
+import { PresetsService } from './presets/presets.service';
+import { TeamsService } from './teams/teams.service';
+import { ThresholdsService } from './teams/thresholds.service';
+
+export interface Services {
+  auth: AuthService;
+  teams: TeamsService;
+  thresholds: ThresholdsService;
+  fleet: FleetService;
+  flights: FlightsService;
+  comments: CommentsService;
+  presets: PresetsService;
+  mailer: Mailer;
+}
+
+/**
+ * Every service, callable without HTTP (demo loading, CLIs, tests). Each method takes the
+ * acting user's id first and checks that user's role itself.
+ */
+export function createServices(
+  dataSource: DataSource,
+  config: Config,
+  mailer: Mailer,
+  rawStore: RawStore = new DiskRawStore(join(config.dataDir, 'raw')),
+): Services {
+  const teams = new TeamsService(dataSource, config, mailer);
+  const flights = new FlightsService(dataSource, config, teams, mailer, rawStore);
+  return {
+    auth: new AuthService(dataSource, config, mailer),
+    teams,
+    thresholds: new ThresholdsService(dataSource, teams),
+    fleet: new FleetService(dataSource, teams),
+    flights,
+    comments: new CommentsService(dataSource, config, flights, mailer),
+    presets: new PresetsService(dataSource, teams),
+    mailer,
+  };
+}

@@ -1,0 +1,146 @@
+import { Router } from 'express';
+import { paths } from '../../shared/api/paths';
+import { MemberParam, TeamIdParam, TokenParam, IdParam } from '../../shared/schemas/common';
+import {
+  PresetInput,
+  PresetPatch,
+  type Preset,
+  type PresetList,
+} from '../../shared/schemas/presets';
+import {
+  InviteInput,
+  MemberPatch,
+  TeamInput,
+  TeamPatch,
+  type AcceptInviteResponse,
+  type Invite,
+  type InviteList,
+  type InvitePreview,
+  type Member,
+  type MemberList,
+  type Team,
+  type TeamList,
+} from '../../shared/schemas/teams';
+import { ThresholdsInput, type TeamThresholds } from '../../shared/schemas/thresholds';
+import { requireUser } from '../http/session';
+import type { Services } from '../services';
+
+export function teamsRouter({ teams, thresholds, presets }: Services) {
+  const router = Router();
+
+  router.get(paths.teams, async (req, res) => {
+    res.json({ teams: await teams.list(requireUser(req).id) } satisfies TeamList);
+  });
+  router.post(paths.teams, async (req, res) => {
+    const user = requireUser(req);
+    res
+      .status(201)
+      .json((await teams.create(user.id, TeamInput.parse(req.body).name)) satisfies Team);
+  });
+  router.get(paths.team, async (req, res) => {
+    const user = requireUser(req);
+    res.json((await teams.get(user.id, TeamIdParam.parse(req.params).teamId)) satisfies Team);
+  });
+  router.patch(paths.team, async (req, res) => {
+    const user = requireUser(req);
+    const { teamId } = TeamIdParam.parse(req.params);
+    res.json((await teams.rename(user.id, teamId, TeamPatch.parse(req.body).name)) satisfies Team);
+  });
+
+  router.get(paths.members, async (req, res) => {
+    const user = requireUser(req);
+    res.json({
+      members: await teams.members(user.id, TeamIdParam.parse(req.params).teamId),
+    } satisfies MemberList);
+  });
+  router.patch(paths.member, async (req, res) => {
+    const actor = requireUser(req);
+    const { teamId, userId } = MemberParam.parse(req.params);
+    res.json(
+      (await teams.setRole(
+        actor.id,
+        teamId,
+        userId,
+        MemberPatch.parse(req.body).role,
+      )) satisfies Member,
+    );
+  });
+  router.delete(paths.member, async (req, res) => {
+    const actor = requireUser(req);
+    const { teamId, userId } = MemberParam.parse(req.params);
+    await teams.removeMember(actor.id, teamId, userId);
+    res.status(204).end();
+  });
+
+  router.get(paths.invites, async (req, res) => {
+    const user = requireUser(req);
+    res.json({
+      invites: await teams.invites(user.id, TeamIdParam.parse(req.params).teamId),
+    } satisfies InviteList);
+  });
+  router.post(paths.invites, async (req, res) => {
+    const user = requireUser(req);
+    const { teamId } = TeamIdParam.parse(req.params);
+    res
+      .status(201)
+      .json((await teams.invite(user.id, teamId, InviteInput.parse(req.body))) satisfies Invite);
+  });
+  /** Shown on the invite page before signing in. */
+  router.get(paths.invite, async (req, res) => {
+    res.json(
+      (await teams.previewInvite(TokenParam.parse(req.params).token)) satisfies InvitePreview,
+    );
+  });
+  router.post(paths.acceptInvite, async (req, res) => {
+    const user = requireUser(req);
+    const team = await teams.acceptInvite(user.id, TokenParam.parse(req.params).token);
+    res.json({ team } satisfies AcceptInviteResponse);
+  });
+
+  router.get(paths.thresholds, async (req, res) => {
+    const user = requireUser(req);
+    res.json(
+      (await thresholds.get(
+        user.id,
+        TeamIdParam.parse(req.params).teamId,
+      )) satisfies TeamThresholds,
+    );
+  });
+  router.put(paths.thresholds, async (req, res) => {
+    const user = requireUser(req);
+    const { teamId } = TeamIdParam.parse(req.params);
+    res.json(
+      (await thresholds.put(
+        user.id,
+        teamId,
+        ThresholdsInput.parse(req.body),
+      )) satisfies TeamThresholds,
+    );
+  });
+
+  router.get(paths.presets, async (req, res) => {
+    const user = requireUser(req);
+    res.json({
+      presets: await presets.list(user.id, TeamIdParam.parse(req.params).teamId),
+    } satisfies PresetList);
+  });
+  router.post(paths.presets, async (req, res) => {
+    const user = requireUser(req);
+    const { teamId } = TeamIdParam.parse(req.params);
+    res
+      .status(201)
+      .json((await presets.create(user.id, teamId, PresetInput.parse(req.body))) satisfies Preset);
+  });
+  router.patch(paths.preset, async (req, res) => {
+    const user = requireUser(req);
+    const { id } = IdParam.parse(req.params);
+    res.json((await presets.update(user.id, id, PresetPatch.parse(req.body))) satisfies Preset);
+  });
+  router.delete(paths.preset, async (req, res) => {
+    const user = requireUser(req);
+    await presets.remove(user.id, IdParam.parse(req.params).id);
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,274 @@
+import { randomUUID } from 'node:crypto';
+import { IsNull, type DataSource } from 'typeorm';
+import type { Role } from '../../shared/schemas/common';
+import type {
+  Invite as InviteDto,
+  InviteInput,
+  InvitePreview,
+  Member,
+  Team as TeamDto,
+} from '../../shared/schemas/teams';
+import { User } from '../auth/user.entity';
+import { hashToken, newToken } from '../auth/tokens';
+import type { Config } from '../config';
+import { BadRequestError, ConflictError, NotFoundError } from '../http/errors';
+import type { Mailer } from '../mail/mailer';
+import { inviteMail } from '../mail/templates';
+import { iso, isoOrNull } from '../util';
+import { Invite } from './invite.entity';
+import { Membership } from './membership.entity';
+import { assertCan, type Action } from './permissions';
+import { Team } from './team.entity';
+
+const INVITE_TTL_MS = 7 * 24 * 60 * 60 * 1000;
+
+export class TeamsService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly config: Pick<Config, 'publicUrl'>,
+    private readonly mailer: Mailer,
+  ) {}
+
+  /** The caller's role in the team; 404 for outsiders so a team's existence does not leak. */
+  async roleIn(userId: string, teamId: string): Promise<Role> {
+    const m = await this.ds
+      .getRepository(Membership)
+      .findOne({ where: { teamId, userId }, select: { role: true } });
+    if (!m) throw new NotFoundError('Team');
+    return m.role as Role;
+  }
+
+  /** Role check in one call: 404 for outsiders, 403 when the role may not do it. */
+  async authorize(userId: string, teamId: string, action: Action): Promise<Role> {
+    const role = await this.roleIn(userId, teamId);
+    assertCan(role, action);
+    return role;
+  }
+
+  private async toDto(teamId: string, role: Role): Promise<TeamDto> {
+    const team = await this.ds.getRepository(Team).findOneBy({ id: teamId });
+    if (!team) throw new NotFoundError('Team');
+    const memberCount = await this.ds.getRepository(Membership).countBy({ teamId });
+    return { id: team.id, name: team.name, role, memberCount, createdAt: iso(team.createdAt) };
+  }
+
+  async list(userId: string): Promise<TeamDto[]> {
+    const rows = await this.ds
+      .getRepository(Membership)
+      .createQueryBuilder('m')
+      .innerJoin(Team, 't', 't.id = m.teamId')
+      .select(['t.id AS id', 't.name AS name', 'm.role AS role', 't.createdAt AS createdAt'])
+      .addSelect(
+        (q) => q.select('COUNT(*)').from(Membership, 'mc').where('mc.teamId = t.id'),
+        'memberCount',
+      )
+      .where('m.userId = :userId', { userId })
+      .orderBy('t.name')
+      .getRawMany<{
+        id: string;
+        name: string;
+        role: Role;
+        createdAt: number;
+        memberCount: number;
+      }>();
+    return rows.map((r) => ({
+      ...r,
+      memberCount: Number(r.memberCount),
+      createdAt: iso(Number(r.createdAt)),
+    }));
+  }
+
+  async create(userId: string, name: string): Promise<TeamDto> {
+    const id = randomUUID();
+    const now = Date.now();
+    await this.ds.transaction(async (em) => {
+      await em
+        .getRepository(Team)
+        .insert({ id, name, thresholds: null, thresholdsUpdatedAt: null, createdAt: now });
+      await em
+        .getRepository(Membership)
+        .insert({ teamId: id, userId, role: 'owner', joinedAt: now });
+    });
+    return this.toDto(id, 'owner');
+  }
+
+  async get(userId: string, teamId: string): Promise<TeamDto> {
+    return this.toDto(teamId, await this.authorize(userId, teamId, 'team.read'));
+  }
+
+  async rename(userId: string, teamId: string, name: string): Promise<TeamDto> {
+    const role = await this.authorize(userId, teamId, 'team.update');
+    await this.ds.getRepository(Team).update({ id: teamId }, { name });
+    return this.toDto(teamId, role);
+  }
+
+  async members(userId: string, teamId: string): Promise<Member[]> {
+    await this.authorize(userId, teamId, 'team.read');
+    const rows = await this.ds
+      .getRepository(Membership)
+      .createQueryBuilder('m')
+      .innerJoin(User, 'u', 'u.id = m.userId')
+      .select([
+        'u.id AS userId',
+        'u.name AS name',
+        'u.email AS email',
+        'm.role AS role',
+        'm.joinedAt AS joinedAt',
+      ])
+      .where('m.teamId = :teamId', { teamId })
+      .orderBy('u.name')
+      .getRawMany<{ userId: string; name: string; email: string; role: Role; joinedAt: number }>();
+    return rows.map((r) => ({ ...r, joinedAt: iso(Number(r.joinedAt)) }));
+  }
+
+  private async owners(teamId: string) {
+    return this.ds.getRepository(Membership).countBy({ teamId, role: 'owner' });
+  }
+
+  async setRole(actorId: string, teamId: string, userId: string, role: Role): Promise<Member> {
+    await this.authorize(actorId, teamId, 'members.manage');
+    const repo = this.ds.getRepository(Membership);
+    const m = await repo.findOneBy({ teamId, userId });
+    if (!m) throw new NotFoundError('Member');
+    if (m.role === 'owner' && role !== 'owner' && (await this.owners(teamId)) <= 1) {
+      throw new ConflictError(
+        'A team needs at least one owner. Make someone else owner first.',
+        'last_owner',
+      );
+    }
+    await repo.update({ teamId, userId }, { role });
+    const member = (await this.members(actorId, teamId)).find((x) => x.userId === userId);
+    if (!member) throw new NotFoundError('Member');
+    return member;
+  }
+
+  /** The owner removes anyone; any member may remove themself (leave). */
+  async removeMember(actorId: string, teamId: string, userId: string): Promise<void> {
+    if (actorId !== userId) await this.authorize(actorId, teamId, 'members.manage');
+    else await this.roleIn(actorId, teamId);
+    const repo = this.ds.getRepository(Membership);
+    const m = await repo.findOneBy({ teamId, userId });
+    if (!m) throw new NotFoundError('Member');
+    if (m.role === 'owner' && (await this.owners(teamId)) <= 1) {
+      throw new ConflictError(
+        'The last owner cannot leave. Make someone else owner first.',
+        'last_owner',
+      );
+    }
+    await repo.delete({ teamId, userId });
+  }
+
+  async invite(actorId: string, teamId: string, input: InviteInput): Promise<InviteDto> {
+    await this.authorize(actorId, teamId, 'invites.manage');
+    const existing = await this.ds
+      .getRepository(Membership)
+      .createQueryBuilder('m')
+      .innerJoin(User, 'u', 'u.id = m.userId')
+      .where('m.teamId = :teamId AND u.email = :email', { teamId, email: input.email })
+      .getCount();
+    if (existing > 0)
+      throw new ConflictError(`${input.email} is already in this team.`, 'already_member');
+    const token = newToken();
+    const now = Date.now();
+    const invite: Invite = {
+      id: randomUUID(),
+      teamId,
+      email: input.email,
+      role: input.role,
+      tokenHash: hashToken(token),
+      invitedById: actorId,
+      expiresAt: now + INVITE_TTL_MS,
+      acceptedAt: null,
+      acceptedById: null,
+      createdAt: now,
+    };
+    await this.ds.getRepository(Invite).insert(invite);
+    const team = await this.ds.getRepository(Team).findOneByOrFail({ id: teamId });
+    const by = await this.ds.getRepository(User).findOneByOrFail({ id: actorId });
+    this.mailer.queue(
+      inviteMail(this.config, {
+        to: input.email,
+        teamName: team.name,
+        role: input.role,
+        invitedBy: by.name,
+        token,
+        expiresAt: new Date(invite.expiresAt),
+      }),
+    );
+    return this.inviteDto(invite, by.name);
+  }
+
+  private inviteDto(i: Invite, invitedBy: string): InviteDto {
+    return {
+      id: i.id,
+      teamId: i.teamId,
+      email: i.email,
+      role: i.role as Role,
+      expiresAt: iso(i.expiresAt),
+      createdAt: iso(i.createdAt),
+      invitedBy,
+      acceptedAt: isoOrNull(i.acceptedAt),
+    };
+  }
+
+  async invites(actorId: string, teamId: string): Promise<InviteDto[]> {
+    await this.authorize(actorId, teamId, 'invites.manage');
+    const rows = await this.ds
+      .getRepository(Invite)
+      .createQueryBuilder('i')
+      .innerJoin(User, 'u', 'u.id = i.invitedById')
+      .select('i')
+      .addSelect('u.name', 'invitedBy')
+      .where('i.teamId = :teamId', { teamId })
+      .orderBy('i.createdAt', 'DESC')
+      .getRawAndEntities();
+    return rows.entities.map((e, k) =>
+      this.inviteDto(e, String((rows.raw[k] as { invitedBy: string }).invitedBy)),
+    );
+  }
+
+  private async openInvite(token: string): Promise<Invite> {
+    const invite = await this.ds.getRepository(Invite).findOneBy({ tokenHash: hashToken(token) });
+    if (!invite || invite.acceptedAt !== null || invite.expiresAt <= Date.now()) {
+      throw new BadRequestError(
+        'This invitation is invalid, already used or expired. Ask for a new one.',
+        'invalid_token',
+      );
+    }
+    return invite;
+  }
+
+  async previewInvite(token: string): Promise<InvitePreview> {
+    const invite = await this.openInvite(token);
+    const team = await this.ds.getRepository(Team).findOneByOrFail({ id: invite.teamId });
+    const by = await this.ds.getRepository(User).findOneByOrFail({ id: invite.invitedById });
+    return {
+      teamName: team.name,
+      role: invite.role as Role,
+      email: invite.email,
+      invitedBy: by.name,
+      expiresAt: iso(invite.expiresAt),
+    };
+  }
+
+  /** Joins the team with the invited role; the link works once. */
+  async acceptInvite(userId: string, token: string): Promise<TeamDto> {
+    const invite = await this.openInvite(token);
+    const already = await this.ds
+      .getRepository(Membership)
+      .findOneBy({ teamId: invite.teamId, userId });
+    if (already) throw new ConflictError('You are already in this team.', 'already_member');
+    const spent = await this.ds
+      .getRepository(Invite)
+      .update(
+        { id: invite.id, acceptedAt: IsNull() },
+        { acceptedAt: Date.now(), acceptedById: userId },
+      );
+    if (!spent.affected)
+      throw new BadRequestError('This invitation was just used.', 'invalid_token');
+    await this.ds
+      .getRepository(Membership)
+      .insert({ teamId: invite.teamId, userId, role: invite.role, joinedAt: Date.now() });
+    return this.toDto(invite.teamId, invite.role as Role);
+  }
+}

@@ -1,0 +1,27 @@
+import { z } from 'zod';
+
+/** Ids are UUIDs; flights and comments get theirs from the client so retries are idempotent. */
+export const Id = z.uuid({ message: 'expected a UUID' });
+export type Id = z.infer<typeof Id>;
+
+export const IdParam = z.object({ id: Id });
+export const TeamIdParam = z.object({ teamId: Id });
+export const MemberParam = z.object({ teamId: Id, userId: Id });
+export const TokenParam = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{20,128}$/, 'malformed token'),
+});
+
+/** ISO 8601 date-time string as the API sends it. */
+export const IsoDateTime = z.iso.datetime({
+  offset: true,
+  message: 'expected an ISO 8601 date-time',
+});
+/** Calendar day, YYYY-MM-DD. */
+export const IsoDate = z.iso.date({ message: 'expected a date as YYYY-MM-DD' });
+
+export const Role = z.enum(['owner', 'tuner', 'pilot', 'coach', 'viewer']);
+export type Role = z.infer<typeof Role>;
+
+/** Who did something, as lists show it. */
+export const UserRef = z.object({ id: Id, name: z.string() });
+export type UserRef = z.infer<typeof UserRef>;

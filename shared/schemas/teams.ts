@@ -1,0 +1,66 @@
+import { z } from 'zod';
+import { Email } from './auth';
+import { Id, IsoDateTime, Role } from './common';
+
+export const TeamName = z.string().trim().min(1, 'enter a team name').max(80);
+
+export const TeamInput = z.object({ name: TeamName });
+export type TeamInput = z.infer<typeof TeamInput>;
+export const TeamPatch = z.object({ name: TeamName });
+export type TeamPatch = z.infer<typeof TeamPatch>;
+
+/** A team as the caller sees it, with the caller's own role in it. */
+export const Team = z.object({
+  id: Id,
+  name: z.string(),
+  role: Role,
+  memberCount: z.number().int(),
+  createdAt: IsoDateTime,
+});
+export type Team = z.infer<typeof Team>;
+export const TeamList = z.object({ teams: z.array(Team) });
+export type TeamList = z.infer<typeof TeamList>;
+
+export const Member = z.object({
+  userId: Id,
+  name: z.string(),
+  email: z.string(),
+  role: Role,
+  joinedAt: IsoDateTime,
+});
+export type Member = z.infer<typeof Member>;
+export const MemberList = z.object({ members: z.array(Member) });
+export type MemberList = z.infer<typeof MemberList>;
+
+export const MemberPatch = z.object({ role: Role });
+export type MemberPatch = z.infer<typeof MemberPatch>;
+
+export const InviteInput = z.object({ email: Email, role: Role });
+export type InviteInput = z.infer<typeof InviteInput>;
+
+export const Invite = z.object({
+  id: Id,
+  teamId: Id,
+  email: z.string(),
+  role: Role,
+  expiresAt: IsoDateTime,
+  createdAt: IsoDateTime,
+  invitedBy: z.string(),
+  acceptedAt: IsoDateTime.nullable(),
+});
+export type Invite = z.infer<typeof Invite>;
+export const InviteList = z.object({ invites: z.array(Invite) });
+export type InviteList = z.infer<typeof InviteList>;
+
+/** What an invite link shows before it is accepted (no sign-in needed). */
+export const InvitePreview = z.object({
+  teamName: z.string(),
+  role: Role,
+  email: z.string(),
+  invitedBy: z.string(),
+  expiresAt: IsoDateTime,
+});
+export type InvitePreview = z.infer<typeof InvitePreview>;
+
+export const AcceptInviteResponse = z.object({ team: Team });
+export type AcceptInviteResponse = z.infer<typeof AcceptInviteResponse>;
