@@ -1,0 +1,346 @@
+import { describe, expect, it } from 'vitest';
+import { G0 } from '../../../shared/airframe/allocation';
+import { presetAirframe } from '../../../shared/airframe/presets';
+import { scenarios, withFaults } from '../../../shared/sim/scenarios';
+import { reactionYawSign, simulate } from '../../../shared/sim/simulate';
+import type { Scenario } from '../../../shared/sim/types';
+import { col, hoverOutputs, hoverRows, hoverThrusts, meanOver, tonePower } from './helpers';
+
+const short = { seconds: 30, rateHz: 500, seed: 7 };
+const run = (s: Scenario, o = short) => simulate(s, o);
+const scenario = (name: string) => {
+  const s = scenarios[name];
+  if (!s) throw new Error(`no scenario ${name}`);
+  return s;
+};
+const clean = run(scenario('clean-quad-x'));
+const cleanOut = hoverOutputs(clean.log, clean.truth);
+
+describe('simulate: the log it returns', () => {
+  it('has the canonical channels as typed columns of equal length', () => {
+    const { log } = clean;
+    expect(log.channels).toEqual([
+      'time',
+      'motor1',
+      'motor2',
+      'motor3',
+      'motor4',
+      'rpm1',
+      'rpm2',
+      'rpm3',
+      'rpm4',
+      'gyro_x',
+      'gyro_y',
+      'gyro_z',
+      'acc_x',
+      'acc_y',
+      'acc_z',
+      'sp_roll',
+      'sp_pitch',
+      'sp_yaw',
+      'throttle',
+      'vbat',
+      'ibat',
+    ]);
+    expect(log.columns.time).toBeInstanceOf(Float64Array);
+    for (const c of log.channels.slice(1)) {
+      expect(log.columns[c]).toBeInstanceOf(Float32Array);
+      expect(log.columns[c]!.length).toBe(log.rows);
+    }
+    expect(log.rows).toBe(30 * 500 + 1);
+    expect(log.durationS).toBe(30);
+    expect(log.sampleRateHz).toBe(500);
+    expect(col(log, 'time')[500]).toBe(1);
+  });
+
+  it('keeps outputs within idle…1 and rpm non-negative, with no NaN anywhere', () => {
+    const { log, truth } = clean;
+    for (const c of log.channels) {
+      expect(log.columns[c]!.every((v) => Number.isFinite(v))).toBe(true);
+    }
+    for (let i = 1; i <= 4; i++) {
+      const m = col(log, `motor${i}`);
+      expect(Math.min(...m)).toBeGreaterThanOrEqual(truth.params.idle - 1e-6);
+      expect(Math.max(...m)).toBeLessThanOrEqual(1);
+      expect(Math.min(...col(log, `rpm${i}`))).toBeGreaterThanOrEqual(0);
+    }
+  });
+
+  it('tiles the flight with the scripted phases, including steady hovers', () => {
+    const { phases } = clean.truth;
+    expect(phases[0]!.t0).toBe(0);
+    expect(phases.at(-1)!.t1).toBe(30);
+    phases.slice(1).forEach((p, i) => expect(p.t0).toBeCloseTo(phases[i]!.t1, 9));
+    const kinds = new Set(phases.map((p) => p.kind));
+    for (const k of ['idle', 'take-off', 'hover', 'roll', 'pitch', 'yaw', 'punch-out', 'landing']) {
+      expect(kinds.has(k as never)).toBe(true);
+    }
+  });
+
+  it('rejects a flight too short for the script, a bad rate, a bad seed and a missing motor', () => {
+    const s = scenario('clean-quad-x');
+    expect(() => simulate(s, { seconds: 5 })).toThrow(/at least 10 s/);
+    expect(() => simulate(s, { seconds: 20, rateHz: 10 })).toThrow(/rate/);
+    expect(() => simulate(s, { seconds: 20, seed: 1.5 })).toThrow(/seed/);
+    expect(() =>
+      simulate(withFaults(s, [{ kind: 'weak-motor', motor: 5, efficiency: 0.9 }]), short),
+    ).toThrow(/motor 5 does not exist/);
+    expect(() =>
+      simulate(withFaults(s, [{ kind: 'weak-motor', motor: 1, efficiency: -1 }]), short),
+    ).toThrow(/efficiency/);
+  });
+});
+
+describe('simulate: physics sanity', () => {
+  it('carries exactly the weight in a steady hover', () => {
+    // Steady hover: Σ T = m·g0 with g0 = 9.80665 m/s² (standard gravity, CGPM 1901).
+    for (const name of ['clean-quad-x', 'hex-clean']) {
+      const { log, truth } = run(scenario(name));
+      const total = hoverThrusts(log, truth).reduce((a, b) => a + b, 0);
+      expect(total / (truth.params.massKg * G0)).toBeCloseTo(1, 2);
+      // Specific force in FRD: thrust pushes along −z, so a hover reads −1 g on acc_z.
+      const az = col(log, 'acc_z');
+      expect(meanOver(hoverRows(log, truth), (r) => az[r]!)).toBeCloseTo(-1, 2);
+    }
+  });
+
+  it('gives a clockwise prop a negative (nose-left) reaction yaw moment', () => {
+    // Newton's third law: the frame turns opposite to the prop (PRODUCT.md §4 sign convention).
+    expect(reactionYawSign('cw')).toBe(-1);
+    expect(reactionYawSign('ccw')).toBe(1);
+  });
+
+  it('holds yaw only when the two spin sets’ reaction torques cancel', () => {
+    // Newton's third law; common practice for paired spin directions: with matched props the
+    // sets share equally, with cw props 10 % torquier the controller slows them until
+    // kQ_cw·ω_cw² = kQ_ccw·ω_ccw², i.e. ω_ccw/ω_cw = √1.1.
+    for (const [name, ratio] of [
+      ['clean-quad-x', 1],
+      ['spin-mismatch', Math.sqrt(1.1)],
+    ] as const) {
+      const { log, truth } = run(scenario(name));
+      const ranges = hoverRows(log, truth);
+      const rpm = [1, 2, 3, 4].map((i) => col(log, `rpm${i}`));
+      const ccw = meanOver(ranges, (r) => rpm[0]![r]! + rpm[2]![r]!);
+      const cw = meanOver(ranges, (r) => rpm[1]![r]! + rpm[3]![r]!);
+      expect(ccw / cw).toBeCloseTo(ratio, 2);
+      // Net reaction torque over the hover ≈ 0, relative to one rotor's torque.
+      const { kQ } = truth.params;
+      const net = meanOver(ranges, (r) =>
+        truth.airframe.motors.reduce(
+          (s, m, i) => s + reactionYawSign(m.spin) * kQ[i]! * rpm[i]![r]! ** 2,
+          0,
+        ),
+      );
+      const one = meanOver(ranges, (r) => kQ[0]! * rpm[0]![r]! ** 2);
+      expect(Math.abs(net / one)).toBeLessThan(0.01);
+      const gz = col(log, 'gyro_z');
+      expect(Math.abs(meanOver(ranges, (r) => gz[r]!))).toBeLessThan(0.5);
+    }
+  });
+
+  it('rolls right by raising the left motors', () => {
+    // Common practice quad-X pattern: a right roll raises motors 3 (rear-left) and 4 (front-left).
+    const { log, truth } = clean;
+    const roll = truth.phases.find((p) => p.kind === 'roll')!;
+    const a = Math.round((roll.t0 + 0.05) * 500);
+    const b = Math.round((roll.t0 + 0.35) * 500);
+    const m = [1, 2, 3, 4].map((i) => col(log, `motor${i}`));
+    const left = meanOver([[a, b]], (r) => m[2]![r]! + m[3]![r]!);
+    const right = meanOver([[a, b]], (r) => m[0]![r]! + m[1]![r]!);
+    expect(left).toBeGreaterThan(right);
+    const gx = col(log, 'gyro_x');
+    expect(meanOver([[a + 50, b + 50]], (r) => gx[r]!)).toBeGreaterThan(10);
+  });
+
+  it('settles an asymmetric frame where the moments about the CG vanish', () => {
+    // PRODUCT.md §4: moments about the CG; REFERENCES.md §5.3: rear/front thrust = 1.2 exactly
+    // for front arms 1.2× the rear.
+    const { log, truth } = run(scenario('wide-front-healthy'));
+    const t = hoverThrusts(log, truth);
+    expect((t[1]! + t[2]!) / (t[0]! + t[3]!)).toBeCloseTo(1.2, 2);
+    const total = t.reduce((a, b) => a + b, 0);
+    const xc = truth.airframe.motors.reduce((s, m, i) => s + m.x * t[i]!, 0) / total;
+    const yc = truth.airframe.motors.reduce((s, m, i) => s + m.y * t[i]!, 0) / total;
+    expect(Math.abs(xc)).toBeLessThan(0.5);
+    expect(Math.abs(yc)).toBeLessThan(0.5);
+    t.forEach((v, i) => expect(v / truth.params.trueHoverThrustN[i]!).toBeCloseTo(1, 2));
+  });
+
+  it('shares the load equally on healthy symmetric hex and octo frames', () => {
+    for (const name of ['hex-clean', 'octo-clean', 'quad-plus', 'stretched-healthy']) {
+      const { log, truth } = run(scenario(name));
+      const t = hoverThrusts(log, truth);
+      const mean = t.reduce((a, b) => a + b, 0) / t.length;
+      t.forEach((v) => expect(v / mean).toBeCloseTo(1, 1));
+    }
+  });
+});
+
+describe('simulate: each fault changes what it should and nothing else', () => {
+  it('a 12 % weaker motor 3 needs 1/√0.88 more output; the others stay put', () => {
+    // Thrust ∝ output² for our motor model, so equal thrust needs output × 1/√0.88.
+    const { log, truth } = run(scenario('weak-motor'));
+    const out = hoverOutputs(log, truth);
+    expect(out[2]! / cleanOut[2]!).toBeCloseTo(1 / Math.sqrt(0.88), 2);
+    expect(Math.abs(out[2]! / cleanOut[2]! - 1 / Math.sqrt(0.88))).toBeLessThan(0.005);
+    for (const i of [0, 1, 3]) expect(Math.abs(out[i]! / cleanOut[i]! - 1)).toBeLessThan(0.004);
+    expect(truth.params.thrustEfficiency).toEqual([1, 1, 0.88, 1]);
+  });
+
+  it('a damaged prop (same fault, prop cause) spins that rotor faster instead', () => {
+    const s = withFaults(scenario('clean-quad-x'), [
+      { kind: 'weak-motor', motor: 1, efficiency: 0.88, cause: 'prop' },
+    ]);
+    const { log, truth } = run(s);
+    const rpm1 = col(log, 'rpm1');
+    const rpm2 = col(log, 'rpm2');
+    const ranges = hoverRows(log, truth);
+    expect(meanOver(ranges, (r) => rpm1[r]! / rpm2[r]!)).toBeCloseTo(1 / Math.sqrt(0.88), 2);
+  });
+
+  it('a CG 15 mm forward loads the front pair, with no yaw part', () => {
+    const { log, truth } = run(scenario('cg-offset'));
+    expect(truth.trueCg).toEqual({ x: 15, y: 0 });
+    const t = hoverThrusts(log, truth);
+    const total = t.reduce((a, b) => a + b, 0);
+    const xc = truth.airframe.motors.reduce((s, m, i) => s + m.x * t[i]!, 0) / total;
+    const yc = truth.airframe.motors.reduce((s, m, i) => s + m.y * t[i]!, 0) / total;
+    expect(Math.abs(xc - 15)).toBeLessThan(1);
+    expect(Math.abs(yc)).toBeLessThan(1);
+    // No yaw part: both spin sets still carry half.
+    expect((t[0]! + t[2]!) / total).toBeCloseTo(0.5, 2);
+  });
+
+  it('an unbalanced rotor shakes the frame without changing the outputs', () => {
+    const { log, truth } = run(scenario('rotor-imbalance'));
+    const out = hoverOutputs(log, truth);
+    out.forEach((v, i) => expect(Math.abs(v / cleanOut[i]! - 1)).toBeLessThan(0.002));
+    const [a, b] = hoverRows(log, truth)[0]!;
+    const rpm2 = col(log, 'rpm2');
+    const hz = meanOver([[a, b]], (r) => rpm2[r]!) / 60;
+    const faulty = tonePower(col(log, 'acc_y'), a, b, hz, 500);
+    const base = tonePower(col(clean.log, 'acc_y'), a, b, hz, 500);
+    expect(faulty / base).toBeGreaterThan(20);
+  });
+
+  it('a frame resonance adds a fixed line and leaves every motor output identical', () => {
+    const opts = { seconds: 30, rateHz: 1000, seed: 3 };
+    const res = simulate(scenario('frame-resonance'), opts);
+    const base = simulate(scenario('clean-quad-x'), opts);
+    for (let i = 1; i <= 4; i++)
+      expect(col(res.log, `motor${i}`)).toEqual(col(base.log, `motor${i}`));
+    const [a, b] = hoverRows(res.log, res.truth)[0]!;
+    const gx = col(res.log, 'gyro_x');
+    const at = (hz: number) => {
+      let s = 0;
+      for (let f = hz - 3; f <= hz + 3; f += 0.5) s += tonePower(gx, a, b, f, 1000);
+      return s;
+    };
+    expect(at(185) / at(140)).toBeGreaterThan(10);
+    expect(res.truth.params.frameResonanceHz).toBe(185);
+  });
+
+  it('a tired pack sags by its larger internal resistance (V = V_oc − I·R)', () => {
+    // REFERENCES.md §10: R = ΔV/ΔI between two current levels close in time.
+    for (const [name, scale] of [
+      ['clean-quad-x', 1],
+      ['tired-battery', 3.5],
+    ] as const) {
+      const { log, truth } = run(scenario(name));
+      const punch = truth.phases.find((p) => p.kind === 'punch-out')!;
+      const v = col(log, 'vbat');
+      const i = col(log, 'ibat');
+      const before = [[Math.round((punch.t0 - 0.6) * 500), Math.round((punch.t0 - 0.1) * 500)]] as [
+        number,
+        number,
+      ][];
+      const during = [[Math.round((punch.t1 - 0.2) * 500), Math.round(punch.t1 * 500)]] as [
+        number,
+        number,
+      ][];
+      const dV = meanOver(before, (r) => v[r]!) - meanOver(during, (r) => v[r]!);
+      const dI = meanOver(during, (r) => i[r]!) - meanOver(before, (r) => i[r]!);
+      expect(dI).toBeGreaterThan(10);
+      expect(dV / dI / truth.params.batteryResistanceOhm).toBeCloseTo(1, 1);
+      expect(truth.params.batteryResistanceOhm).toBeCloseTo(0.032 * scale, 6);
+    }
+  });
+
+  it('undersized ESCs go over their rating in the punch-out only', () => {
+    const { log, truth } = run(scenario('esc-overcurrent'));
+    expect(truth.airframe.escMaxA).toBe(8);
+    expect(log.channels).toContain('imotor1');
+    const peak = Math.max(...[1, 2, 3, 4].map((k) => Math.max(...col(log, `imotor${k}`))));
+    expect(peak).toBeGreaterThan(8);
+    expect(truth.params.escOverS).toBeGreaterThan(0.05);
+    expect(truth.params.escOverS).toBeLessThan(1);
+    expect(clean.truth.params.escOverS).toBe(0);
+    const out = hoverOutputs(log, truth);
+    out.forEach((v, i) => expect(Math.abs(v / cleanOut[i]! - 1)).toBeLessThan(0.002));
+  });
+
+  it('an underpowered build hovers high and saturates where the healthy one does not', () => {
+    const { log, truth } = run(scenario('underpowered'));
+    hoverOutputs(log, truth).forEach((v) => expect(v).toBeGreaterThan(0.75));
+    expect(truth.params.saturationS).toBeGreaterThan(0.1);
+    expect(clean.truth.params.saturationS).toBe(0);
+    const m1 = col(log, 'motor1');
+    expect(m1.some((v) => v >= 0.98)).toBe(true);
+  });
+
+  it('a setpoint delay shows as extra lag between setpoint and gyro', () => {
+    // Knapp & Carter 1976 (REFERENCES.md §11): the delay is the lag of the cross-correlation peak.
+    const lagMs = (name: string) => {
+      const { log } = run(scenario(name));
+      const sp = col(log, 'sp_roll');
+      const g = col(log, 'gyro_x');
+      let best = 0;
+      let bestK = 0;
+      for (let k = 0; k <= 100; k++) {
+        let s = 0;
+        for (let i = 0; i + k < log.rows; i++) s += sp[i]! * g[i + k]!;
+        if (s > best) {
+          best = s;
+          bestK = k;
+        }
+      }
+      return (bestK / 500) * 1000;
+    };
+    const extra = lagMs('tracking-delay') - lagMs('clean-quad-x');
+    expect(Math.abs(extra - 40)).toBeLessThanOrEqual(8);
+  });
+
+  it('combines faults: a weak motor and a CG offset both show', () => {
+    const s = withFaults(scenario('weak-motor'), [{ kind: 'cg-offset', dxMm: 0, dyMm: 12 }]);
+    const { log, truth } = run(s);
+    expect(truth.faults.map((f) => f.kind)).toEqual(['weak-motor', 'cg-offset']);
+    const t = hoverThrusts(log, truth);
+    const total = t.reduce((a, b) => a + b, 0);
+    const yc = truth.airframe.motors.reduce((acc, m, i) => acc + m.y * t[i]!, 0) / total;
+    expect(Math.abs(yc - 12)).toBeLessThan(1);
+    // Against the CG fault alone, only motor 3 moves, by 1/√0.88.
+    const cgOnly = run(
+      withFaults(scenario('clean-quad-x'), [{ kind: 'cg-offset', dxMm: 0, dyMm: 12 }]),
+    );
+    const out = hoverOutputs(log, truth);
+    const ref = hoverOutputs(cgOnly.log, cgOnly.truth);
+    expect(Math.abs(out[2]! / ref[2]! - 1 / Math.sqrt(0.88))).toBeLessThan(0.005);
+    for (const i of [0, 1, 3]) expect(Math.abs(out[i]! / ref[i]! - 1)).toBeLessThan(0.004);
+  });
+});
+
+describe('simulate: airframes beyond the presets', () => {
+  it('flies a free-table airframe with its own numbering', () => {
+    const airframe = presetAirframe('quad-x');
+    const reversed = { ...airframe, name: 'Reversed', motors: [...airframe.motors].reverse() };
+    const { log, truth } = run({
+      name: 'free',
+      describe: 'free table',
+      airframe: reversed,
+      faults: [],
+    });
+    const total = hoverThrusts(log, truth).reduce((a, b) => a + b, 0);
+    expect(total / (truth.params.massKg * G0)).toBeCloseTo(1, 2);
+  });
+});
