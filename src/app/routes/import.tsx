@@ -1,15 +1,22 @@
+import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
+import { ImportPanel } from '../../features/import/components/import-panel';
+import { useActiveTeam } from '../../features/session/active-team';
 
 export function ImportRoute() {
+  const navigate = useNavigate();
+  const { team } = useActiveTeam();
   return (
     <>
       <PageHeader
         title="Import"
-        lead="Drop flight-controller CSV logs; they are read and analysed on this device, even offline."
+        lead="Drop flight-controller CSV logs; they are read and analysed on this device, even offline, and the review opens as soon as the verdict is ready."
       />
-      <p className="rounded border border-dashed border-line bg-paper-raised p-6 text-sm text-ink-soft">
-        The log reader is being wired to this page.
-      </p>
+      <ImportPanel
+        teamId={team?.id ?? null}
+        canSavePreset={team?.role === 'owner' || team?.role === 'tuner'}
+        onOpenFlight={(id) => navigate(`/flights/${id}`)}
+      />
     </>
   );
 }

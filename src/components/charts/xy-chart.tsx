@@ -1,0 +1,139 @@
+import { useMemo } from 'react';
+import ReactEChartsCore from 'echarts-for-react/esm/core';
+import { echarts } from './echarts';
+import { inkSeries } from './palette';
+
+export interface XySeries {
+  name: string;
+  x: ArrayLike<number>;
+  y: ArrayLike<number>;
+  color: string;
+  dashed?: boolean;
+  width?: number;
+}
+
+export interface XyMarker {
+  x: number;
+  label: string;
+  color?: string;
+}
+
+export interface XyChartProps {
+  series: XySeries[];
+  xName: string;
+  yName: string;
+  /** Logarithmic frequency axis; points at x ≤ 0 are dropped since log(0) has no place. */
+  xLog?: boolean;
+  xMin?: number;
+  xMax?: number;
+  yMin?: number;
+  yMax?: number;
+  markers?: XyMarker[];
+  height?: number;
+  ariaLabel: string;
+}
+
+function points(s: XySeries, xLog: boolean): [number, number | null][] {
+  const n = Math.min(s.x.length, s.y.length);
+  const out: [number, number | null][] = [];
+  for (let i = 0; i < n; i++) {
+    const x = s.x[i]!;
+    if (xLog && !(x > 0)) continue;
+    const y = s.y[i]!;
+    out.push([x, Number.isFinite(y) ? y : null]);
+  }
+  return out;
+}
+
+/** A plain x–y line chart: spectra, filter responses, voltage against current. */
+export function XyChart(props: XyChartProps) {
+  const {
+    series,
+    xName,
+    yName,
+    xLog = false,
+    xMin,
+    xMax,
+    yMin,
+    yMax,
+    markers,
+    height = 220,
+    ariaLabel,
+  } = props;
+  const option = useMemo(
+    () => ({
+      animation: false,
+      grid: { left: 52, right: 18, top: 30, bottom: 40 },
+      legend: {
+        top: 0,
+        left: 48,
+        itemWidth: 14,
+        itemHeight: 3,
+        textStyle: { fontSize: 11, color: inkSeries.axis },
+      },
+      tooltip: {
+        trigger: 'axis',
+        textStyle: { fontSize: 11 },
+        valueFormatter: (v: unknown) => (typeof v === 'number' ? v.toFixed(2) : String(v)),
+      },
+      xAxis: {
+        type: xLog ? 'log' : 'value',
+        name: xName,
+        nameLocation: 'middle',
+        nameGap: 24,
+        nameTextStyle: { fontSize: 10, color: inkSeries.axis },
+        min: xMin,
+        max: xMax,
+        axisLabel: { color: inkSeries.axis, fontSize: 10 },
+        splitLine: { lineStyle: { color: inkSeries.grid } },
+      },
+      yAxis: {
+        type: 'value',
+        name: yName,
+        min: yMin,
+        max: yMax,
+        scale: yMin === undefined,
+        nameTextStyle: { fontSize: 10, color: inkSeries.axis, align: 'left' },
+        axisLabel: { color: inkSeries.axis, fontSize: 10 },
+        splitLine: { lineStyle: { color: inkSeries.grid } },
+      },
+      dataZoom: [{ type: 'inside', xAxisIndex: 0, filterMode: 'none' }],
+      series: series.map((s, i) => ({
+        type: 'line',
+        name: s.name,
+        data: points(s, xLog),
+        showSymbol: false,
+        sampling: 'lttb',
+        color: s.color,
+        lineStyle: { width: s.width ?? 1.3, type: s.dashed ? 'dashed' : 'solid' },
+        emphasis: { disabled: true },
+        markLine:
+          i === 0 && markers && markers.length > 0
+            ? {
+                symbol: 'none',
+                silent: true,
+                animation: false,
+                label: { fontSize: 10, formatter: '{b}', color: inkSeries.axis },
+                data: markers.map((m) => ({
+                  xAxis: m.x,
+                  name: m.label,
+                  lineStyle: { color: m.color ?? inkSeries.cursor, type: 'dotted', width: 1 },
+                })),
+              }
+            : undefined,
+      })),
+    }),
+    [series, xName, yName, xLog, xMin, xMax, yMin, yMax, markers],
+  );
+  return (
+    <div role="img" aria-label={ariaLabel}>
+      <ReactEChartsCore
+        echarts={echarts}
+        option={option}
+        notMerge
+        lazyUpdate
+        style={{ height, width: '100%' }}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,268 @@
+import { useCallback, useEffect, useReducer, useRef, useState } from 'react';
+import { useDropzone } from 'react-dropzone';
+import { useQuery } from '@tanstack/react-query';
+import type { Aircraft } from '../../../../shared/schemas/aircraft';
+import type { ColumnMap } from '../../../../shared/log/column-map';
+import { defaultQuadX } from '../../../../shared/airframe/presets';
+import { parseWorker } from '../../../lib/parse-worker';
+import { isLogFile, jobsReducer, nextQueued, type ImportJob } from '../model/import-jobs';
+import { runImport } from '../model/run-import';
+import { synthesiseSampleFile } from '../model/sample-flight';
+import { presetQueries, useSavePreset } from '../api/preset-api';
+import { AircraftPicker, UNKNOWN_AIRCRAFT } from './aircraft-picker';
+import { ColumnMapStep } from './column-map-step';
+import { JobRow } from './job-row';
+
+export interface ImportPanelProps {
+  /** The team flights go to, or null when signed out (flights stay on this device). */
+  teamId: string | null;
+  /** Tuners and owners may save import presets. */
+  canSavePreset: boolean;
+  /** Called when the only file of a drop is analysed: the review opens straight away. */
+  onOpenFlight: (flightId: string) => void;
+}
+
+/** Find a saved preset whose headers are exactly this file's headers. */
+function matchingPreset(
+  presets: { columnMap: ColumnMap }[] | undefined,
+  headers: string[],
+): ColumnMap | undefined {
+  if (!presets) return undefined;
+  return presets.find((p) => headers.every((h) => h in p.columnMap.columns))?.columnMap;
+}
+
+export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanelProps) {
+  const [jobs, dispatch] = useReducer(jobsReducer, []);
+  const [aircraftId, setAircraftId] = useState(UNKNOWN_AIRCRAFT);
+  const [aircraft, setAircraft] = useState<Aircraft | null>(null);
+  const [rejected, setRejected] = useState<string[]>([]);
+  const [sampleBusy, setSampleBusy] = useState(false);
+  const [sampleError, setSampleError] = useState<string | null>(null);
+  const cancelled = useRef(new Set<string>());
+  const single = useRef<string | null>(null);
+  const presets = useQuery({ ...presetQueries.team(teamId ?? ''), enabled: teamId !== null });
+  const savePreset = useSavePreset(teamId ?? '');
+
+  const addFiles = useCallback((files: File[]) => {
+    const ids: string[] = [];
+    dispatch({
+      type: 'add',
+      files,
+      makeId: () => {
+        const id = crypto.randomUUID();
+        ids.push(id);
+        return id;
+      },
+    });
+    // A single file opens its review when done; from a batch the pilot picks.
+    single.current = ids.length === 1 ? ids[0]! : null;
+  }, []);
+
+  const onDrop = useCallback(
+    (accepted: File[], refused: { file: File }[]) => {
+      const good = accepted.filter(isLogFile);
+      const bad = [...accepted.filter((f) => !isLogFile(f)), ...refused.map((r) => r.file)];
+      setRejected(bad.map((f) => f.name));
+      if (good.length > 0) addFiles(good);
+    },
+    [addFiles],
+  );
+  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({
+    onDrop,
+    noClick: true,
+    multiple: true,
+  });
+
+  // Run queued jobs one at a time.
+  const next = nextQueued(jobs);
+  useEffect(() => {
+    if (!next) return;
+    const job: ImportJob = next;
+    cancelled.current.delete(job.id);
+    void runImport({
+      jobId: job.id,
+      file: job.file,
+      ...(job.columnMap ? { columnMap: job.columnMap } : {}),
+      ...(job.poles !== undefined ? { poles: job.poles } : {}),
+      target: {
+        airframe: aircraft?.airframe ?? defaultQuadX,
+        ...(teamId ? { teamId } : {}),
+        ...(aircraft ? { aircraftId: aircraft.id } : {}),
+      },
+      onStatus: (status) => dispatch({ type: 'status', id: job.id, status }),
+      isCancelled: () => cancelled.current.has(job.id),
+    }).then((status) => {
+      dispatch({ type: 'status', id: job.id, status });
+      if (status.kind === 'needs-map') {
+        const preset = matchingPreset(presets.data?.presets, status.headers);
+        // A team preset that covers every header is applied without asking again.
+        if (preset && !job.columnMap) dispatch({ type: 'map', id: job.id, columnMap: preset });
+      }
+      if (status.kind === 'done' && single.current === job.id) onOpenFlight(status.flightId);
+    });
+    // `next` changes identity on every status update; only a new job id should start work.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [next?.id, next?.status.kind]);
+
+  const cancel = (id: string) => {
+    cancelled.current.add(id);
+    void parseWorker().cancel(id);
+    dispatch({ type: 'status', id, status: { kind: 'cancelled' } });
+  };
+
+  const openMap = async (job: ImportJob) => {
+    try {
+      const answer = await parseWorker().inspectHeader(job.file);
+      if (!answer.ok) throw new Error(answer.error.message);
+      const inspected = answer.preview;
+      dispatch({
+        type: 'status',
+        id: job.id,
+        status: {
+          kind: 'needs-map',
+          headers: inspected.headers,
+          proposal: inspected.proposal,
+          sampleRows: inspected.sampleRows,
+        },
+      });
+    } catch (e) {
+      dispatch({
+        type: 'status',
+        id: job.id,
+        status: {
+          kind: 'failed',
+          canMap: false,
+          problem: {
+            code: 'header',
+            message: `The header itself cannot be read: ${e instanceof Error ? e.message : String(e)}`,
+          },
+        },
+      });
+    }
+  };
+
+  const trySample = async () => {
+    setSampleBusy(true);
+    setSampleError(null);
+    try {
+      addFiles([await synthesiseSampleFile()]);
+    } catch (e) {
+      setSampleError(e instanceof Error ? e.message : String(e));
+    } finally {
+      setSampleBusy(false);
+    }
+  };
+
+  const mapping = jobs.find((j) => j.status.kind === 'needs-map');
+
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_18rem]">
+      <div className="flex flex-col gap-4">
+        <div
+          {...getRootProps({
+            className:
+              'flex flex-col items-center justify-center gap-3 rounded border-2 border-dashed px-6 py-10 text-center transition-colors ' +
+              (isDragActive ? 'border-accent bg-accent-soft' : 'border-line bg-paper-raised'),
+          })}
+        >
+          <input {...getInputProps({ 'aria-label': 'Flight logs' })} />
+          <p className="text-base text-ink">Drop flight logs here</p>
+          <p className="text-sm text-ink-soft">
+            <span className="num">.csv</span> or <span className="num">.csv.gz</span>, one or many.
+            They are read and analysed on this device; nothing is sent until you are signed in and
+            online.
+          </p>
+          <div className="flex gap-2">
+            <button
+              type="button"
+              onClick={open}
+              className="rounded bg-slate-brand px-3 py-1.5 text-sm font-medium text-paper"
+            >
+              Choose files…
+            </button>
+            <button
+              type="button"
+              onClick={() => void trySample()}
+              disabled={sampleBusy}
+              className="rounded border border-line px-3 py-1.5 text-sm text-ink-soft disabled:opacity-50"
+            >
+              {sampleBusy ? 'Synthesising…' : 'Try a sample flight'}
+            </button>
+          </div>
+          {sampleError && (
+            <p role="alert" className="text-sm text-sev-act">
+              The sample flight could not be made: {sampleError}
+            </p>
+          )}
+        </div>
+        {rejected.length > 0 && (
+          <p role="alert" className="text-sm text-sev-act">
+            Not a log we read (.csv or .csv.gz): <span className="num">{rejected.join(', ')}</span>
+          </p>
+        )}
+        {mapping && mapping.status.kind === 'needs-map' && (
+          <ColumnMapStep
+            key={mapping.id}
+            fileName={mapping.file.name}
+            proposal={mapping.status.proposal}
+            sampleRows={mapping.status.sampleRows}
+            {...(() => {
+              const p = matchingPreset(presets.data?.presets, mapping.status.headers);
+              return p ? { preset: p } : {};
+            })()}
+            canSavePreset={teamId !== null && canSavePreset}
+            onCancel={() =>
+              dispatch({ type: 'status', id: mapping.id, status: { kind: 'cancelled' } })
+            }
+            onConfirm={(columnMap, presetName) => {
+              if (presetName && teamId) savePreset.mutate({ name: presetName, columnMap });
+              dispatch({ type: 'map', id: mapping.id, columnMap });
+            }}
+          />
+        )}
+        {savePreset.isError && (
+          <p role="alert" className="text-sm text-sev-act">
+            The preset was not saved: {savePreset.error.message}. The file is still read with your
+            map.
+          </p>
+        )}
+        {jobs.length > 0 && (
+          <ul className="flex flex-col gap-2" aria-label="Imports">
+            {jobs.map((job) => (
+              <JobRow
+                key={job.id}
+                job={job}
+                onCancel={() => cancel(job.id)}
+                onRetry={() => dispatch({ type: 'retry', id: job.id })}
+                onRemove={() => dispatch({ type: 'remove', id: job.id })}
+                onOpenMap={() => void openMap(job)}
+              />
+            ))}
+          </ul>
+        )}
+      </div>
+      <aside className="flex flex-col gap-4">
+        <AircraftPicker
+          teamId={teamId}
+          value={aircraftId}
+          onChange={(id, a) => {
+            setAircraftId(id);
+            setAircraft(a);
+          }}
+        />
+        <p className="text-xs leading-relaxed text-ink-soft">
+          The airframe decides what each motor is expected to carry. With an assumed quad X, an
+          asymmetric frame shows up as imbalance that is really geometry.
+        </p>
+        <div className="rounded border border-line bg-paper-sunk p-3 text-xs leading-relaxed text-ink-soft">
+          <p className="font-medium text-ink">Before you check anything on the bench</p>
+          <p className="mt-1">
+            Take the props off before powering the aircraft on the bench. Disconnect the pack before
+            touching motors or wiring, and keep LiPo packs within their voltage and temperature
+            limits.
+          </p>
+        </div>
+      </aside>
+    </div>
+  );
+}

@@ -1,0 +1,146 @@
+import { proxy, transfer } from 'comlink';
+import type { Airframe } from '../../../../shared/schemas/airframe';
+import type { ColumnMap } from '../../../../shared/log/column-map';
+import type { ParsedLog } from '../../../../shared/log/types';
+import type { Severity } from '../../../../shared/analysis/report-schema';
+import { parseWorker } from '../../../lib/parse-worker';
+import { analysisWorker } from '../../../lib/analysis-worker';
+import { saveLocalFlight } from '../../../lib/local-db';
+import type { JobStatus } from './import-jobs';
+
+export interface ImportTarget {
+  airframe: Airframe;
+  teamId?: string;
+  aircraftId?: string;
+}
+
+export interface ImportRequest {
+  jobId: string;
+  file: File;
+  columnMap?: ColumnMap;
+  poles?: number;
+  target: ImportTarget;
+  onStatus: (status: JobStatus) => void;
+  /** Checked after each stage: a cancelled job stores nothing. */
+  isCancelled: () => boolean;
+}
+
+/** Progress reports arrive from the worker at most ten times a second. */
+export interface ParseProgress {
+  bytes: number;
+  rows: number;
+}
+
+const severityRank: Record<Severity, number> = { note: 0, watch: 1, act: 2 };
+
+/** Every buffer behind the log's columns, so they move to the analysis worker without a copy. */
+function columnBuffers(log: ParsedLog): ArrayBuffer[] {
+  const seen = new Set<ArrayBuffer>();
+  for (const c of Object.values(log.columns)) seen.add(c.buffer as ArrayBuffer);
+  return [...seen];
+}
+
+/**
+ * One file through the same path every import takes: read in the parse worker, analysed in the
+ * analysis worker, kept on this device (IndexedDB) for the sync to send later. The review can
+ * open as soon as this resolves with `done`; no network is involved.
+ */
+export async function runImport(req: ImportRequest): Promise<JobStatus> {
+  const { jobId, file, target, onStatus, isCancelled } = req;
+  onStatus({ kind: 'reading', bytes: 0, rows: 0 });
+  const options: { columnMap?: ColumnMap; poles?: number } = {};
+  if (req.columnMap) options.columnMap = req.columnMap;
+  const poles = req.poles ?? target.airframe.poles;
+  if (poles !== undefined) options.poles = poles;
+
+  let result;
+  try {
+    result = await parseWorker().parseFile(
+      jobId,
+      file,
+      options,
+      proxy((p: ParseProgress) => {
+        if (!isCancelled()) onStatus({ kind: 'reading', bytes: p.bytes, rows: p.rows });
+      }),
+    );
+  } catch (e) {
+    if (isCancelled()) return { kind: 'cancelled' };
+    return failed('worker', e);
+  }
+  if (isCancelled()) return { kind: 'cancelled' };
+  if (!result.ok) {
+    const { error } = result;
+    if (error.code === 'cancelled') return { kind: 'cancelled' };
+    if (error.code === 'needs-column-map') {
+      const answer = await parseWorker()
+        .inspectHeader(file)
+        .catch(() => null);
+      const inspected = answer?.ok ? answer.preview : null;
+      return {
+        kind: 'needs-map',
+        headers: error.headers ?? inspected?.headers ?? [],
+        proposal: error.proposal ??
+          inspected?.proposal ?? { entries: [], missing: ['time', 'motor1'] },
+        sampleRows: inspected?.sampleRows ?? [],
+      };
+    }
+    return {
+      kind: 'failed',
+      canMap:
+        error.line !== undefined || error.code.includes('channel') || error.code.includes('unit'),
+      problem: {
+        code: error.code,
+        message: error.message,
+        ...(error.line !== undefined ? { line: error.line } : {}),
+        ...(error.column !== undefined ? { column: error.column } : {}),
+        ...(error.header !== undefined ? { header: error.header } : {}),
+      },
+    };
+  }
+
+  const log = result.log;
+  onStatus({ kind: 'analysing', rows: log.rows });
+  const flightId = crypto.randomUUID();
+  let analysed;
+  try {
+    analysed = await analysisWorker().analyze(flightId, transfer(log, columnBuffers(log)), {
+      airframe: target.airframe,
+    });
+  } catch (e) {
+    return failed('analysis', e);
+  }
+  if (isCancelled()) {
+    void analysisWorker().forget(flightId);
+    return { kind: 'cancelled' };
+  }
+  const { report, detail } = analysed;
+  try {
+    await saveLocalFlight({
+      id: flightId,
+      fileName: file.name,
+      file,
+      report,
+      detail,
+      ...(target.teamId ? { teamId: target.teamId } : {}),
+      ...(target.aircraftId ? { aircraftId: target.aircraftId } : {}),
+      ...(log.metadata['recorded'] ? { recordedAt: log.metadata['recorded'] } : {}),
+    });
+  } catch (e) {
+    return failed('storage', e);
+  }
+  let worst: Severity | null = null;
+  for (const f of report.findings)
+    if (worst === null || severityRank[f.severity] > severityRank[worst]) worst = f.severity;
+  return { kind: 'done', flightId, findings: report.findings.length, worst };
+}
+
+function failed(stage: 'worker' | 'analysis' | 'storage', e: unknown): JobStatus {
+  const message = e instanceof Error ? e.message : String(e);
+  const lead =
+    stage === 'analysis'
+      ? 'The log was read, but the analysis stopped: '
+      : stage === 'storage'
+        ? 'The flight could not be kept on this device (storage full or private mode?): '
+        : 'The log reader stopped unexpectedly: ';
+  return { kind: 'failed', canMap: false, problem: { code: stage, message: lead + message } };
+}

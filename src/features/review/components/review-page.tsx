@@ -1,0 +1,172 @@
+import { useEffect, useMemo, useRef, type ReactNode } from 'react';
+import type { Finding } from '../../../../shared/analysis/report-schema';
+import type { Airframe } from '../../../../shared/schemas/airframe';
+import type { TimePin } from '../../../components/charts/time-chart';
+import type { ReviewFlight } from '../api/flight-api';
+import { cursorStep } from '../model/use-cursor';
+import { sections, type SectionId } from '../model/sections';
+import { FlightStrip } from './flight-strip';
+import { SectionNav } from './section-nav';
+import { VerdictList } from './verdict-list';
+import { BalanceSection } from './sections/balance-section';
+import { EffortSection } from './sections/effort-section';
+import { FilterBenchSection } from './sections/filter-bench-section';
+import { HeadroomSection } from './sections/headroom-section';
+import { PowerSection } from './sections/power-section';
+import { TorqueSection } from './sections/torque-section';
+import { TrackingSection } from './sections/tracking-section';
+import { VibrationSection } from './sections/vibration-section';
+import type { TimeContext } from './sections/time-context';
+
+export interface ReviewPageProps {
+  flight: ReviewFlight;
+  airframe: Airframe;
+  airframeAssumed: boolean;
+  section: SectionId;
+  cursorT: number | null;
+  onCursor: (tS: number) => void;
+  pins: TimePin[];
+  onPin: (id: string) => void;
+  /** `c` pressed: the comments rail opens its box at the cursor. */
+  onCommentAtCursor?: () => void;
+  /** The comments rail, composed by the route. */
+  rail?: ReactNode;
+  /** The compare section's content, composed by the route. */
+  compare?: ReactNode;
+  /** Sync state line for the header, composed by the route. */
+  status?: ReactNode;
+}
+
+function isTyping(target: EventTarget | null): boolean {
+  if (!(target instanceof HTMLElement)) return false;
+  return target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName);
+}
+
+export function ReviewPage(props: ReviewPageProps) {
+  const {
+    flight,
+    airframe,
+    airframeAssumed,
+    section,
+    cursorT,
+    onCursor,
+    pins,
+    onPin,
+    onCommentAtCursor,
+    rail,
+    compare,
+    status,
+  } = props;
+  const { report, detail } = flight;
+  const durationS = report.durationS;
+  const time: TimeContext = useMemo(
+    () => ({ cursorT, onCursor, group: `flight-${flight.id}`, hover: report.segments.hover }),
+    [cursorT, onCursor, flight.id, report.segments.hover],
+  );
+
+  // Arrow keys move the cursor, `c` comments at it — anywhere on the page but in a field.
+  const keys = useRef({ cursorT, durationS, onCursor, onCommentAtCursor });
+  useEffect(() => {
+    keys.current = { cursorT, durationS, onCursor, onCommentAtCursor };
+  });
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (e.defaultPrevented || e.altKey || e.ctrlKey || e.metaKey || isTyping(e.target)) return;
+      const k = keys.current;
+      if (e.key === 'ArrowLeft' || e.key === 'ArrowRight') {
+        const step = cursorStep(k.durationS, e.shiftKey) * (e.key === 'ArrowLeft' ? -1 : 1);
+        const from = k.cursorT ?? 0;
+        k.onCursor(Math.min(k.durationS, Math.max(0, from + step)));
+        e.preventDefault();
+      } else if (e.key === 'c' && k.onCommentAtCursor) {
+        k.onCommentAtCursor();
+        e.preventDefault();
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+
+  const selectFinding = (f: Finding) => {
+    if (f.tS !== undefined) onCursor(f.tS);
+  };
+  const info = sections.find((s) => s.id === section)!;
+
+  return (
+    <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_20rem]">
+      <div className="flex min-w-0 flex-col gap-4">
+        <header className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
+          <h1 className="text-2xl font-semibold tracking-tight text-slate-brand">Review</h1>
+          <p className="num text-sm text-ink-soft">
+            {flight.fileName} · {report.durationS.toFixed(1)} s · {report.sampleRateHz.toFixed(0)}{' '}
+            Hz · {report.rows.toLocaleString('en')} rows · {report.motorCount} motors
+          </p>
+          <p className="text-sm text-ink-soft">
+            {flight.aircraftName ?? report.airframe.name}
+            {report.airframe.assumed && ' (assumed airframe)'}
+          </p>
+          {status}
+        </header>
+        {report.warnings.length > 0 && (
+          <details className="rounded border border-line bg-paper-sunk px-3 py-1.5 text-xs text-ink-soft">
+            <summary className="cursor-pointer">
+              {report.warnings.length} note{report.warnings.length === 1 ? '' : 's'} from reading
+              the log
+            </summary>
+            <ul className="mt-1 list-disc pl-5">
+              {report.warnings.map((w, i) => (
+                <li key={i}>{w}</li>
+              ))}
+            </ul>
+          </details>
+        )}
+        <VerdictList
+          flightId={flight.id}
+          findings={report.findings}
+          hoverS={report.segments.hoverS}
+          onSelect={selectFinding}
+        />
+        <FlightStrip effort={detail.effort} time={time} pins={pins} onPin={onPin} />
+        <SectionNav flightId={flight.id} current={section} />
+        <section aria-labelledby="section-title" className="flex flex-col gap-3">
+          <div>
+            <h2 id="section-title" className="text-lg font-semibold text-slate-brand">
+              {info.label}
+            </h2>
+            <p className="text-sm text-ink-soft">{info.question}</p>
+          </div>
+          {section === 'balance' && (
+            <BalanceSection
+              report={report}
+              diagnosis={detail.diagnosis}
+              airframe={airframe}
+              assumed={airframeAssumed}
+            />
+          )}
+          {section === 'torque' && (
+            <TorqueSection report={report} effort={detail.effort} airframe={airframe} time={time} />
+          )}
+          {section === 'effort' && (
+            <EffortSection report={report} effort={detail.effort} time={time} />
+          )}
+          {section === 'vibration' && <VibrationSection report={report} detail={detail} />}
+          {section === 'filters' && <FilterBenchSection flight={flight} airframe={airframe} />}
+          {section === 'power' && <PowerSection report={report} power={detail.power} time={time} />}
+          {section === 'headroom' && (
+            <HeadroomSection
+              report={report}
+              effort={detail.effort}
+              airframe={airframe}
+              time={time}
+            />
+          )}
+          {section === 'tracking' && (
+            <TrackingSection report={report} tracking={detail.tracking} time={time} />
+          )}
+          {section === 'compare' && compare}
+        </section>
+      </div>
+      {rail && <aside className="flex min-w-0 flex-col gap-4">{rail}</aside>}
+    </div>
+  );
+}

@@ -1,0 +1,159 @@
+import type { FlightReport } from '../../../../../shared/analysis/report-schema';
+import type { ReviewDetail } from '../../../../../shared/analysis/review-detail';
+import type { Airframe } from '../../../../../shared/schemas/airframe';
+import { motorColor } from '../../../../components/charts/palette';
+import { CgDetail, TopView } from '../top-view';
+
+export interface BalanceSectionProps {
+  report: FlightReport;
+  diagnosis: ReviewDetail['diagnosis'];
+  airframe: Airframe;
+  /** True when the airframe drawn is an assumption, not the aircraft's own. */
+  assumed: boolean;
+}
+
+const pct = (v: number | undefined) =>
+  v === undefined || !Number.isFinite(v) ? '—' : `${(v * 100).toFixed(1)} %`;
+const signed = (v: number | undefined, digits = 1) =>
+  v === undefined || !Number.isFinite(v)
+    ? '—'
+    : `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(digits)}`;
+
+const patternTitle: Record<ReviewDetail['diagnosis']['pattern'], string> = {
+  healthy: 'Balanced',
+  'cg-offset': 'CG offset',
+  'weak-motor': 'One motor working hard',
+  'spin-set': 'One spin set working hard',
+  'too-little-hover': 'Too little hover to judge',
+};
+
+export function BalanceSection({ report, diagnosis, airframe, assumed }: BalanceSectionProps) {
+  const { expectedShare, measuredShare, deviationPct } = report.balance;
+  const flagged = new Set(
+    report.findings
+      .filter(
+        (f) => f.motor !== undefined && (f.code === 'motor-working-hard' || f.severity !== 'note'),
+      )
+      .map((f) => f.motor!),
+  );
+  const design = airframe.cg ?? { x: 0, y: 0 };
+  const mismatch = airframe.motors.length !== report.motorCount;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_1fr]">
+      <figure className="flex flex-col items-center gap-2">
+        <TopView airframe={airframe} deviationPct={deviationPct} cg={report.cg} flagged={flagged} />
+        <figcaption className="text-xs text-ink-faint">
+          {airframe.name}
+          {assumed && ' (assumed — pick the aircraft on import for its own geometry)'} · ring:
+          design CG · cross: estimated CG
+        </figcaption>
+        {mismatch && (
+          <p role="alert" className="text-xs text-sev-act">
+            The log has {report.motorCount} motors but this airframe has {airframe.motors.length};
+            the drawing may not match.
+          </p>
+        )}
+      </figure>
+      <div className="flex flex-col gap-4">
+        <div className="rounded border-l-4 border-accent bg-paper-raised px-4 py-3">
+          <p className="text-sm font-semibold text-ink">
+            {patternTitle[diagnosis.pattern]}
+            {diagnosis.motor !== undefined && <> · motor {diagnosis.motor}</>}
+            <span className="num ml-2 text-xs font-normal text-ink-faint">
+              confidence {(diagnosis.confidence * 100).toFixed(0)} %
+            </span>
+          </p>
+          <p className="mt-1 text-sm text-ink-soft">{diagnosis.text}</p>
+        </div>
+        <table className="w-full text-sm" aria-label="Hover share per motor">
+          <thead>
+            <tr className="border-b border-line text-left text-xs uppercase tracking-wide text-ink-faint">
+              <th className="py-1 font-medium">Motor</th>
+              <th className="py-1 font-medium">Spin</th>
+              <th className="py-1 text-right font-medium">Expected</th>
+              <th className="py-1 text-right font-medium">Measured</th>
+              <th className="py-1 pl-4 font-medium">Deviation</th>
+            </tr>
+          </thead>
+          <tbody>
+            {deviationPct.map((dev, i) => {
+              const n = i + 1;
+              const frac = Math.max(-1, Math.min(1, dev / 20));
+              return (
+                <tr
+                  key={n}
+                  className={
+                    'border-b border-line/60 ' + (flagged.has(n) ? 'bg-accent-soft/50' : '')
+                  }
+                >
+                  <td className="py-1">
+                    <span className="inline-flex items-center gap-1.5">
+                      <span
+                        aria-hidden
+                        className="inline-block h-2.5 w-2.5 rounded-full"
+                        style={{ background: motorColor(n) }}
+                      />
+                      {n}
+                    </span>
+                  </td>
+                  <td className="num py-1 text-ink-soft">{airframe.motors[i]?.spin ?? '—'}</td>
+                  <td className="num py-1 text-right">{pct(expectedShare[i])}</td>
+                  <td className="num py-1 text-right">{pct(measuredShare[i])}</td>
+                  <td className="py-1 pl-4">
+                    <div className="flex items-center gap-2">
+                      <span className="num w-16 text-right">{signed(dev)} %</span>
+                      <span className="relative h-2 w-28 bg-paper-sunk" aria-hidden>
+                        <span className="absolute inset-y-0 left-1/2 w-px bg-ink-faint" />
+                        <span
+                          className="absolute inset-y-0"
+                          style={{
+                            left: frac >= 0 ? '50%' : `${50 + frac * 50}%`,
+                            width: `${Math.abs(frac) * 50}%`,
+                            background: motorColor(n),
+                          }}
+                        />
+                      </span>
+                    </div>
+                  </td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+        <div className="flex flex-wrap items-start gap-4">
+          {report.cg ? (
+            <>
+              <CgDetail cg={report.cg} design={design} />
+              <dl className="num grid grid-cols-[auto_auto] gap-x-4 gap-y-1 text-sm">
+                <dt className="font-sans text-ink-soft">Estimated CG</dt>
+                <dd>
+                  x {signed(report.cg.xMm)} mm, y {signed(report.cg.yMm)} mm
+                </dd>
+                <dt className="font-sans text-ink-soft">Design CG</dt>
+                <dd>
+                  x {signed(design.x)} mm, y {signed(design.y)} mm
+                </dd>
+                <dt className="font-sans text-ink-soft">Offset</dt>
+                <dd>
+                  {Math.hypot(report.cg.xMm - design.x, report.cg.yMm - design.y).toFixed(1)} mm{' '}
+                  <span className="font-sans text-xs text-ink-faint">
+                    ({report.cg.xMm - design.x >= 0 ? 'forward' : 'aft'},{' '}
+                    {report.cg.yMm - design.y >= 0 ? 'right' : 'left'})
+                  </span>
+                </dd>
+              </dl>
+            </>
+          ) : (
+            <p className="text-sm text-ink-soft">
+              No CG estimate: the flight had too little steady hover.
+            </p>
+          )}
+        </div>
+        <p className="text-xs text-ink-faint">
+          Expected shares come from the airframe&apos;s geometry (an asymmetric frame carries
+          unequal shares by design). Measured over {report.segments.hoverS.toFixed(1)} s of hover.
+        </p>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,94 @@
+import type { FlightReport } from '../../../../../shared/analysis/report-schema';
+import type { Trace } from '../../../../../shared/analysis/review-detail';
+import { TimeChart, type TimeSeries } from '../../../../components/charts/time-chart';
+import { inkSeries } from '../../../../components/charts/palette';
+import type { TimeContext } from './time-context';
+
+const f = (v: number | null | undefined, d: number, unit: string) =>
+  v === null || v === undefined || !Number.isFinite(v) ? '—' : `${v.toFixed(d)} ${unit}`;
+
+export function PowerSection({
+  report,
+  power,
+  time,
+}: {
+  report: FlightReport;
+  power: Trace | null;
+  time: TimeContext;
+}) {
+  const p = report.power;
+  if (!p || !power)
+    return (
+      <p className="text-sm text-ink-soft">
+        This log has no pack voltage (vbat), so there is nothing to say about power.
+      </p>
+    );
+  const volts: TimeSeries[] = [];
+  if (power.series['cell_v'])
+    volts.push({
+      name: 'Per cell',
+      data: power.series['cell_v'],
+      color: inkSeries.measured,
+      width: 1.6,
+    });
+  const amps: TimeSeries[] = [];
+  if (power.series['ibat'])
+    amps.push({ name: 'Pack current', data: power.series['ibat'], color: inkSeries.pitch });
+  return (
+    <div className="flex flex-col gap-4">
+      <dl className="num grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-4">
+        <dt className="font-sans text-ink-soft">Cells</dt>
+        <dd>{p.cells}S</dd>
+        <dt className="font-sans text-ink-soft">At rest</dt>
+        <dd>{f(p.restCellV, 2, 'V/cell')}</dd>
+        <dt className="font-sans text-ink-soft">Lowest under load</dt>
+        <dd>{f(p.minCellV, 2, 'V/cell')}</dd>
+        <dt className="font-sans text-ink-soft">Sag</dt>
+        <dd>{f(p.sagCellV, 2, 'V/cell')}</dd>
+        <dt className="font-sans text-ink-soft">Internal resistance</dt>
+        <dd>
+          {f(
+            p.internalResistanceOhm !== null ? p.internalResistanceOhm * 1000 : null,
+            1,
+            'mΩ (pack)',
+          )}
+        </dd>
+        <dt className="font-sans text-ink-soft">Used</dt>
+        <dd>
+          {f(p.mAh, 0, 'mAh')} · {f(p.wh, 1, 'Wh')}
+        </dd>
+      </dl>
+      {volts.length > 0 && (
+        <TimeChart
+          t={power.t}
+          series={volts}
+          cursorT={time.cursorT}
+          onCursor={time.onCursor}
+          bands={time.hover}
+          group={time.group}
+          height={200}
+          yName="V/cell"
+          ariaLabel="Cell voltage over time"
+        />
+      )}
+      {amps.length > 0 && (
+        <TimeChart
+          t={power.t}
+          series={amps}
+          cursorT={time.cursorT}
+          onCursor={time.onCursor}
+          bands={time.hover}
+          group={time.group}
+          height={180}
+          yName="A"
+          ariaLabel="Pack current over time"
+        />
+      )}
+      <p className="rounded border border-line bg-paper-sunk px-3 py-2 text-xs text-ink-soft">
+        LiPo packs: land before the cells sag below about 3.5 V under load, store them near 3.8 V
+        per cell, charge on a fireproof surface at the rate their maker states, and retire packs
+        that puff or run hot. Internal resistance that climbs flight after flight is a tired pack.
+      </p>
+    </div>
+  );
+}

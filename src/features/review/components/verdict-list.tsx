@@ -1,0 +1,87 @@
+import { Link } from 'react-router-dom';
+import type { Finding } from '../../../../shared/analysis/report-schema';
+import { motorColor } from '../../../components/charts/palette';
+import { rankFindings, sectionForFinding, sections } from '../model/sections';
+import { SeverityBadge } from './severity-badge';
+
+export interface VerdictListProps {
+  flightId: string;
+  findings: readonly Finding[];
+  hoverS: number;
+  /** Selecting a finding moves the shared cursor to its moment. */
+  onSelect?: (finding: Finding) => void;
+}
+
+const sectionLabel = (f: Finding) =>
+  sections.find((s) => s.id === sectionForFinding(f))?.label ?? 'Evidence';
+
+/** The verdict: findings most severe first, each with what to do and where the evidence is. */
+export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictListProps) {
+  const ranked = rankFindings(findings);
+  const counts = { act: 0, watch: 0, note: 0 };
+  for (const f of findings) counts[f.severity]++;
+  return (
+    <section aria-labelledby="verdict-title" className="rounded border border-line bg-paper-raised">
+      <header className="flex flex-wrap items-baseline gap-x-4 gap-y-1 border-b border-line px-4 py-2">
+        <h2 id="verdict-title" className="text-base font-semibold text-slate-brand">
+          Verdict
+        </h2>
+        <p className="num text-xs text-ink-soft">
+          {counts.act} act · {counts.watch} watch · {counts.note} note · {hoverS.toFixed(1)} s of
+          hover measured
+        </p>
+      </header>
+      {ranked.length === 0 ? (
+        <p className="px-4 py-3 text-sm text-ink-soft">
+          Nothing in this log stood out against the team&apos;s thresholds. That is a statement
+          about this flight&apos;s data, not a clean bill of health for the aircraft.
+        </p>
+      ) : (
+        <ol className="divide-y divide-line" aria-label="Findings">
+          {ranked.map((f, i) => {
+            const section = sectionForFinding(f);
+            const search = f.tS !== undefined ? `?t=${Math.round(f.tS * 1000) / 1000}` : '';
+            return (
+              <li
+                key={`${f.code}-${f.motor ?? ''}-${f.axis ?? ''}-${i}`}
+                className="flex gap-3 px-4 py-2.5"
+              >
+                <SeverityBadge severity={f.severity} />
+                <div className="min-w-0 flex-1">
+                  <p className="text-sm text-ink">
+                    {f.motor !== undefined && (
+                      <span className="mr-1.5 inline-flex items-center gap-1 font-medium">
+                        <span
+                          aria-hidden
+                          className="inline-block h-2.5 w-2.5 rounded-full"
+                          style={{ background: motorColor(f.motor) }}
+                        />
+                        Motor {f.motor}:
+                      </span>
+                    )}
+                    {f.message}
+                  </p>
+                  <p className="mt-0.5 text-xs text-ink-faint">
+                    <Link
+                      to={`/flights/${flightId}/${section}${search}`}
+                      onClick={() => onSelect?.(f)}
+                      className="font-medium text-slate-brand underline decoration-line underline-offset-2 hover:decoration-slate-brand"
+                    >
+                      {sectionLabel(f)} evidence
+                      {f.tS !== undefined && <span className="num"> at {f.tS.toFixed(2)} s</span>}
+                    </Link>
+                    {f.axis && <span className="num ml-2">axis {f.axis}</span>}
+                  </p>
+                </div>
+              </li>
+            );
+          })}
+        </ol>
+      )}
+      <p className="border-t border-line px-4 py-2 text-xs text-ink-faint">
+        Findings are advice drawn from the log. Local aviation rules and licensed maintenance
+        practice come first; check on the bench with props off before you change anything.
+      </p>
+    </section>
+  );
+}
