@@ -117,6 +117,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     rpms,
     collective: effort?.collective ?? null,
     blades: airframe.prop.blades,
+    ...(airframe.poles ? { poles: airframe.poles } : {}),
     prominenceDb: th.peakProminenceDb,
   });
 
@@ -154,8 +155,8 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
 
   const report: FlightReport = {
     version: REPORT_VERSION,
-    durationS: log.durationS,
-    sampleRateHz: log.sampleRateHz,
+    durationS: round(log.durationS, 4),
+    sampleRateHz: round(log.sampleRateHz, 3),
     rows: log.rows,
     motorCount,
     channels: [...log.channels],
@@ -190,6 +191,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
             db: round(p.db, 2),
             label: p.label,
             ...(p.motor ? { motor: p.motor } : {}),
+            ...(p.aliasOfHz !== undefined ? { aliasOfHz: round(p.aliasOfHz, 1) } : {}),
           })),
         },
       ]),

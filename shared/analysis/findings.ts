@@ -144,7 +144,13 @@ export function buildFindings(f: FindingInput): Finding[] {
             : p.label === 'rotor-2x'
               ? 'twice per turn'
               : 'at blade pass';
-        const who = p.motor ? `motor ${p.motor}` : 'a rotor';
+        const cands =
+          'candidates' in p && Array.isArray(p.candidates) ? (p.candidates as number[]) : [];
+        const who = p.motor
+          ? `motor ${p.motor}`
+          : cands.length
+            ? `motor ${cands.slice(0, -1).join(', ')} or ${cands[cands.length - 1]}`
+            : 'a rotor';
         finding = {
           code: 'rotor-harmonic',
           severity: sev,
@@ -154,13 +160,24 @@ export function buildFindings(f: FindingInput): Finding[] {
             `Vibration at ${where} follows ${who} ${order}. ` +
             (p.label === 'rotor-1x'
               ? `That is usually an unbalanced or chipped prop or a bent shaft: with the battery out, ` +
-                `swap ${p.motor ? `motor ${p.motor}'s` : 'each'} prop for a new one, check the shaft ` +
+                `swap ${p.motor ? `motor ${p.motor}'s prop` : cands.length ? `the props on motors ${list(cands)}` : 'each prop'} for a new one, check the shaft ` +
                 `runs true and the bell is not scraped.`
               : p.label === 'rotor-2x'
                 ? `That often means a loose motor mount or a prop not seated flat: with the battery out, ` +
                   `tighten the motor screws and reseat the props.`
                 : `Blade-pass tones grow with nicked or mismatched blades: inspect every blade tip ` +
                   `and replace damaged props as a set.`),
+        };
+      } else if (p.aliasOfHz !== undefined) {
+        finding = {
+          code: 'vibration-peak',
+          severity: sev,
+          axis: channel,
+          message:
+            `A vibration at ${where} is the motors' electrical frequency (about ${Math.round(p.aliasOfHz)} Hz) ` +
+            `folded down by the log rate: electrical noise, not shaking. With the battery out, route ` +
+            `motor wires away from the flight controller, check the capacitor on the power leads, ` +
+            `and check the gyro's own filtering on the filter bench.`,
         };
       } else {
         finding = {
@@ -235,15 +252,20 @@ export function buildFindings(f: FindingInput): Finding[] {
   }
 
   if (f.tracking) {
+    const size = Math.max(1, f.airframe.prop.diameterIn / 5);
     for (const axis of ['roll', 'pitch', 'yaw'] as const) {
       const t = f.tracking[axis];
       if (t.lagMs === null) continue;
-      const sev = level(t.lagMs, th.trackingLagWatchMs, th.trackingLagActMs);
+      const sev =
+        axis === 'yaw'
+          ? level(t.lagMs, th.trackingYawLagWatchMs * size, th.trackingYawLagActMs * size)
+          : level(t.lagMs, th.trackingLagWatchMs * size, th.trackingLagActMs * size);
       if (!sev) continue;
       out.push({
         code: 'tracking-lag',
         severity: sev,
         axis,
+        tS: t.worstAtS,
         message:
           `On ${axis} the aircraft follows the sticks about ${Math.round(t.lagMs)} ms late. Check for ` +
           `heavy gyro filtering (see the filter bench), a low loop rate, or soft gains; on the bench ` +

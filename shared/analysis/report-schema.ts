@@ -49,6 +49,8 @@ export const Peak = z.object({
   label: PeakLabel,
   /** 1-based motor whose 1× or 2× order the peak follows, when rpm per motor is logged. */
   motor: z.number().int().min(1).optional(),
+  /** Where the tone really is, Hz, when it lies above Nyquist and folded down to `hz`. */
+  aliasOfHz: z.number().optional(),
 });
 export type Peak = z.infer<typeof Peak>;
 

@@ -19,7 +19,7 @@ export const Thresholds = z.object({
   hoverMinS: z.number().positive(),
   /** Less hover than this in total and balance, CG and torque split are not judged, s: a few seconds average out gusts and control noise. */
   minHoverForVerdictS: z.number().positive(),
-  /** Motor output above expectation that raises `watch` / `act`, %: motor-to-motor spread of matched parts is a few % (common practice). */
+  /** Motor output above expectation that raises `watch` / `act`, %: matched motors and props hover within 1–2 % of each other (common practice). */
   motorWatchPct: z.number().positive(),
   motorActPct: z.number().positive(),
   /** CG offset as a % of the mean arm radius raising `watch` / `act`: 5 % is a battery strap or camera shifted by a centimetre on a 5-inch frame (common practice). */
@@ -33,7 +33,7 @@ export const Thresholds = z.object({
   /** Amplitude of a gyro tone raising `watch` / `act`, deg/s: a few deg/s of rotor noise is normal before filtering, tens of deg/s heats motors (common practice). */
   gyroToneWatchDegS: z.number().positive(),
   gyroToneActDegS: z.number().positive(),
-  /** Amplitude of an accelerometer tone raising `watch` / `act`, g (common practice; above ~1 g estimators struggle). */
+  /** Amplitude of an accelerometer tone raising `watch` / `act`, g: half a g of rotor tone is usual on a hard-mounted board; above ~1 g attitude estimates suffer (common practice). */
   accToneWatchG: z.number().positive(),
   accToneActG: z.number().positive(),
   /** Output counted as saturated, 0–1 (PRODUCT.md §6: 98 %). */
@@ -46,9 +46,16 @@ export const Thresholds = z.object({
   /** Lowest cell under load raising `watch` / `act`, V per cell (common practice: 3.5 V under load warning, 3.3 V land now). */
   cellWatchV: z.number().positive(),
   cellActV: z.number().positive(),
-  /** Gyro lag behind setpoint raising `watch` / `act`, ms: a well-tuned small multirotor follows in 10–20 ms (common practice). */
+  /**
+   * Roll/pitch lag of the gyro behind the setpoint raising `watch` / `act`, ms, for a 5-inch
+   * build: a well-tuned one follows in 15–30 ms, and the correlation peak reads a little late on slow stick moves (common practice). Scaled by prop diameter ÷ 5 in
+   * for bigger props, whose heavier rotors change speed more slowly.
+   */
   trackingLagWatchMs: z.number().positive(),
   trackingLagActMs: z.number().positive(),
+  /** Same for yaw, ms: yaw acts through prop drag, far weaker than thrust, so it always trails (common practice). */
+  trackingYawLagWatchMs: z.number().positive(),
+  trackingYawLagActMs: z.number().positive(),
 });
 export type Thresholds = z.infer<typeof Thresholds>;
 
@@ -60,8 +67,8 @@ export const defaultThresholds: Thresholds = {
   hoverAboveIdle: 0.08,
   hoverMinS: 1,
   minHoverForVerdictS: 4,
-  motorWatchPct: 6,
-  motorActPct: 12,
+  motorWatchPct: 4,
+  motorActPct: 8,
   cgWatchPctOfArm: 5,
   cgActPctOfArm: 10,
   torqueSplitWatchPct: 5,
@@ -69,16 +76,18 @@ export const defaultThresholds: Thresholds = {
   peakProminenceDb: 10,
   gyroToneWatchDegS: 5,
   gyroToneActDegS: 20,
-  accToneWatchG: 0.5,
-  accToneActG: 2,
+  accToneWatchG: 1,
+  accToneActG: 3,
   saturationLevel: 0.98,
   saturationWatchPct: 2,
   saturationActPct: 8,
   escOverActS: 1,
   cellWatchV: 3.5,
   cellActV: 3.3,
-  trackingLagWatchMs: 30,
-  trackingLagActMs: 60,
+  trackingLagWatchMs: 50,
+  trackingLagActMs: 100,
+  trackingYawLagWatchMs: 100,
+  trackingYawLagActMs: 200,
 };
 
 /** Defaults overlaid with a team's partial settings, validated. */

@@ -4,6 +4,7 @@ import type { CampbellMatrix, Spectrum } from './review-detail';
 import { findPeaks, type SpectralPeak } from './dsp/peaks';
 import { bandRms, chooseSegment, toDb, welch, type PowerSpectrum } from './dsp/welch';
 import type { Ranges } from './segments';
+import { attributeOrder } from './order-tracking';
 
 export const VIBRATION_CHANNELS = [
   'gyro_x',
@@ -22,7 +23,8 @@ const CAMPBELL_ROWS = 20;
 
 export interface ChannelVibration {
   bandRms: number;
-  peaks: (Peak & { prominenceDb: number })[];
+  /** `candidates`: motors the order tracking could not tell apart, strongest first. */
+  peaks: (Peak & { prominenceDb: number; candidates?: number[] })[];
   spectrum: PowerSpectrum;
 }
 
@@ -44,6 +46,8 @@ export interface VibrationInput {
   /** Mean motor output per sample, the throttle stand-in when neither rpm nor throttle is logged. */
   collective: ArrayLike<number> | null;
   blades: number;
+  /** Magnet poles of the motors, when known. */
+  poles?: number;
   prominenceDb: number;
 }
 
@@ -120,47 +124,36 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
   const rowsOk = rowPrefix && Number.isFinite(lo) && hi > lo;
   const rowWidth = rowsOk ? (hi - lo) / CAMPBELL_ROWS : 1;
   const bins = (nperseg >> 1) + 1;
-  const campAcc = rowsOk
-    ? Array.from({ length: CAMPBELL_ROWS }, () => new Float64Array(bins))
-    : null;
-  const campCount = new Float64Array(CAMPBELL_ROWS);
   const rowOf = (v: number) =>
     Math.min(CAMPBELL_ROWS - 1, Math.max(0, Math.floor((v - lo) / rowWidth)));
-  // Order tracking per motor: gyro power at each motor's own 1× and 2× line, summed over segments.
-  const orderEnergy = rpms ? rpms.map(() => [0, 0]) : null;
   const df = fs / nperseg;
+  // Short-time spectra binned by the row variable, kept per channel so each channel's peaks are
+  // judged on its own rows; the Campbell matrix drawn is the sum over the gyro axes.
+  const rowAcc: Record<string, Float64Array[]> = {};
+  const rowCount = new Float64Array(CAMPBELL_ROWS);
 
   for (const name of VIBRATION_CHANNELS) {
     const col = log.columns[name];
     if (!col) continue;
-    const isGyro = GYRO.has(name);
-    const first = name === 'gyro_x' || (!log.columns.gyro_x && isGyro);
+    const acc = rowsOk ? Array.from({ length: CAMPBELL_ROWS }, () => new Float64Array(bins)) : null;
+    if (acc) rowAcc[name] = acc;
+    const countRows = Object.keys(rowAcc).length === 1;
     const spectrum = welch(col, fs, {
       nperseg,
       ranges,
-      onSegment:
-        isGyro && (campAcc || orderEnergy)
-          ? (s, est) => {
-              if (campAcc) {
-                const v = segValue(s);
-                if (v >= lo && v <= hi) {
-                  const r = rowOf(v);
-                  const acc = campAcc[r]!;
-                  for (let k = 0; k < bins; k++) acc[k]! += est[k]!;
-                  if (first) campCount[r]!++;
-                }
-              }
-              if (orderEnergy && motorPrefix) {
-                motorPrefix.forEach((p, m) => {
-                  const f = (p[s + nperseg]! - p[s]!) / nperseg / 60;
-                  for (let h = 1; h <= 2; h++) {
-                    const k = Math.round((h * f) / df);
-                    if (k > 0 && k < bins) orderEnergy[m]![h - 1]! += est[k]!;
-                  }
-                });
+      onSegment: acc
+        ? (s, est) => {
+            if (acc) {
+              const v = segValue(s);
+              if (v >= lo && v <= hi) {
+                const r = rowOf(v);
+                const row = acc[r]!;
+                for (let k = 0; k < bins; k++) row[k]! += est[k]!;
+                if (countRows) rowCount[r]!++;
               }
             }
-          : undefined,
+          }
+        : undefined,
     });
     const raw = findPeaks(spectrum, {
       minHz: MIN_PEAK_HZ,
@@ -174,21 +167,24 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
     };
   }
 
-  let campbell: CampbellMatrix | null = null;
-  let rowDb: Float64Array[] = [];
-  let rowCentres: number[] = [];
-  if (campAcc) {
-    rowCentres = Array.from({ length: CAMPBELL_ROWS }, (_, r) => lo + (r + 0.5) * rowWidth);
-    rowDb = campAcc.map((acc, r) => {
-      const c = campCount[r]!;
-      return Float64Array.from(acc, (v) => (c > 0 ? toDb(v / c) : NaN));
+  const rowCentres = Array.from({ length: CAMPBELL_ROWS }, (_, r) => lo + (r + 0.5) * rowWidth);
+  const counted = Array.from(rowCount, (c, r) => (c > 0 ? r : -1)).filter((r) => r >= 0);
+  const rowDb = (acc: Float64Array[]) =>
+    acc.map((row, r) => {
+      const c = rowCount[r]!;
+      return Float64Array.from(row, (v) => (c > 0 ? toDb(v / c) : NaN));
     });
-    const hz = Array.from({ length: bins }, (_, k) => k * df);
+  let campbell: CampbellMatrix | null = null;
+  const gyroRows = Object.entries(rowAcc).filter(([n]) => GYRO.has(n));
+  if (rowsOk && gyroRows.length) {
+    const total = Array.from({ length: CAMPBELL_ROWS }, () => new Float64Array(bins));
+    for (const [, acc] of gyroRows)
+      acc.forEach((row, r) => row.forEach((v, k) => (total[r]![k]! += v)));
     campbell = {
       by,
       rows: rowCentres,
-      hz,
-      db: rowDb.map((r) => Array.from(r)),
+      hz: Array.from({ length: bins }, (_, k) => k * df),
+      db: rowDb(total).map((r) => Array.from(r)),
       orders:
         by === 'rpm'
           ? (
@@ -205,26 +201,50 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
     };
   }
 
-  const rotorHz = by === 'rpm' && values.length ? quantile(values, 0.5) / 60 : null;
-  const counted = Array.from(campCount, (c, r) => (c > 0 ? r : -1)).filter((r) => r >= 0);
-  for (const ch of Object.values(channels)) {
+  // Each motor's typical rotation frequency over the analysed stretch (median of segment means).
+  const motorHz: number[] = [];
+  if (motorPrefix) {
+    for (const p of motorPrefix) {
+      const vals: number[] = [];
+      for (const [a, b] of ranges)
+        for (let s = a; s + nperseg <= b; s += step)
+          vals.push((p[s + nperseg]! - p[s]!) / nperseg / 60);
+      motorHz.push(quantile(vals, 0.5));
+    }
+  }
+  const rotorHz = motorHz.length ? motorHz.reduce((a, b) => a + b, 0) / motorHz.length : null;
+  const attribution = new Map<number, ReturnType<typeof attributeOrder> | null>();
+  for (const [name, ch] of Object.entries(channels)) {
+    const dbRows = rowAcc[name] ? rowDb(rowAcc[name]) : [];
     for (const peak of ch.peaks) {
       const verdict = labelPeak(peak.hz, {
-        rotorHz,
+        motorHz,
         blades,
         df,
-        rows: counted.map((r) => ({ value: rowCentres[r]!, db: rowDb[r]! })),
+        fs,
+        ...(input.poles ? { poles: input.poles } : {}),
+        rows: counted.map((r) => ({ value: rowCentres[r]!, db: dbRows[r]! })),
         by,
       });
-      peak.label = verdict;
-      if (orderEnergy && (verdict === 'rotor-1x' || verdict === 'rotor-2x')) {
-        const h = verdict === 'rotor-1x' ? 0 : 1;
-        const e = orderEnergy.map((o) => o[h]!);
-        const order = e.map((v, i) => [v, i] as const).sort((a, b) => b[0] - a[0]);
-        const rest = e.filter((_, i) => i !== order[0]![1]);
-        const restMean = rest.reduce((a, b) => a + b, 0) / Math.max(1, rest.length);
-        // Attribute only when one motor's own order line clearly carries the energy.
-        if (order[0] && order[0][0] > 2 * restMean) peak.motor = order[0][1] + 1;
+      peak.label = verdict.label;
+      if (verdict.aliasOfHz !== undefined) peak.aliasOfHz = verdict.aliasOfHz;
+      if (verdict.motor) peak.motor = verdict.motor;
+      else if (
+        rpms &&
+        rpms.length > 1 &&
+        (verdict.label === 'rotor-1x' || verdict.label === 'rotor-2x')
+      ) {
+        const h = verdict.label === 'rotor-1x' ? 1 : 2;
+        let a = attribution.get(h);
+        if (a === undefined) {
+          const gyro = ['gyro_x', 'gyro_y', 'gyro_z'].flatMap((c) =>
+            log.columns[c] ? [log.columns[c]!] : [],
+          );
+          a = gyro.length ? attributeOrder(gyro, rpms, ranges, fs, h) : null;
+          attribution.set(h, a);
+        }
+        if (a?.motor) peak.motor = a.motor;
+        else if (a?.candidates.length) peak.candidates = a.candidates;
       }
     }
   }
@@ -232,7 +252,12 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
 }
 
 interface LabelContext {
-  rotorHz: number | null;
+  /** Typical rotation frequency of each motor, Hz (empty without rpm). */
+  motorHz: number[];
+  /** Log rate, Hz: orders above Nyquist fold back (REFERENCES §3). */
+  fs: number;
+  /** Magnet poles, for the motors' electrical frequency (pole pairs × rotation). */
+  poles?: number;
   blades: number;
   df: number;
   rows: { value: number; db: Float64Array }[];
@@ -240,28 +265,59 @@ interface LabelContext {
 }
 
 /**
- * rotor-1x / blade-pass / rotor-2x when the peak sits on that order of the typical rotor
- * speed and, where the flight covered other speeds, the energy moved with the rotor; `frame`
- * when the peak holds its frequency across rows of different rotor speed or throttle.
+ * rotor-1x / blade-pass / rotor-2x when the peak sits on that order of some motor's typical
+ * speed and, where the flight covered other speeds, the energy moved with the rotors; `frame`
+ * when the peak holds its frequency across rows of different rotor speed or throttle. `motor`
+ * is set when exactly one motor's order line matches.
  */
-export function labelPeak(hz: number, ctx: LabelContext): PeakLabel {
-  const { rotorHz, blades, df, rows, by } = ctx;
-  const tol = (h: number) => Math.max(1.5 * df, 0.04 * h * (rotorHz ?? 0));
+export function labelPeak(
+  hz: number,
+  ctx: LabelContext,
+): { label: PeakLabel; motor?: number; aliasOfHz?: number } {
+  const { motorHz, blades, df, rows, by, fs } = ctx;
+  const fold = (f: number) => Math.abs(f - fs * Math.round(f / fs));
+  const tol = (f: number) => Math.max(1.5 * df, 0.03 * f);
   const orders: [Exclude<PeakLabel, null | 'frame'>, number][] = [
     ['rotor-1x', 1],
     ['blade-pass', blades],
     ['rotor-2x', 2],
   ];
-  const match = rotorHz ? orders.find(([, h]) => Math.abs(hz - h * rotorHz) <= tol(h)) : undefined;
+  let match: [Exclude<PeakLabel, null | 'frame'>, number] | undefined;
+  let motors: number[] = [];
+  let aliasOfHz: number | undefined;
+  for (const o of orders) {
+    const hits = motorHz.flatMap((f, i) =>
+      Math.abs(hz - fold(o[1] * f)) <= tol(o[1] * f) ? [i + 1] : [],
+    );
+    if (hits.length) {
+      match = o;
+      motors = hits;
+      const f0 = o[1] * motorHz[hits[0]! - 1]!;
+      if (f0 > fs / 2) aliasOfHz = f0;
+      break;
+    }
+  }
+  if (!match && ctx.poles && motorHz.length) {
+    // Motor electrical frequency, usually folded down from far above the log rate: not one of
+    // our labels, but worth naming in the finding.
+    const pp = ctx.poles / 2;
+    const hit = motorHz.find((f) => Math.abs(hz - fold(pp * f)) <= tol(f));
+    if (hit !== undefined) return { label: null, aliasOfHz: pp * hit };
+  }
+  const extra = aliasOfHz !== undefined ? { aliasOfHz } : {};
+  const mean = motorHz.length ? motorHz.reduce((a, b) => a + b, 0) / motorHz.length : 0;
   const k = Math.round(hz / df);
-  // Rows whose own order line is well away from this frequency test rotor vs frame.
+  // Rows whose own order line is well away from this frequency tell rotor from frame.
   let frameVotes = 0;
   let rotorVotes = 0;
   let far = 0;
   for (const row of rows) {
     if (k <= 0 || k >= row.db.length) continue;
     if (match && by === 'rpm') {
-      const kOrder = Math.round((match[1] * row.value) / 60 / df);
+      // Shift the row's mean speed to the matched motors' share of it.
+      const ratio =
+        mean > 0 ? motors.reduce((s, m) => s + motorHz[m - 1]!, 0) / motors.length / mean : 1;
+      const kOrder = Math.round(fold((match[1] * ratio * row.value) / 60) / df);
       if (Math.abs(kOrder - k) <= 3 || kOrder <= 0 || kOrder >= row.db.length) continue;
       far++;
       if (prominenceAt(row.db, kOrder) >= 6) rotorVotes++;
@@ -272,11 +328,14 @@ export function labelPeak(hz: number, ctx: LabelContext): PeakLabel {
     }
   }
   if (match) {
-    if (far >= 2 && frameVotes > rotorVotes && frameVotes >= Math.max(2, far / 2)) return 'frame';
-    return match[0];
+    if (far >= 2 && frameVotes > rotorVotes && frameVotes >= Math.max(2, far / 2))
+      return { label: 'frame' };
+    return motors.length === 1
+      ? { label: match[0], motor: motors[0]!, ...extra }
+      : { label: match[0], ...extra };
   }
-  if (far >= 3 && frameVotes >= Math.max(3, 0.6 * far)) return 'frame';
-  return null;
+  if (far >= 3 && frameVotes >= Math.max(3, 0.6 * far)) return { label: 'frame' };
+  return { label: null };
 }
 
 /** Spectrum in the ReviewDetail shape (plain arrays, dB). */
