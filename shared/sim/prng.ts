@@ -19,8 +19,14 @@ export class ParkMiller {
 
   /** Next raw state, 1…2³¹−2. */
   nextInt(): number {
-    this.z = (this.z * PM_MULTIPLIER) % PM_MODULUS;
-    return this.z;
+    // p mod (2³¹ − 1) = (p mod 2³¹) + ⌊p / 2³¹⌋, folded once (Carta's method); every step is an
+    // exact double operation and much cheaper than a floating-point %.
+    const p = this.z * PM_MULTIPLIER;
+    const hi = Math.floor(p / 2147483648);
+    let r = p - hi * 2147483648 + hi;
+    if (r >= PM_MODULUS) r -= PM_MODULUS;
+    this.z = r;
+    return r;
   }
 
   /** Uniform on the open interval (0, 1). */
@@ -28,17 +34,27 @@ export class ParkMiller {
     return this.nextInt() / PM_MODULUS;
   }
 
-  /** Standard normal by the Box–Muller transform, the second value of each pair cached. */
+  /**
+   * Standard normal by Marsaglia's polar method (a Box–Muller variant without trigonometry),
+   * the second value of each pair cached.
+   */
   normal(): number {
     if (this.spare === this.spare) {
       const v = this.spare;
       this.spare = NaN;
       return v;
     }
-    const r = Math.sqrt(-2 * Math.log(this.uniform()));
-    const a = 2 * Math.PI * this.uniform();
-    this.spare = r * Math.sin(a);
-    return r * Math.cos(a);
+    let x: number;
+    let y: number;
+    let s: number;
+    do {
+      x = 2 * this.uniform() - 1;
+      y = 2 * this.uniform() - 1;
+      s = x * x + y * y;
+    } while (s >= 1 || s === 0);
+    const f = Math.sqrt((-2 * Math.log(s)) / s);
+    this.spare = y * f;
+    return x * f;
   }
 }
 

@@ -351,17 +351,21 @@ export function simulate(
   const resonanceRng = streamFor(seed, 4);
   const phaseRng = streamFor(seed, 5);
 
-  // Pilot thumbs: a few slow incommensurate sinusoids per axis, deg/s.
-  const wobble = [0, 1, 2].map(() =>
-    Array.from({ length: 5 }, () => ({
-      hz: 0.2 + 2.3 * pilotRng.uniform(),
-      amp: 0.6 + 0.8 * pilotRng.uniform(),
-      phase: 2 * Math.PI * pilotRng.uniform(),
-    })),
-  );
+  // Pilot thumbs: five slow incommensurate sinusoids per axis, deg/s.
+  const WOBBLES = 5;
+  const wobbleW = new Float64Array(3 * WOBBLES);
+  const wobbleAmp = new Float64Array(3 * WOBBLES);
+  const wobblePhase = new Float64Array(3 * WOBBLES);
+  for (let k = 0; k < 3 * WOBBLES; k++) {
+    wobbleW[k] = 2 * Math.PI * (0.2 + 2.3 * pilotRng.uniform());
+    wobbleAmp[k] = 0.6 + 0.8 * pilotRng.uniform();
+    wobblePhase[k] = 2 * Math.PI * pilotRng.uniform();
+  }
   const wobbleAt = (axis: number, t: number) => {
     let s = 0;
-    for (const w of wobble[axis]!) s += w.amp * Math.sin(2 * Math.PI * w.hz * t + w.phase);
+    for (let k = axis * WOBBLES; k < (axis + 1) * WOBBLES; k++) {
+      s += wobbleAmp[k]! * Math.sin(wobbleW[k]! * t + wobblePhase[k]!);
+    }
     return s;
   };
 
