@@ -128,18 +128,16 @@ export class FleetService {
   async update(userId: string, id: string, patch: AircraftPatch): Promise<AircraftDto> {
     const { aircraft } = await this.access(userId, id, 'aircraft.update');
     const next: Aircraft = { ...aircraft, ...patch, updatedAt: Date.now() };
-    await this.ds
-      .getRepository(Aircraft)
-      .update(
-        { id },
-        {
-          name: next.name,
-          airframe: next.airframe,
-          components: next.components,
-          notes: next.notes,
-          updatedAt: next.updatedAt,
-        },
-      );
+    await this.ds.getRepository(Aircraft).update(
+      { id },
+      {
+        name: next.name,
+        airframe: next.airframe,
+        components: next.components,
+        notes: next.notes,
+        updatedAt: next.updatedAt,
+      },
+    );
     return (await this.toDtos([next]))[0]!;
   }
 
