@@ -110,6 +110,7 @@ function parseWords(header: string): ParsedHeader {
   let unit: Unit | null = bracketUnit === null ? null : normalizeUnit(bracketUnit);
   let unitText = bracketUnit;
   const words = name
+    .replace(/erpm/gi, ' erpm ')
     .replace(/([a-z])([A-Z])/g, '$1 $2')
     .replace(/([A-Za-z])([0-9])/g, '$1 $2')
     .replace(/([0-9])([A-Za-z])/g, '$1 $2')
@@ -287,7 +288,7 @@ export function proposeColumnMap(headers: string[]): ProposedColumnMap {
         unit: null,
         reason: 'no word we recognise; pick a channel or leave it out',
       };
-    let channel: string | null = null;
+    let channel: string | null;
     const axes = axisNames[g.family];
     if (axes) {
       channel = g.slot === null ? null : (axes[g.slot] ?? null);

@@ -35,7 +35,7 @@ export function inspectHeader(firstBytes: Uint8Array): HeaderPreview {
   }
   // The bytes are the start of a file: a header cut by the end of them is still shown.
   const pre = readPreamble(firstBytes, true);
-  if (!pre) throw new LogFormatError('no-header', 'No header row found.', { line: 1 });
+  if (!pre) throw new LogFormatError('no-header', 'Line 1: no header row found.', { line: 1 });
   const sampleRows: string[][] = [];
   let pos = pre.dataStart;
   if (pre.endsWithCR && firstBytes[pos] === 10) pos++;

@@ -73,7 +73,7 @@ export function readPreamble(bytes: Uint8Array, final: boolean): Preamble | null
         throw new LogFormatError(
           line === 1 && Object.keys(metadata).length === 0 ? 'empty-file' : 'no-header',
           line === 1 && Object.keys(metadata).length === 0
-            ? 'The file is empty: there is nothing to import.'
+            ? 'Line 1: the file is empty; there is nothing to import.'
             : `Line ${line}: the file ends before a header row (time, motor1, …) was found.`,
           { line },
         );

@@ -116,7 +116,7 @@ export class LogReader {
     if (this.phase === 'done') throw new Error('LogReader.finish called twice');
     if (this.phase === 'preamble') {
       const pre = readPreamble(this.head.subarray(0, this.headLen), true);
-      if (!pre) throw new LogFormatError('no-header', 'No header row found.', { line: 1 });
+      if (!pre) throw new LogFormatError('no-header', 'Line 1: no header row found.', { line: 1 });
       this.startData(pre);
       const rest = this.head.subarray(pre.dataStart, this.headLen);
       this.head = new Uint8Array(0);
@@ -340,7 +340,7 @@ export class LogReader {
       for (;;) {
         const kind = kinds[c]!;
         let p = pos;
-        let v = 0;
+        let v: number;
         if (kind !== SKIP) {
           // Fast path: [-]digits[.digits] straight into a double.
           let neg = false;
@@ -628,8 +628,8 @@ export class LogReader {
     if (rows === 0) {
       throw new LogFormatError(
         'no-rows',
-        `The file has a header (line ${pre.headerLine}) but no samples after it.`,
-        { line: pre.headerLine + 1, headers: pre.headers },
+        `Line ${pre.headerLine}: the file has a header but no samples after it.`,
+        { line: pre.headerLine, headers: pre.headers },
       );
     }
     const channels: string[] = [];

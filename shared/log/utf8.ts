@@ -13,9 +13,9 @@ export function decodeUtf8(bytes: Uint8Array, start = 0, end = bytes.length): st
       i++;
       continue;
     }
-    let need = 0;
-    let cp = 0;
-    let min = 0;
+    let need: number;
+    let cp: number;
+    let min: number;
     if (b0 >= 0xc2 && b0 <= 0xdf) {
       need = 1;
       cp = b0 & 0x1f;

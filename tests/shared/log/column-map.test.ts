@@ -1,0 +1,96 @@
+import { describe, expect, it } from 'vitest';
+import { ColumnMap, proposalToColumnMap, proposeColumnMap } from '../../../shared/log/column-map';
+import { parseLog } from '../../../shared/log/parse';
+import { enc } from './helpers';
+
+describe('proposeColumnMap', () => {
+  it('proposes channels and units from the words in foreign headers, with reasons', () => {
+    const p = proposeColumnMap([
+      'Timestamp [us]',
+      'Motor 0',
+      'Motor 1',
+      'Motor 2',
+      'Motor 3',
+      'GyroX (rad/s)',
+      'gyro pitch',
+      'Accel Z [m/s^2]',
+      'Roll Setpoint',
+      'Throttle %',
+      'Battery Voltage (mV)',
+      'Current',
+      'ESC 1 current',
+      'eRPM 1',
+      'Flight Mode',
+    ]);
+    const by = Object.fromEntries(p.entries.map((e) => [e.header, e]));
+    expect(by['Timestamp [us]']).toMatchObject({ channel: 'time', unit: 'us' });
+    // Numbered from 0 in the file, so every motor moves up by one.
+    expect(['Motor 0', 'Motor 1', 'Motor 2', 'Motor 3'].map((h) => by[h]!.channel)).toEqual([
+      'motor1',
+      'motor2',
+      'motor3',
+      'motor4',
+    ]);
+    expect(by['Motor 0']!.reason).toMatch(/numbered from 0/);
+    expect(by['GyroX (rad/s)']).toMatchObject({ channel: 'gyro_x', unit: 'rad/s' });
+    expect(by['gyro pitch']).toMatchObject({ channel: 'gyro_y', unit: null });
+    expect(by['gyro pitch']!.reason).toMatch(/no unit/);
+    expect(by['Accel Z [m/s^2]']).toMatchObject({ channel: 'acc_z', unit: 'm/s2' });
+    expect(by['Roll Setpoint']).toMatchObject({ channel: 'sp_roll' });
+    expect(by['Throttle %']!.channel).toBe('throttle');
+    expect(by['Battery Voltage (mV)']).toMatchObject({ channel: 'vbat', unit: 'mV' });
+    expect(by['Current']!.channel).toBe('ibat');
+    expect(by['ESC 1 current']!.channel).toBe('imotor1');
+    expect(by['eRPM 1']).toMatchObject({ channel: 'rpm1', unit: 'erpm' });
+    expect(by['Flight Mode']).toMatchObject({ channel: null, unit: null });
+    expect(p.missing).toEqual([]);
+  });
+
+  it('never proposes one channel twice and lists what is still missing', () => {
+    const p = proposeColumnMap(['gyro x', 'rate x', 'voltage']);
+    expect(p.entries[0]!.channel).toBe('gyro_x');
+    expect(p.entries[1]).toMatchObject({ channel: null });
+    expect(p.entries[1]!.reason).toMatch(/already taken/);
+    expect(p.missing).toEqual(['time', 'motor1']);
+  });
+
+  it('only proposes: the reader still needs the map handed to it', () => {
+    const text = 'Timestamp [ms],Motor 1 (%)\n0,50\n10,55\n';
+    expect(() => parseLog(enc(text))).toThrow(/column map/);
+    const map = proposalToColumnMap(proposeColumnMap(['Timestamp [ms]', 'Motor 1 (%)']));
+    expect(map).toEqual({
+      columns: {
+        'Timestamp [ms]': { channel: 'time', unit: 'ms' },
+        'Motor 1 (%)': { channel: 'motor1', unit: '%' },
+      },
+    });
+    const log = parseLog(enc(text), { columnMap: map });
+    expect(Array.from(log.columns.motor1!)).toEqual([0.5, 0.55].map(Math.fround));
+  });
+});
+
+describe('ColumnMap schema (shared with the server for import presets)', () => {
+  it('accepts a valid preset', () => {
+    const preset = {
+      columns: {
+        t_ms: { channel: 'time', unit: 'ms' },
+        'out A': { channel: 'motor1', unit: 'raw', min: 48, max: 2047 },
+        'gyro roll': { channel: 'gyro_x', scale: 0.1 },
+      },
+    };
+    expect(ColumnMap.parse(preset)).toEqual(preset);
+  });
+
+  it.each([
+    [{ columns: { a: { channel: 'motor0' } } }, /not one of our channels/],
+    [{ columns: { a: { channel: 'motor1', unit: 'furlongs' } } }, /unknown unit/],
+    [{ columns: { a: { channel: 'gyro_x', unit: 'g' } } }, /deg\/s, rad\/s/],
+    [{ columns: { a: { channel: 'motor1', unit: 'raw' } } }, /min/],
+    [{ columns: { a: { channel: 'vbat', scale: 0 } } }, /scale/],
+    [{ columns: { a: { channel: 'vbat', offset: Infinity } } }, /.+/],
+  ])('rejects %j', (input, message) => {
+    const r = ColumnMap.safeParse(input);
+    expect(r.success).toBe(false);
+    expect(r.error?.issues.map((i) => i.message).join(' ')).toMatch(message);
+  });
+});
