@@ -7,6 +7,7 @@ import '@fontsource/jetbrains-mono/400.css';
 import '@fontsource/jetbrains-mono/600.css';
 import './styles.css';
 import { Providers } from './app/providers';
+import { registerServiceWorker } from './lib/register-service-worker';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
@@ -16,3 +17,5 @@ createRoot(root).render(
     <Providers />
   </StrictMode>,
 );
+
+if (import.meta.env.PROD) registerServiceWorker();

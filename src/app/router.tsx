@@ -1,11 +1,23 @@
 import { createBrowserRouter } from 'react-router-dom';
 import { AppLayout } from './routes/app-layout';
+import { DevMailRoute } from './routes/dev-mail';
 import { FleetRoute } from './routes/fleet';
-import { ImportRoute } from './routes/import';
-import { TeamRoute } from './routes/team';
-import { ReviewRoute } from './routes/review';
+import { InviteRoute } from './routes/invite';
+import { NewAircraftRoute } from './routes/new-aircraft';
+import { NewTeamRoute } from './routes/new-team';
 import { NotFoundRoute } from './routes/not-found';
+import { ResetConfirmRoute } from './routes/reset-confirm';
+import { ResetRequestRoute } from './routes/reset-request';
 import { RouteError } from './routes/route-error';
+import { SignInRoute } from './routes/sign-in';
+import { SignUpRoute } from './routes/sign-up';
+import { TeamRoute } from './routes/team';
+
+// The heavy screens (charts, the log reader) load on first visit; the service worker precaches
+// their chunks, so they open offline too.
+const lazyImport = async () => ({ Component: (await import('./routes/import')).ImportRoute });
+const lazyReview = async () => ({ Component: (await import('./routes/review')).ReviewRoute });
+const lazyAircraft = async () => ({ Component: (await import('./routes/aircraft')).AircraftRoute });
 
 export const router = createBrowserRouter([
   {
@@ -14,9 +26,18 @@ export const router = createBrowserRouter([
     errorElement: <RouteError />,
     children: [
       { index: true, element: <FleetRoute /> },
-      { path: 'import', element: <ImportRoute /> },
+      { path: 'import', lazy: lazyImport },
       { path: 'team', element: <TeamRoute /> },
-      { path: 'flights/:flightId/:section?', element: <ReviewRoute /> },
+      { path: 'teams/new', element: <NewTeamRoute /> },
+      { path: 'aircraft/new', element: <NewAircraftRoute /> },
+      { path: 'aircraft/:aircraftId/:section?', lazy: lazyAircraft },
+      { path: 'flights/:flightId/:section?', lazy: lazyReview },
+      { path: 'sign-in', element: <SignInRoute /> },
+      { path: 'sign-up', element: <SignUpRoute /> },
+      { path: 'reset', element: <ResetRequestRoute /> },
+      { path: 'reset/:token', element: <ResetConfirmRoute /> },
+      { path: 'invite/:token', element: <InviteRoute /> },
+      { path: 'dev/mail', element: <DevMailRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -42,7 +42,11 @@ export async function apiFetch<S extends z.ZodType>(
       const { code, message, issues } = parsed.data.error;
       throw new ApiError(response.status, code, message, issues);
     }
-    throw new ApiError(response.status, 'http_' + response.status, response.statusText || 'Request failed');
+    throw new ApiError(
+      response.status,
+      'http_' + response.status,
+      response.statusText || 'Request failed',
+    );
   }
   return schema.parse(body);
 }

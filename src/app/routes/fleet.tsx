@@ -1,15 +1,187 @@
+import { useMemo } from 'react';
+import { Link, useSearchParams } from 'react-router-dom';
+import { FlightListQuery } from '../../../shared/schemas/flights';
+import { ErrorNote } from '../../components/ui/alert';
+import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
+import { Empty, Loading, Panel } from '../../components/ui/panel';
+import { useTeamAircraft } from '../../features/aircraft/api/aircraft-queries';
+import { AircraftCards } from '../../features/aircraft/components/aircraft-cards';
+import type { FlightFilter } from '../../features/fleet/api/fleet-api';
+import { useAwaitingReview, useFlightList } from '../../features/fleet/api/fleet-queries';
+import { FlightFilters } from '../../features/fleet/components/flight-filters';
+import { FlightTable } from '../../features/fleet/components/flight-table';
+import { useActiveTeam } from '../../features/session/active-team';
+import { RequireSession } from '../../features/session/components/require-session';
+import { LocalFlightsPanel } from '../../features/sync/components/local-flights-panel';
+import { can } from '../../lib/permissions';
+import { NoTeam } from './no-team';
+
+const filterKeys = ['aircraftId', 'severity', 'review', 'openComments', 'from', 'to'] as const;
+
+/** The list filter lives in the address so a filtered view can be bookmarked and shared. */
+function useFilterParams(): [FlightFilter, (next: FlightFilter) => void] {
+  const [params, setParams] = useSearchParams();
+  const filter = useMemo(() => {
+    const raw: Record<string, string> = {};
+    for (const k of filterKeys) {
+      const v = params.get(k);
+      if (v) raw[k] = v;
+    }
+    // Anything malformed in a hand-edited address is dropped rather than sent.
+    const parsed = FlightListQuery.pick({
+      aircraftId: true,
+      severity: true,
+      review: true,
+      from: true,
+      to: true,
+    }).safeParse(raw);
+    const f: FlightFilter = parsed.success ? { ...parsed.data } : {};
+    if (raw.openComments === 'true' || raw.openComments === 'false')
+      f.openComments = raw.openComments;
+    return f;
+  }, [params]);
+  const set = (next: FlightFilter) => {
+    const p = new URLSearchParams();
+    for (const k of filterKeys) {
+      const v = next[k];
+      if (v !== undefined && v !== '') p.set(k, String(v));
+    }
+    setParams(p, { replace: true });
+  };
+  return [filter, set];
+}
 
 export function FleetRoute() {
+  return (
+    <RequireSession>
+      <Fleet />
+    </RequireSession>
+  );
+}
+
+function Fleet() {
+  const { team } = useActiveTeam();
+  if (!team) return <NoTeam title="Fleet" />;
+  return <TeamFleet teamId={team.id} teamName={team.name} role={team.role} />;
+}
+
+function TeamFleet({
+  teamId,
+  teamName,
+  role,
+}: {
+  teamId: string;
+  teamName: string;
+  role: Parameters<typeof can>[0];
+}) {
+  const aircraft = useTeamAircraft(teamId);
+  const awaiting = useAwaitingReview(teamId);
+  const [filter, setFilter] = useFilterParams();
+  const flights = useFlightList(teamId, filter);
+  const aircraftOptions = (aircraft.data?.aircraft ?? []).map((a) => ({ id: a.id, name: a.name }));
+  const rows = flights.data?.pages.flatMap((p) => p.flights) ?? [];
+
   return (
     <>
       <PageHeader
         title="Fleet"
-        lead="Every aircraft of your team with its last verdict and the flights waiting for review."
+        lead={`${teamName}: every aircraft with its last verdict, the flights waiting for review, and what this device has not synced yet.`}
+        actions={
+          can(role, 'aircraft.create') ? (
+            <Link
+              to="/aircraft/new"
+              className="rounded bg-slate-brand px-3 py-1.5 text-sm font-medium text-paper hover:bg-ink"
+            >
+              Add aircraft
+            </Link>
+          ) : undefined
+        }
       />
-      <p className="rounded border border-dashed border-line bg-paper-raised p-6 text-sm text-ink-soft">
-        The fleet list arrives with team sign-in. Until then, import a log to read its verdict.
-      </p>
+      <div className="space-y-6">
+        {aircraft.isPending ? (
+          <Loading what="aircraft" />
+        ) : aircraft.isError ? (
+          <ErrorNote error={aircraft.error} />
+        ) : aircraft.data.aircraft.length === 0 ? (
+          <Empty>
+            No aircraft yet.{' '}
+            {can(role, 'aircraft.create') ? (
+              <Link to="/aircraft/new" className="text-accent underline">
+                Add the first one from a layout preset.
+              </Link>
+            ) : (
+              'A tuner or the owner adds them.'
+            )}
+          </Empty>
+        ) : (
+          <AircraftCards aircraft={aircraft.data.aircraft} />
+        )}
+
+        <div className="grid gap-4 md:grid-cols-2">
+          <Panel title="Awaiting review">
+            {awaiting.isPending ? (
+              <Loading what="flights awaiting review" />
+            ) : awaiting.isError ? (
+              <ErrorNote error={awaiting.error} />
+            ) : awaiting.data.flights.length === 0 ? (
+              <p className="text-sm text-ink-soft">Nobody has asked for a review.</p>
+            ) : (
+              <ul className="divide-y divide-line/70 text-sm">
+                {awaiting.data.flights.map((f) => (
+                  <li key={f.id} className="flex items-center gap-3 py-1.5">
+                    <Link to={`/flights/${f.id}`} className="text-slate-brand hover:underline">
+                      {f.aircraftName}
+                    </Link>
+                    <span className="text-xs text-ink-soft">by {f.pilot.name}</span>
+                    <span className="num ml-auto text-xs text-ink-faint">
+                      {new Date(f.recordedAt).toLocaleDateString()}
+                    </span>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Panel>
+          <Panel title="On this device">
+            <LocalFlightsPanel
+              teamId={teamId}
+              aircraft={aircraftOptions}
+              canUpload={can(role, 'flights.upload')}
+            />
+          </Panel>
+        </div>
+
+        <Panel title="Flights">
+          <div className="space-y-4">
+            <FlightFilters filter={filter} aircraft={aircraftOptions} onChange={setFilter} />
+            {flights.isPending ? (
+              <Loading what="flights" />
+            ) : flights.isError ? (
+              <ErrorNote error={flights.error} />
+            ) : rows.length === 0 ? (
+              <Empty>
+                No flights match.{' '}
+                <Link to="/import" className="text-accent underline">
+                  Import a log
+                </Link>{' '}
+                to add one.
+              </Empty>
+            ) : (
+              <>
+                <FlightTable flights={rows} />
+                {flights.hasNextPage && (
+                  <Button
+                    onClick={() => void flights.fetchNextPage()}
+                    disabled={flights.isFetchingNextPage}
+                  >
+                    {flights.isFetchingNextPage ? 'Loading…' : 'Show older flights'}
+                  </Button>
+                )}
+              </>
+            )}
+          </div>
+        </Panel>
+      </div>
     </>
   );
 }

@@ -1,3 +1,4 @@
+import { pathTo } from '../../../../shared/api/paths';
 import {
   MeResponse,
   OkResponse,
@@ -9,31 +10,21 @@ import {
 import { AcceptInviteResponse, InvitePreview } from '../../../../shared/schemas/teams';
 import { apiFetch } from '../../../lib/api-fetch';
 
-const enc = encodeURIComponent;
-
-export const authPaths = {
-  signIn: '/api/auth/sign-in',
-  signUp: '/api/auth/sign-up',
-  resetRequest: '/api/auth/reset/request',
-  resetConfirm: '/api/auth/reset/confirm',
-  invite: (token: string) => `/api/invites/${enc(token)}`,
-  acceptInvite: (token: string) => `/api/invites/${enc(token)}/accept`,
-};
-
 export const signIn = (input: SignInInput) =>
-  apiFetch(authPaths.signIn, MeResponse, { method: 'POST', json: input });
+  apiFetch(pathTo('signIn'), MeResponse, { method: 'POST', json: input });
 
 export const signUp = (input: SignUpInput) =>
-  apiFetch(authPaths.signUp, MeResponse, { method: 'POST', json: input });
+  apiFetch(pathTo('signUp'), MeResponse, { method: 'POST', json: input });
 
 export const requestReset = (input: ResetRequestInput) =>
-  apiFetch(authPaths.resetRequest, OkResponse, { method: 'POST', json: input });
+  apiFetch(pathTo('resetRequest'), OkResponse, { method: 'POST', json: input });
 
+/** Sets the new password and signs in on this device. */
 export const confirmReset = (input: ResetConfirmInput) =>
-  apiFetch(authPaths.resetConfirm, OkResponse, { method: 'POST', json: input });
+  apiFetch(pathTo('resetConfirm'), MeResponse, { method: 'POST', json: input });
 
 export const fetchInvitePreview = (token: string) =>
-  apiFetch(authPaths.invite(token), InvitePreview);
+  apiFetch(pathTo('invite', { token }), InvitePreview);
 
 export const acceptInvite = (token: string) =>
-  apiFetch(authPaths.acceptInvite(token), AcceptInviteResponse, { method: 'POST' });
+  apiFetch(pathTo('acceptInvite', { token }), AcceptInviteResponse, { method: 'POST' });

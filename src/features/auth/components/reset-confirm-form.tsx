@@ -1,14 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { ResetConfirmInput } from '../../../../shared/schemas/auth';
+import { ResetConfirmInput, type Me } from '../../../../shared/schemas/auth';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
 import { useConfirmReset } from '../api/auth-queries';
 
-export function ResetConfirmForm({ token, onDone }: { token: string; onDone: () => void }) {
+export function ResetConfirmForm({ token, onDone }: { token: string; onDone: (me: Me) => void }) {
   const confirm = useConfirmReset();
   const [formError, setFormError] = useState<string | null>(null);
   const {
@@ -26,7 +26,7 @@ export function ResetConfirmForm({ token, onDone }: { token: string; onDone: () 
       onSubmit={handleSubmit((input) => {
         setFormError(null);
         confirm.mutate(input, {
-          onSuccess: onDone,
+          onSuccess: (answer) => onDone(answer.user),
           onError: (e) => setFormError(applyServerError(e, setError, ['password'])),
         });
       })}

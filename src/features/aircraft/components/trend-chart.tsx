@@ -1,0 +1,121 @@
+import ReactEChartsCore from 'echarts-for-react/esm/core';
+import { useMemo } from 'react';
+import { echarts } from '../../../components/charts/echarts';
+import { inkSeries } from '../../../components/charts/palette';
+
+export interface TrendSeries {
+  name: string;
+  color: string;
+  /** [time ms, value or null] per flight, oldest first. */
+  points: [number, number | null][];
+  dashed?: boolean;
+}
+
+export interface TrendEvent {
+  /** ms since epoch */
+  t: number;
+  label: string;
+}
+
+/**
+ * One quantity across an aircraft's flights on a time axis, with service-log events drawn as
+ * vertical lines so a step in the trend can be read against the repair that caused it.
+ */
+export function TrendChart({
+  series,
+  yName,
+  events = [],
+  band,
+  height = 200,
+  ariaLabel,
+}: {
+  series: TrendSeries[];
+  yName: string;
+  events?: TrendEvent[];
+  /** Shaded range, e.g. the watch limits around zero deviation. */
+  band?: { from: number; to: number; label: string };
+  height?: number;
+  ariaLabel: string;
+}) {
+  const option = useMemo(
+    () => ({
+      animation: false,
+      grid: { left: 52, right: 18, top: 30, bottom: 28 },
+      legend: {
+        top: 0,
+        left: 48,
+        itemWidth: 14,
+        itemHeight: 3,
+        textStyle: { fontSize: 11, color: inkSeries.axis },
+      },
+      tooltip: {
+        trigger: 'axis',
+        textStyle: { fontSize: 11 },
+        valueFormatter: (v: unknown) => (typeof v === 'number' ? v.toFixed(2) : '–'),
+      },
+      xAxis: {
+        type: 'time',
+        axisLabel: { color: inkSeries.axis, fontSize: 10 },
+        splitLine: { show: false },
+      },
+      yAxis: {
+        type: 'value',
+        name: yName,
+        scale: true,
+        nameTextStyle: { fontSize: 10, color: inkSeries.axis, align: 'left' },
+        axisLabel: { color: inkSeries.axis, fontSize: 10 },
+        splitLine: { lineStyle: { color: inkSeries.grid } },
+      },
+      series: series.map((s, i) => ({
+        type: 'line',
+        name: s.name,
+        data: s.points,
+        connectNulls: false,
+        showSymbol: true,
+        symbolSize: 5,
+        color: s.color,
+        lineStyle: { width: 1.4, type: s.dashed ? 'dashed' : 'solid' },
+        emphasis: { disabled: true },
+        markArea:
+          i === 0 && band
+            ? {
+                silent: true,
+                itemStyle: { color: inkSeries.band },
+                label: { show: false },
+                data: [[{ yAxis: band.from, name: band.label }, { yAxis: band.to }]],
+              }
+            : undefined,
+        markLine:
+          i === 0 && events.length > 0
+            ? {
+                symbol: 'none',
+                silent: true,
+                label: {
+                  fontSize: 9,
+                  formatter: '{b}',
+                  color: inkSeries.axis,
+                  position: 'insideEndTop',
+                },
+                data: events.map((e) => ({
+                  xAxis: e.t,
+                  name: e.label,
+                  lineStyle: { color: inkSeries.cursor, type: 'dotted', width: 1 },
+                })),
+              }
+            : undefined,
+      })),
+    }),
+    [series, yName, events, band],
+  );
+  return (
+    <div role="img" aria-label={ariaLabel}>
+      <ReactEChartsCore
+        echarts={echarts}
+        option={option}
+        notMerge
+        lazyUpdate
+        style={{ height, width: '100%' }}
+      />
+    </div>
+  );
+}

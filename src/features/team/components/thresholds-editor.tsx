@@ -1,0 +1,191 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { defaultThresholds, Thresholds } from '../../../../shared/analysis/thresholds';
+import { Alert, ErrorNote } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/field';
+import { Loading } from '../../../components/ui/panel';
+import { applyServerError } from '../../../lib/form-errors';
+import { useSaveThresholds } from '../api/team-mutations';
+import { useThresholds } from '../api/team-queries';
+
+type Key = keyof Thresholds;
+interface Row {
+  key: Key;
+  label: string;
+  unit: string;
+}
+
+const groups: { title: string; rows: Row[] }[] = [
+  {
+    title: 'Armed and hover',
+    rows: [
+      { key: 'armedMinOutput', label: 'Motor counts as spinning above', unit: '0–1' },
+      { key: 'hoverRateDegS', label: 'Hover: roll and pitch rate under', unit: 'deg/s' },
+      { key: 'hoverYawRateDegS', label: 'Hover: yaw rate under', unit: 'deg/s' },
+      { key: 'hoverCollectiveBand', label: 'Hover: collective within ±', unit: '0–1' },
+      { key: 'hoverAboveIdle', label: 'Hover: collective above idle by', unit: '0–1' },
+      { key: 'hoverMinS', label: 'Shortest hover stretch', unit: 's' },
+      { key: 'minHoverForVerdictS', label: 'Hover needed to judge balance', unit: 's' },
+    ],
+  },
+  {
+    title: 'Balance, CG and torque split',
+    rows: [
+      { key: 'motorWatchPct', label: 'Motor above expectation: watch', unit: '%' },
+      { key: 'motorActPct', label: 'Motor above expectation: act', unit: '%' },
+      { key: 'cgWatchPctOfArm', label: 'CG offset: watch', unit: '% of arm' },
+      { key: 'cgActPctOfArm', label: 'CG offset: act', unit: '% of arm' },
+      { key: 'torqueSplitWatchPct', label: 'Torque split asymmetry: watch', unit: '%' },
+      { key: 'torqueSplitActPct', label: 'Torque split asymmetry: act', unit: '%' },
+    ],
+  },
+  {
+    title: 'Vibration',
+    rows: [
+      { key: 'peakProminenceDb', label: 'Peak stands above its neighbours by', unit: 'dB' },
+      { key: 'gyroToneWatchDegS', label: 'Gyro tone: watch', unit: 'deg/s' },
+      { key: 'gyroToneActDegS', label: 'Gyro tone: act', unit: 'deg/s' },
+      { key: 'accToneWatchG', label: 'Accelerometer tone: watch', unit: 'g' },
+      { key: 'accToneActG', label: 'Accelerometer tone: act', unit: 'g' },
+    ],
+  },
+  {
+    title: 'Headroom',
+    rows: [
+      { key: 'saturationLevel', label: 'Output counted as saturated', unit: '0–1' },
+      { key: 'saturationWatchPct', label: 'Time saturated: watch', unit: '% armed' },
+      { key: 'saturationActPct', label: 'Time saturated: act', unit: '% armed' },
+      { key: 'escOverActS', label: 'Time over ESC rating: act', unit: 's' },
+    ],
+  },
+  {
+    title: 'Battery and tracking',
+    rows: [
+      { key: 'cellWatchV', label: 'Lowest cell under load: watch', unit: 'V' },
+      { key: 'cellActV', label: 'Lowest cell under load: act', unit: 'V' },
+      { key: 'trackingLagWatchMs', label: 'Gyro lag behind setpoint: watch', unit: 'ms' },
+      { key: 'trackingLagActMs', label: 'Gyro lag behind setpoint: act', unit: 'ms' },
+    ],
+  },
+];
+
+/** Pairs where `act` must be the stricter limit; for cells a lower voltage is worse. */
+const pairs: [Key, Key, 'higher' | 'lower'][] = [
+  ['motorWatchPct', 'motorActPct', 'higher'],
+  ['cgWatchPctOfArm', 'cgActPctOfArm', 'higher'],
+  ['torqueSplitWatchPct', 'torqueSplitActPct', 'higher'],
+  ['gyroToneWatchDegS', 'gyroToneActDegS', 'higher'],
+  ['accToneWatchG', 'accToneActG', 'higher'],
+  ['saturationWatchPct', 'saturationActPct', 'higher'],
+  ['cellWatchV', 'cellActV', 'lower'],
+  ['trackingLagWatchMs', 'trackingLagActMs', 'higher'],
+];
+
+const ThresholdsForm = Thresholds.superRefine((t, ctx) => {
+  for (const [watch, act, worse] of pairs)
+    if (worse === 'higher' ? t[act] <= t[watch] : t[act] >= t[watch])
+      ctx.addIssue({
+        code: 'custom',
+        path: [act],
+        message: worse === 'higher' ? 'act must be above watch' : 'act must be below watch',
+      });
+});
+
+const num = { setValueAs: (v: unknown) => (v === '' ? undefined : Number(v)) };
+
+/** The limits the verdict judges against, for this team; tuners and the owner change them. */
+export function ThresholdsEditor({ teamId, canEdit }: { teamId: string; canEdit: boolean }) {
+  const current = useThresholds(teamId);
+  if (current.isPending) return <Loading what="thresholds" />;
+  if (current.isError) return <ErrorNote error={current.error} />;
+  return (
+    <ThresholdsForm_
+      teamId={teamId}
+      canEdit={canEdit}
+      values={current.data.thresholds}
+      isDefault={current.data.isDefault}
+      updatedAt={current.data.updatedAt}
+    />
+  );
+}
+
+function ThresholdsForm_({
+  teamId,
+  canEdit,
+  values,
+  isDefault,
+  updatedAt,
+}: {
+  teamId: string;
+  canEdit: boolean;
+  values: Thresholds;
+  isDefault: boolean;
+  updatedAt: string | null;
+}) {
+  const save = useSaveThresholds(teamId);
+  const [formError, setFormError] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    reset,
+    setError,
+    formState: { errors, isDirty },
+  } = useForm({ resolver: zodResolver(ThresholdsForm), values });
+
+  return (
+    <form
+      noValidate
+      aria-label="Thresholds"
+      onSubmit={handleSubmit((input) => {
+        setFormError(null);
+        save.mutate(input, {
+          onError: (e) => setFormError(applyServerError(e, setError, Object.keys(values) as Key[])),
+        });
+      })}
+      className="space-y-4"
+    >
+      <p className="text-xs text-ink-soft">
+        {isDefault
+          ? 'This team uses the defaults.'
+          : `Saved ${updatedAt ? new Date(updatedAt).toLocaleString() : ''}.`}{' '}
+        New limits apply to flights analysed from now on; a flight keeps the verdict it was given.
+      </p>
+      {formError && <Alert tone="error">{formError}</Alert>}
+      <fieldset disabled={!canEdit} className="grid gap-5 md:grid-cols-2">
+        {groups.map((g) => (
+          <div key={g.title}>
+            <h3 className="mb-2 text-xs font-semibold tracking-wide text-ink-soft uppercase">
+              {g.title}
+            </h3>
+            <div className="grid grid-cols-2 gap-2">
+              {g.rows.map((r) => (
+                <TextField
+                  key={r.key}
+                  label={`${r.label} (${r.unit})`}
+                  numeric
+                  inputMode="decimal"
+                  hint={`default ${defaultThresholds[r.key]}`}
+                  error={errors[r.key]?.message}
+                  {...register(r.key, num)}
+                />
+              ))}
+            </div>
+          </div>
+        ))}
+      </fieldset>
+      {canEdit && (
+        <div className="flex gap-2">
+          <Button type="submit" tone="primary" disabled={!isDirty || save.isPending}>
+            Save thresholds
+          </Button>
+          <Button onClick={() => reset(defaultThresholds, { keepDefaultValues: true })}>
+            Fill in defaults
+          </Button>
+        </div>
+      )}
+      {save.isSuccess && !isDirty && <Alert tone="ok">Thresholds saved.</Alert>}
+    </form>
+  );
+}
