@@ -106,8 +106,11 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
   const effort = motorCount > 0 ? decomposeEffort(airframe, motors, log.rows) : null;
 
   let balance: BalanceResult | null = null;
+  let hoverOutput: number | null = null;
   if (motorCount > 0 && seg.hoverS > 0) {
-    balance = analyseBalance(airframe, hoverMeans(motors, rpms, seg.hover, gamma));
+    const means = hoverMeans(motors, rpms, seg.hover, gamma);
+    balance = analyseBalance(airframe, means);
+    hoverOutput = means.output.reduce((a, b) => a + b, 0) / motorCount;
   }
   const diagnosis = diagnose(airframe, balance, seg.hoverS, th);
 
@@ -142,6 +145,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     airframeAssumed: assumed,
     hoverS: seg.hoverS,
     armedS: seg.armedS,
+    hoverOutput,
     hoverAtS: longestMid(time, seg.hover),
     balance,
     diagnosis,

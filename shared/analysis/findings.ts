@@ -8,13 +8,14 @@ import type { PowerResult } from './power';
 import type { Thresholds } from './thresholds';
 import type { TrackingResult } from './tracking';
 import type { VibrationResult } from './vibration';
-import { toneAmplitude } from './dsp/peaks';
 
 export interface FindingInput {
   airframe: Airframe;
   airframeAssumed: boolean;
   hoverS: number;
   armedS: number;
+  /** Mean motor output in hover, 0–1 (null without hover). */
+  hoverOutput: number | null;
   /** Mid-time of the longest hover, s. */
   hoverAtS: number | null;
   balance: BalanceResult | null;
@@ -118,7 +119,7 @@ export function buildFindings(f: FindingInput): Finding[] {
     const gyro = channel.startsWith('gyro');
     const unit = gyro ? 'deg/s' : 'g';
     for (const p of v.peaks) {
-      const amp = toneAmplitude(p.db, f.vibration.df);
+      const amp = p.amplitude;
       const sev = gyro
         ? level(amp, th.gyroToneWatchDegS, th.gyroToneActDegS)
         : level(amp, th.accToneWatchG, th.accToneActG);
@@ -215,6 +216,20 @@ export function buildFindings(f: FindingInput): Finding[] {
         `. While saturated the aircraft cannot correct. If it happens in ordinary flying, the build ` +
         `lacks thrust: check motor kV against the cell count, prop size, and all-up weight.`,
     });
+  }
+  if (f.hoverOutput !== null && f.hoverS >= th.minHoverForVerdictS) {
+    const sev = level(f.hoverOutput, th.hoverOutputWatch, th.hoverOutputAct);
+    if (sev) {
+      out.push({
+        code: 'motor-saturation',
+        severity: sev,
+        ...(tS !== undefined ? { tS } : {}),
+        message:
+          `It hovers at ${Math.round(f.hoverOutput * 100)} % output, leaving little room to climb, ` +
+          `brake or fight wind before the motors hit their limit. Check the all-up weight against ` +
+          `the motors' thrust table, and the props and cell count the motors were chosen for.`,
+      });
+    }
   }
   if (h.escOverS > 0 && f.airframe.escMaxA !== undefined && !f.airframeAssumed) {
     out.push({

@@ -41,6 +41,9 @@ export const Thresholds = z.object({
   /** Share of armed time saturated raising `watch` / `act`, %: brief full-throttle punches are normal, long stretches mean no headroom left (common practice). */
   saturationWatchPct: z.number().positive(),
   saturationActPct: z.number().positive(),
+  /** Mean hover output raising `watch` / `act`, 0–1: sport builds hover at 25–50 % and heavy lifters near 55 %; by 70 % little is left to climb and correct (common practice). */
+  hoverOutputWatch: z.number().min(0).max(1),
+  hoverOutputAct: z.number().min(0).max(1),
   /** Time over the ESC rating raising `act`, s (any time over raises `watch`): ratings are usually continuous with ~10 s bursts (common practice). */
   escOverActS: z.number().positive(),
   /** Lowest cell under load raising `watch` / `act`, V per cell (common practice: 3.5 V under load warning, 3.3 V land now). */
@@ -71,8 +74,8 @@ export const defaultThresholds: Thresholds = {
   motorActPct: 8,
   cgWatchPctOfArm: 5,
   cgActPctOfArm: 10,
-  torqueSplitWatchPct: 5,
-  torqueSplitActPct: 10,
+  torqueSplitWatchPct: 3,
+  torqueSplitActPct: 8,
   peakProminenceDb: 10,
   gyroToneWatchDegS: 5,
   gyroToneActDegS: 20,
@@ -81,6 +84,8 @@ export const defaultThresholds: Thresholds = {
   saturationLevel: 0.98,
   saturationWatchPct: 2,
   saturationActPct: 8,
+  hoverOutputWatch: 0.65,
+  hoverOutputAct: 0.8,
   escOverActS: 1,
   cellWatchV: 3.5,
   cellActV: 3.3,

@@ -24,7 +24,7 @@ const CAMPBELL_ROWS = 20;
 export interface ChannelVibration {
   bandRms: number;
   /** `candidates`: motors the order tracking could not tell apart, strongest first. */
-  peaks: (Peak & { prominenceDb: number; candidates?: number[] })[];
+  peaks: (Peak & { prominenceDb: number; amplitude: number; candidates?: number[] })[];
   spectrum: PowerSpectrum;
 }
 
@@ -163,7 +163,13 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
     channels[name] = {
       bandRms: bandRms(spectrum, BAND_LO_HZ),
       spectrum,
-      peaks: raw.map((p) => ({ hz: p.hz, db: p.db, label: null, prominenceDb: p.prominenceDb })),
+      peaks: raw.map((p) => ({
+        hz: p.hz,
+        db: p.db,
+        label: null,
+        prominenceDb: p.prominenceDb,
+        amplitude: peakAmplitude(spectrum, p.bin),
+      })),
     };
   }
 
@@ -336,6 +342,18 @@ export function labelPeak(
   }
   if (far >= 3 && frameVotes >= Math.max(3, 0.6 * far)) return { label: 'frame' };
   return { label: null };
+}
+
+/**
+ * Amplitude of the vibration under a peak in channel units: √(2·Σ PSD·Δf) over the peak's bin
+ * ±3 (the Hann main lobe and a little more). For a pure tone that is its amplitude (Parseval);
+ * for a resonance with some width it counts the whole hump, not just the top bin.
+ */
+export function peakAmplitude(spec: PowerSpectrum, bin: number): number {
+  let s = 0;
+  for (let k = Math.max(1, bin - 3); k <= Math.min(spec.psd.length - 1, bin + 3); k++)
+    s += spec.psd[k]!;
+  return Math.sqrt(2 * s * spec.df);
 }
 
 /** Spectrum in the ReviewDetail shape (plain arrays, dB). */
