@@ -60,10 +60,10 @@ export const scenarios: Record<string, Scenario> = {
   ),
   'frame-resonance': scenario(
     'frame-resonance',
-    'Loose arm: a 185 Hz structural mode that stays put whatever the throttle.',
+    'Loose arm: a 290 Hz structural mode that stays put whatever the throttle (between the rotors’ 1× and 2× lines in a hover).',
     {
       airframe: kite5,
-      faults: [{ kind: 'frame-resonance', hz: 185, q: 15, rmsDegS: 6 }],
+      faults: [{ kind: 'frame-resonance', hz: 290, q: 15, rmsDegS: 6 }],
     },
   ),
   'tired-battery': scenario(
