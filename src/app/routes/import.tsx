@@ -14,7 +14,7 @@ export function ImportRoute() {
       />
       <ImportPanel
         teamId={team?.id ?? null}
-        canSavePreset={team?.role === 'owner' || team?.role === 'tuner'}
+        canSavePreset={team?.role === 'owner' || team?.role === 'tuner' || team?.role === 'pilot'}
         onOpenFlight={(id) => navigate(`/flights/${id}`)}
       />
     </>

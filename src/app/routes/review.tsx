@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { reviewQueries, type ReviewFlight } from '../../features/review/api/flight-api';
@@ -65,6 +65,17 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
     [comments.data],
   );
   const [selected, setSelected] = useState<string | null>(() => params.get('comment'));
+  // A link to a comment (from an e-mail) opens the moment it is pinned to.
+  const linked = params.get('comment');
+  const linkedTS = comments.data?.comments.find((c) => c.id === linked)?.tS;
+  const hasT = params.has('t');
+  useEffect(() => {
+    if (linkedTS !== undefined && !hasT) setCursor(linkedTS);
+  }, [linkedTS, hasT, setCursor]);
+  useEffect(() => {
+    if (linked && linkedTS !== undefined)
+      document.getElementById(`comment-${linked}`)?.scrollIntoView({ block: 'nearest' });
+  }, [linked, linkedTS]);
   const rail = useRef<CommentsRailHandle>(null);
   const onPin = useCallback((id: string) => {
     setSelected(id);

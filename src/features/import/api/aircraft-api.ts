@@ -1,9 +1,10 @@
 import { queryOptions } from '@tanstack/react-query';
 import { AircraftList } from '../../../../shared/schemas/aircraft';
+import { pathTo } from '../../../../shared/api/paths';
 import { apiFetch } from '../../../lib/api-fetch';
 
 export const fetchTeamAircraft = (teamId: string) =>
-  apiFetch(`/api/teams/${encodeURIComponent(teamId)}/aircraft`, AircraftList);
+  apiFetch(pathTo('teamAircraft', { teamId }), AircraftList);
 
 export const importAircraftKeys = {
   all: ['import', 'aircraft'] as const,

@@ -1,8 +1,9 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { Preset, PresetList, type PresetInput } from '../../../../shared/schemas/presets';
+import { pathTo } from '../../../../shared/api/paths';
 import { apiFetch } from '../../../lib/api-fetch';
 
-const presetsPath = (teamId: string) => `/api/teams/${encodeURIComponent(teamId)}/presets`;
+const presetsPath = (teamId: string) => pathTo('presets', { teamId });
 
 export const fetchPresets = (teamId: string) => apiFetch(presetsPath(teamId), PresetList);
 

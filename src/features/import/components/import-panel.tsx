@@ -44,18 +44,10 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
   const savePreset = useSavePreset(teamId ?? '');
 
   const addFiles = useCallback((files: File[]) => {
-    const ids: string[] = [];
-    dispatch({
-      type: 'add',
-      files,
-      makeId: () => {
-        const id = crypto.randomUUID();
-        ids.push(id);
-        return id;
-      },
-    });
+    const items = files.map((file) => ({ id: crypto.randomUUID(), file }));
+    dispatch({ type: 'add', items });
     // A single file opens its review when done; from a batch the pilot picks.
-    single.current = ids.length === 1 ? ids[0]! : null;
+    single.current = items.length === 1 ? items[0]!.id : null;
   }, []);
 
   const onDrop = useCallback(

@@ -29,7 +29,7 @@ export interface ImportJob {
 }
 
 export type JobAction =
-  | { type: 'add'; files: File[]; makeId: () => string }
+  | { type: 'add'; items: { id: string; file: File }[] }
   | { type: 'status'; id: string; status: JobStatus }
   | { type: 'map'; id: string; columnMap: ColumnMap }
   | { type: 'retry'; id: string }
@@ -47,11 +47,7 @@ export function jobsReducer(jobs: ImportJob[], action: JobAction): ImportJob[] {
     case 'add':
       return [
         ...jobs,
-        ...action.files.map((file) => ({
-          id: action.makeId(),
-          file,
-          status: { kind: 'queued' } as const,
-        })),
+        ...action.items.map(({ id, file }) => ({ id, file, status: { kind: 'queued' } as const })),
       ];
     case 'status':
       return jobs.map((j) => (j.id === action.id ? { ...j, status: action.status } : j));

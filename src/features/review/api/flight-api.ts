@@ -6,6 +6,7 @@ import { Aircraft } from '../../../../shared/schemas/aircraft';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import { FlightDetail, FlightPage } from '../../../../shared/schemas/flights';
 import { ReviewDetailLoose } from '../../../../shared/schemas/flights';
+import { pathTo } from '../../../../shared/api/paths';
 import { apiFetch, ApiError } from '../../../lib/api-fetch';
 import { getLocalFlight } from '../../../lib/local-db';
 
@@ -60,7 +61,7 @@ export async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
     };
   }
   try {
-    const stored = await apiFetch(`/api/flights/${encodeURIComponent(id)}`, FlightDetail);
+    const stored = await apiFetch(pathTo('flight', { id }), FlightDetail);
     if (!stored.detail)
       throw new FlightNotFoundError(
         'This flight was stored without its review detail; import the log again.',
@@ -90,19 +91,18 @@ export async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
   }
 }
 
-export const fetchAircraft = (id: string) =>
-  apiFetch(`/api/aircraft/${encodeURIComponent(id)}`, Aircraft);
+export const fetchAircraft = (id: string) => apiFetch(pathTo('aircraft', { id }), Aircraft);
 
 /** Flights of one aircraft, newest first, for compare. */
 export const fetchAircraftFlights = (teamId: string, aircraftId: string) =>
   apiFetch(
-    `/api/teams/${encodeURIComponent(teamId)}/flights?aircraftId=${encodeURIComponent(aircraftId)}&limit=50`,
+    `${pathTo('teamFlights', { teamId })}?aircraftId=${encodeURIComponent(aircraftId)}&limit=50`,
     FlightPage,
   );
 
 /** Raw log from the server, for the filter bench on a flight not kept on this device. */
 export async function fetchRawLog(id: string): Promise<Blob> {
-  const res = await fetch(`/api/flights/${encodeURIComponent(id)}/raw`, {
+  const res = await fetch(pathTo('flightRaw', { id }), {
     credentials: 'same-origin',
   });
   if (!res.ok)

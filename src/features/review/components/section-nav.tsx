@@ -12,7 +12,7 @@ export function SectionNav({ flightId, current }: { flightId: string; current: S
           to={`/flights/${flightId}/${s.id}${search}`}
           aria-current={current === s.id ? 'page' : undefined}
           className={
-            '-mb-px border-b-2 px-3 py-1.5 text-sm ' +
+            '-mb-px border-b-2 px-2 py-1.5 text-sm ' +
             (current === s.id
               ? 'border-accent font-medium text-ink'
               : 'border-transparent text-ink-soft hover:text-ink')

@@ -10,7 +10,7 @@ const tone: Record<Severity, string> = {
 export function SeverityBadge({ severity }: { severity: Severity }) {
   return (
     <span
-      className={`inline-block w-14 rounded-sm px-1.5 py-0.5 text-center text-[11px] font-semibold uppercase tracking-wide ${tone[severity]}`}
+      className={`inline-block h-fit w-14 shrink-0 self-start rounded-sm px-1.5 py-0.5 text-center text-[11px] font-semibold uppercase tracking-wide ${tone[severity]}`}
     >
       {severityLabel[severity]}
     </span>

@@ -22,13 +22,13 @@ const BAR_FULL_PCT = 20;
 export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
   const propR = (airframe.prop.diameterIn * 25.4) / 2;
   const reach = Math.max(...airframe.motors.map((m) => Math.hypot(m.x, m.y))) + propR;
-  const pad = 58;
+  const pad = propR * 0.9 + 40;
   const R = reach + pad;
   const sx = (m: { x: number; y: number }) => m.y;
   const sy = (m: { x: number; y: number }) => -m.x;
   const design = airframe.cg ?? { x: 0, y: 0 };
   const body = Math.max(18, reach * 0.16);
-  const font = R / 18;
+  const font = R / 11;
 
   return (
     <svg

@@ -67,8 +67,8 @@ export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictLis
                       onClick={() => onSelect?.(f)}
                       className="font-medium text-slate-brand underline decoration-line underline-offset-2 hover:decoration-slate-brand"
                     >
-                      {sectionLabel(f)} evidence
-                      {f.tS !== undefined && <span className="num"> at {f.tS.toFixed(2)} s</span>}
+                      {`${sectionLabel(f)} evidence`}
+                      {f.tS !== undefined && ` at ${f.tS.toFixed(2)} s`}
                     </Link>
                     {f.axis && <span className="num ml-2">axis {f.axis}</span>}
                   </p>

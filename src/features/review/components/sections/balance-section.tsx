@@ -68,10 +68,10 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
         <table className="w-full text-sm" aria-label="Hover share per motor">
           <thead>
             <tr className="border-b border-line text-left text-xs uppercase tracking-wide text-ink-faint">
-              <th className="py-1 font-medium">Motor</th>
-              <th className="py-1 font-medium">Spin</th>
-              <th className="py-1 text-right font-medium">Expected</th>
-              <th className="py-1 text-right font-medium">Measured</th>
+              <th className="py-1 pr-3 font-medium">Motor</th>
+              <th className="py-1 pr-3 font-medium">Spin</th>
+              <th className="py-1 pr-3 text-right font-medium">Expected</th>
+              <th className="py-1 pr-3 text-right font-medium">Measured</th>
               <th className="py-1 pl-4 font-medium">Deviation</th>
             </tr>
           </thead>
@@ -86,7 +86,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
                     'border-b border-line/60 ' + (flagged.has(n) ? 'bg-accent-soft/50' : '')
                   }
                 >
-                  <td className="py-1">
+                  <td className="py-1 pr-3">
                     <span className="inline-flex items-center gap-1.5">
                       <span
                         aria-hidden
@@ -96,9 +96,9 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
                       {n}
                     </span>
                   </td>
-                  <td className="num py-1 text-ink-soft">{airframe.motors[i]?.spin ?? '—'}</td>
-                  <td className="num py-1 text-right">{pct(expectedShare[i])}</td>
-                  <td className="num py-1 text-right">{pct(measuredShare[i])}</td>
+                  <td className="num py-1 pr-3 text-ink-soft">{airframe.motors[i]?.spin ?? '—'}</td>
+                  <td className="num py-1 pr-3 text-right">{pct(expectedShare[i])}</td>
+                  <td className="num py-1 pr-3 text-right">{pct(measuredShare[i])}</td>
                   <td className="py-1 pl-4">
                     <div className="flex items-center gap-2">
                       <span className="num w-16 text-right">{signed(dev)} %</span>

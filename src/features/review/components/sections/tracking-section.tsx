@@ -31,17 +31,17 @@ export function TrackingSection({
       <table className="w-full max-w-md text-sm" aria-label="Tracking per axis">
         <thead>
           <tr className="border-b border-line text-left text-xs uppercase tracking-wide text-ink-faint">
-            <th className="py-1 font-medium">Axis</th>
-            <th className="py-1 text-right font-medium">RMS error</th>
-            <th className="py-1 text-right font-medium">Lag</th>
+            <th className="py-1 pr-3 font-medium">Axis</th>
+            <th className="py-1 pr-3 text-right font-medium">RMS error</th>
+            <th className="py-1 pr-3 text-right font-medium">Lag</th>
           </tr>
         </thead>
         <tbody>
           {axes.map((a) => (
             <tr key={a.key} className="border-b border-line/60">
-              <td className="py-1">{a.label}</td>
-              <td className="num py-1 text-right">{t[a.key].rmsDegS.toFixed(1)} deg/s</td>
-              <td className="num py-1 text-right">
+              <td className="py-1 pr-3">{a.label}</td>
+              <td className="num py-1 pr-3 text-right">{t[a.key].rmsDegS.toFixed(1)} deg/s</td>
+              <td className="num py-1 pr-3 text-right">
                 {t[a.key].lagMs === null ? '—' : `${t[a.key].lagMs!.toFixed(1)} ms`}
               </td>
             </tr>

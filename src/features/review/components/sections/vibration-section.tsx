@@ -103,9 +103,9 @@ export function VibrationSection({
       <table className="w-full text-sm" aria-label="Vibration peaks">
         <thead>
           <tr className="border-b border-line text-left text-xs uppercase tracking-wide text-ink-faint">
-            <th className="py-1 font-medium">Channel</th>
-            <th className="py-1 text-right font-medium">Frequency</th>
-            <th className="py-1 text-right font-medium">Level</th>
+            <th className="py-1 pr-3 font-medium">Channel</th>
+            <th className="py-1 pr-3 text-right font-medium">Frequency</th>
+            <th className="py-1 pr-3 text-right font-medium">Level</th>
             <th className="py-1 pl-4 font-medium">Source</th>
           </tr>
         </thead>
@@ -119,9 +119,9 @@ export function VibrationSection({
           )}
           {peaks.map((p, i) => (
             <tr key={`${p.channel}-${p.hz}-${i}`} className="border-b border-line/60">
-              <td className="num py-1">{p.channel}</td>
-              <td className="num py-1 text-right">{p.hz.toFixed(1)} Hz</td>
-              <td className="num py-1 text-right">{p.db.toFixed(1)} dB</td>
+              <td className="num py-1 pr-3">{p.channel}</td>
+              <td className="num py-1 pr-3 text-right">{p.hz.toFixed(1)} Hz</td>
+              <td className="num py-1 pr-3 text-right">{p.db.toFixed(1)} dB</td>
               <td className="py-1 pl-4 text-ink-soft">
                 {p.motor !== undefined && (
                   <span className="mr-1 inline-flex items-center gap-1">
