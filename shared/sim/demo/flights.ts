@@ -38,7 +38,7 @@ const drafts: Draft[] = [
     title: 'Season opener, warm-up pack',
     faults: kiteMotor3(1),
     seed: 101,
-    seconds: 30,
+    seconds: 36,
     rateHz: 1000,
   },
   {
@@ -48,7 +48,7 @@ const drafts: Draft[] = [
     title: 'Orbit practice over the pond',
     faults: heronCamera(0),
     seed: 102,
-    seconds: 32,
+    seconds: 36,
     rateHz: 500,
   },
   {
@@ -58,7 +58,7 @@ const drafts: Draft[] = [
     title: 'Survey grid, north field',
     faults: [],
     seed: 103,
-    seconds: 36,
+    seconds: 40,
     rateHz: 500,
   },
   {
@@ -68,7 +68,7 @@ const drafts: Draft[] = [
     title: 'Power loops and dives',
     faults: kiteMotor3(0.97),
     seed: 104,
-    seconds: 30,
+    seconds: 36,
     rateHz: 1000,
   },
   {
@@ -78,7 +78,7 @@ const drafts: Draft[] = [
     title: 'Evening light, slow reveals',
     faults: heronCamera(0),
     seed: 105,
-    seconds: 32,
+    seconds: 36,
     rateHz: 500,
   },
   {
@@ -88,7 +88,7 @@ const drafts: Draft[] = [
     title: 'Borrowed for a line-of-sight session',
     faults: kiteMotor3(0.94),
     seed: 106,
-    seconds: 28,
+    seconds: 34,
     rateHz: 1000,
   },
   {
@@ -98,7 +98,7 @@ const drafts: Draft[] = [
     title: 'Survey grid, south field',
     faults: [],
     seed: 107,
-    seconds: 36,
+    seconds: 40,
     rateHz: 500,
   },
   {
@@ -108,7 +108,7 @@ const drafts: Draft[] = [
     title: 'First flight with the new camera',
     faults: heronCamera(14),
     seed: 108,
-    seconds: 32,
+    seconds: 36,
     rateHz: 500,
   },
   {
@@ -118,7 +118,7 @@ const drafts: Draft[] = [
     title: 'Gap practice',
     faults: kiteMotor3(0.91),
     seed: 109,
-    seconds: 30,
+    seconds: 36,
     rateHz: 1000,
   },
   {
@@ -128,7 +128,7 @@ const drafts: Draft[] = [
     title: 'Check flight after the arm repair',
     faults: ospreyArm,
     seed: 110,
-    seconds: 36,
+    seconds: 40,
     rateHz: 500,
   },
   {
@@ -138,7 +138,7 @@ const drafts: Draft[] = [
     title: 'Freestyle session, motor felt hot after',
     faults: kiteMotor3(0.87),
     seed: 111,
-    seconds: 30,
+    seconds: 36,
     rateHz: 1000,
   },
   {
@@ -148,7 +148,7 @@ const drafts: Draft[] = [
     title: 'Client shoot, tracking shots',
     faults: heronCamera(14),
     seed: 112,
-    seconds: 34,
+    seconds: 38,
     rateHz: 500,
   },
   {
@@ -158,7 +158,7 @@ const drafts: Draft[] = [
     title: 'Shake-down with the new motor 3',
     faults: kiteMotor3(1),
     seed: 113,
-    seconds: 30,
+    seconds: 36,
     rateHz: 1000,
   },
   {
@@ -168,7 +168,7 @@ const drafts: Draft[] = [
     title: 'Survey grid, river bend',
     faults: ospreyArm,
     seed: 114,
-    seconds: 36,
+    seconds: 40,
     rateHz: 500,
   },
   {
@@ -178,7 +178,7 @@ const drafts: Draft[] = [
     title: 'Rebalanced: battery tray moved back',
     faults: heronCamera(3),
     seed: 115,
-    seconds: 32,
+    seconds: 36,
     rateHz: 500,
   },
 ];

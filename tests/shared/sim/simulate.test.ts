@@ -77,6 +77,20 @@ describe('simulate: the log it returns', () => {
     }
   });
 
+  it('keeps the scripted hovers steady: low body rates and a steady collective', () => {
+    // PRODUCT.md §6.1 calls a hover steady when body rates are low and the collective steady.
+    const { log, truth } = run(scenario('clean-quad-x'), { seconds: 60, rateHz: 500, seed: 4 });
+    for (const range of hoverRows(log, truth)) {
+      for (const axis of ['gyro_x', 'gyro_y', 'gyro_z']) {
+        const g = col(log, axis);
+        expect(Math.sqrt(meanOver([range], (r) => g[r]! ** 2))).toBeLessThan(10);
+      }
+      const thr = col(log, 'throttle');
+      const mean = meanOver([range], (r) => thr[r]!);
+      expect(Math.sqrt(meanOver([range], (r) => (thr[r]! - mean) ** 2))).toBeLessThan(0.02);
+    }
+  });
+
   it('rejects a flight too short for the script, a bad rate, a bad seed and a missing motor', () => {
     const s = scenario('clean-quad-x');
     expect(() => simulate(s, { seconds: 5 })).toThrow(/at least 10 s/);
