@@ -319,6 +319,18 @@ export class LogReader {
         line++;
         continue;
       }
+      if (b === 32 || (b === 9 && delim !== 9)) {
+        // A line of spaces only is a blank line, not a row of empty cells.
+        let q = pos;
+        while (buf[q] === 32 || (buf[q] === 9 && delim !== 9)) q++;
+        if (buf[q] === LF || buf[q] === CR) {
+          pos = this.pastLineEnd(buf, q, end);
+          this.blankLines++;
+          this.noteSkippedLine(rows);
+          line++;
+          continue;
+        }
+      }
       if (b === HASH) {
         while (buf[pos] !== LF && buf[pos] !== CR) pos++;
         pos = this.pastLineEnd(buf, pos, end);
@@ -586,7 +598,11 @@ export class LogReader {
     line: number,
     c: number,
   ): LogFormatError {
-    const shown = decodeUtf8(buf, start, Math.min(end, start + 40)).trim();
+    // Control bytes (e.g. the zeros a card leaves after a power cut) are shown as U+FFFD.
+    // eslint-disable-next-line no-control-regex
+    const shown = decodeUtf8(buf, start, Math.min(end, start + 40))
+      .trim()
+      .replace(/[\u0000-\u001f\u007f]/g, '\ufffd');
     const more = end - start > 40 ? '…' : '';
     const unit = this.plans[c]?.unit;
     return new LogFormatError(

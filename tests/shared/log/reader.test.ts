@@ -216,6 +216,18 @@ describe('a log cut short', () => {
     expect(log.warnings.find((w) => w.code === 'truncated-line')?.line).toBe(3);
   });
 
+  it('drops the zero bytes a memory card leaves after a power cut', () => {
+    const bytes = new Uint8Array([
+      ...enc('time,motor1\n0,0.5\n0.1,0.6\n'),
+      ...new Uint8Array(4096),
+    ]);
+    const log = parseLog(bytes);
+    expect(log.rows).toBe(2);
+    const w = log.warnings.find((x) => x.code === 'truncated-line');
+    expect(w?.line).toBe(4);
+    expect(w?.message).not.toMatch(/\u0000/);
+  });
+
   it('keeps a complete last line without a line ending', () => {
     const log = parse('time,motor1\n0,0.5\n0.1,0.75');
     expect(log.rows).toBe(2);
@@ -318,5 +330,13 @@ describe('the streaming reader', () => {
       expect(log.columns.motor1![rows - 1]).toBe(Math.fround(0.99));
       expect(log.columns.motor1!.buffer.byteLength).toBeLessThanOrEqual(rows * 4 * (17 / 16));
     }
+  });
+});
+
+describe('whitespace', () => {
+  it('treats a line of spaces as blank, not as a row of empty cells', () => {
+    const log = parseLog(enc('time,motor1\n0,0.5\n   \n1,0.5\n'));
+    expect(log.rows).toBe(2);
+    expect(log.warnings.map((w) => w.code)).toEqual(['blank-lines']);
   });
 });
