@@ -14,6 +14,8 @@ const RPM_TO_RAD_S = (2 * Math.PI) / 60;
 /** Longest integration step, s; the step is also never longer than the log step. */
 const MAX_STEP_S = 0.001;
 const CRUISE_ALT_M = 3;
+/** Radio link frame period, s (250 Hz, a common rate for a low-latency link). */
+const RADIO_FRAME_S = 0.004;
 /** Constant draw of flight controller, receiver and video, A. */
 const AVIONICS_A = 0.6;
 
@@ -433,6 +435,7 @@ export function simulate(
   let stickR = 0;
   let stickP = 0;
   let stickY = 0;
+  let nextRadioT = 0;
 
   for (let row = 0; row < rows; row++) {
     for (let s = 0; s < (row === 0 ? 0 : sub); s++) {
@@ -488,10 +491,14 @@ export function simulate(
         case 'hover':
           break;
       }
-      // The pilot levels the aircraft by feel (deg/s per deg) and wiggles a little.
-      stickR = spR + thumbs * (wobbleAt(0, t) - 3 * roll * DEG);
-      stickP = spP + thumbs * (wobbleAt(1, t) - 3 * pitch * DEG);
-      stickY = spY + thumbs * wobbleAt(2, t);
+      // Sticks reach the controller once per radio frame. The pilot levels the aircraft by feel
+      // (deg/s per deg) and wiggles a little.
+      if (t >= nextRadioT) {
+        nextRadioT += RADIO_FRAME_S;
+        stickR = spR + thumbs * (wobbleAt(0, t) - 3 * roll * DEG);
+        stickP = spP + thumbs * (wobbleAt(1, t) - 3 * pitch * DEG);
+        stickY = spY + thumbs * wobbleAt(2, t);
+      }
       if (throttleOverride >= 0) {
         throttle = throttleOverride;
         altI = 0;
