@@ -599,10 +599,9 @@ export class LogReader {
     c: number,
   ): LogFormatError {
     // Control bytes (e.g. the zeros a card leaves after a power cut) are shown as U+FFFD.
-    // eslint-disable-next-line no-control-regex
-    const shown = decodeUtf8(buf, start, Math.min(end, start + 40))
-      .trim()
-      .replace(/[\u0000-\u001f\u007f]/g, '\ufffd');
+    const shown = Array.from(decodeUtf8(buf, start, Math.min(end, start + 40)).trim(), (ch) =>
+      ch < ' ' || ch === '\u007f' ? '\ufffd' : ch,
+    ).join('');
     const more = end - start > 40 ? '…' : '';
     const unit = this.plans[c]?.unit;
     return new LogFormatError(

@@ -225,7 +225,7 @@ describe('a log cut short', () => {
     expect(log.rows).toBe(2);
     const w = log.warnings.find((x) => x.code === 'truncated-line');
     expect(w?.line).toBe(4);
-    expect(w?.message).not.toMatch(/\u0000/);
+    expect(w?.message.includes('\u0000')).toBe(false);
   });
 
   it('keeps a complete last line without a line ending', () => {
