@@ -4,7 +4,14 @@
  * Exit 0 on success, 2 on a usage mistake, 1 on anything else. Files are written to a temporary
  * name and renamed, so a failure never leaves half a log behind.
  */
-import { createWriteStream, renameSync, rmSync, writeFileSync } from 'node:fs';
+import {
+  createWriteStream,
+  existsSync,
+  renameSync,
+  rmSync,
+  statSync,
+  writeFileSync,
+} from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
@@ -48,6 +55,11 @@ async function main(argv: string[]): Promise<number> {
   let csvPath = resolve(base, command.out ?? defaultName);
   if (command.gzip && !/\.gz$/i.test(csvPath)) csvPath += '.gz';
   const truthPath = truthPathFor(csvPath);
+  const folder = dirname(csvPath);
+  if (!existsSync(folder) || !statSync(folder).isDirectory()) {
+    console.error(`synth: the output folder ${folder} does not exist`);
+    return 2;
+  }
   const scenario = scenarios[command.scenario]!;
   const started = performance.now();
   const { log, truth } = simulate(scenario, {
