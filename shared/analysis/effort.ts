@@ -33,17 +33,31 @@ export function decomposeEffort(
   rows: number,
 ): Effort {
   const e = effortRows(airframe);
-  const out = [0, 1, 2, 3].map(() => new Float32Array(rows));
   const n = Math.min(motors.length, airframe.motors.length);
-  for (let j = 0; j < 4; j++) {
-    const dst = out[j]!;
-    const w = e[j]!;
+  const out = {
+    collective: new Float32Array(rows),
+    roll: new Float32Array(rows),
+    pitch: new Float32Array(rows),
+    yaw: new Float32Array(rows),
+  };
+  const [w0, w1, w2, w3] = e as [number[], number[], number[], number[]];
+  // One pass over the motor columns, all four parts per sample (memory bound, not maths bound).
+  for (let i = 0; i < rows; i++) {
+    let c = 0;
+    let r = 0;
+    let p = 0;
+    let y = 0;
     for (let m = 0; m < n; m++) {
-      const c = motors[m]!;
-      const wm = w[m]!;
-      if (wm === 0) continue;
-      for (let i = 0; i < rows; i++) dst[i]! += wm * c[i]!;
+      const u = motors[m]![i]!;
+      c += w0[m]! * u;
+      r += w1[m]! * u;
+      p += w2[m]! * u;
+      y += w3[m]! * u;
     }
+    out.collective[i] = c;
+    out.roll[i] = r;
+    out.pitch[i] = p;
+    out.yaw[i] = y;
   }
-  return { collective: out[0]!, roll: out[1]!, pitch: out[2]!, yaw: out[3]! };
+  return out;
 }

@@ -92,6 +92,7 @@ export function analyseHeadroom(
   if (source) {
     const block = Math.max(1, Math.round(fs * 0.1));
     const current = new Float64Array(n);
+    const weight = new Float64Array(n);
     for (const [a, b] of armed) {
       for (let s = a; s + block <= b; s += block) {
         current.fill(0);
@@ -100,11 +101,15 @@ export function analyseHeadroom(
             for (let m = 0; m < n; m++) current[m]! += perMotor[m]![i]!;
           } else {
             let tot = 0;
-            for (let m = 0; m < n; m++) tot += Math.max(0, motors[m]![i]!) ** gamma;
+            for (let m = 0; m < n; m++) {
+              const u = motors[m]![i]!;
+              const w = u > 0 ? (gamma === 2 ? u * u : u ** gamma) : 0;
+              weight[m] = w;
+              tot += w;
+            }
             if (tot <= 0) continue;
-            const ib = ibat![i]!;
-            for (let m = 0; m < n; m++)
-              current[m]! += (ib * Math.max(0, motors[m]![i]!) ** gamma) / tot;
+            const share = ibat![i]! / tot;
+            for (let m = 0; m < n; m++) current[m]! += share * weight[m]!;
           }
         }
         let over = false;

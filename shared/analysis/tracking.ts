@@ -18,14 +18,18 @@ const AXES = [
   ['yaw', 'sp_yaw', 'gyro_z'],
 ] as const;
 
-/** Rate the lag search runs at, Hz: sub-sample interpolation keeps 1 ms resolution, and block means filter out rotor noise. */
-const LAG_RATE_HZ = 500;
-const MAX_LAG_S = 0.25;
+/**
+ * Rate the lag search runs at, Hz: stick moves and the aircraft's response live well below
+ * 50 Hz, block means filter out rotor noise, and sub-sample interpolation keeps about 1 ms
+ * resolution on the 4 ms grid.
+ */
+const LAG_RATE_HZ = 250;
+const MAX_LAG_S = 0.2;
 
 /**
  * Setpoint-following per axis over armed time: RMS of setpoint − gyro (deg/s) and the lag at
  * which the cross-correlation of the two peaks (Knapp & Carter 1976), on block means at about
- * 500 Hz with the means removed.
+ * 250 Hz with the means removed.
  */
 export function analyseTracking(log: ParsedLog, armed: Ranges): TrackingResult | null {
   const fs = log.sampleRateHz;
@@ -41,44 +45,47 @@ export function analyseTracking(log: ParsedLog, armed: Ranges): TrackingResult |
     let n = 0;
     let worst = 0;
     let worstAt = 0;
-    const xs: number[] = [];
-    const ys: number[] = [];
     let lagWeighted = 0;
     let lagWeight = 0;
+    const maxLag = Math.round(MAX_LAG_S * rate);
     for (const [a, b] of armed) {
-      for (let i = a; i < b; i++) {
-        const e = sp[i]! - g[i]!;
-        se += e * e;
-        n++;
-        if (Math.abs(e) > worst) {
-          worst = Math.abs(e);
-          worstAt = i;
-        }
-      }
-      xs.length = 0;
-      ys.length = 0;
-      for (let s = a; s + decim <= b; s += decim) {
+      const blocks = Math.floor((b - a) / decim);
+      const xs = new Float64Array(blocks);
+      const ys = new Float64Array(blocks);
+      let mx = 0;
+      let my = 0;
+      for (let j = 0; j < blocks; j++) {
         let x = 0;
         let y = 0;
-        for (let i = s; i < s + decim; i++) {
-          x += sp[i]!;
-          y += g[i]!;
+        for (let i = a + j * decim, end = i + decim; i < end; i++) {
+          const s = sp[i]!;
+          const gv = g[i]!;
+          const e = s - gv;
+          se += e * e;
+          if (e > worst || -e > worst) {
+            worst = Math.abs(e);
+            worstAt = i;
+          }
+          x += s;
+          y += gv;
         }
-        xs.push(x / decim);
-        ys.push(y / decim);
+        xs[j] = x / decim;
+        ys[j] = y / decim;
+        mx += xs[j]!;
+        my += ys[j]!;
       }
-      const maxLag = Math.round(MAX_LAG_S * rate);
-      if (xs.length < 4 * maxLag) continue;
-      const mx = xs.reduce((p, v) => p + v, 0) / xs.length;
-      const my = ys.reduce((p, v) => p + v, 0) / ys.length;
+      n += blocks * decim;
+      if (blocks < 4 * maxLag) continue;
+      mx /= blocks;
+      my /= blocks;
       let varX = 0;
-      for (let i = 0; i < xs.length; i++) {
-        xs[i] = xs[i]! - mx;
-        ys[i] = ys[i]! - my;
-        varX += xs[i]! * xs[i]!;
+      for (let j = 0; j < blocks; j++) {
+        xs[j] = xs[j]! - mx;
+        ys[j] = ys[j]! - my;
+        varX += xs[j]! * xs[j]!;
       }
       // A setpoint that hardly moves (< 2 deg/s RMS) has no timing to measure.
-      if (varX / xs.length < 4) continue;
+      if (varX / blocks < 4) continue;
       const est = crossCorrelationLag(xs, ys, maxLag);
       if (!est || est.normalised < 0.5) continue;
       lagWeighted += est.lag * varX;

@@ -51,10 +51,21 @@ export interface VibrationInput {
   prominenceDb: number;
 }
 
-/** Prefix sums of a per-sample value, so any segment's mean is O(1). */
-function prefixSums(rows: number, value: (i: number) => number): Float64Array {
+/** Prefix sums of the mean of some columns, so any segment's mean is O(1). */
+function prefixSums(rows: number, cols: readonly ArrayLike<number>[]): Float64Array {
   const p = new Float64Array(rows + 1);
-  for (let i = 0; i < rows; i++) p[i + 1] = p[i]! + value(i);
+  const k = 1 / cols.length;
+  let acc = 0;
+  if (cols.length === 1) {
+    const c = cols[0]!;
+    for (let i = 0; i < rows; i++) p[i + 1] = acc += c[i]!;
+    return p;
+  }
+  for (let i = 0; i < rows; i++) {
+    let s = 0;
+    for (const c of cols) s += c[i]!;
+    p[i + 1] = acc += s * k;
+  }
   return p;
 }
 
@@ -97,20 +108,10 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
   // Row variable per segment: mean rpm over motors, else throttle, else collective.
   const throttle = log.columns.throttle;
   const by: 'rpm' | 'throttle' = rpms && rpms.length ? 'rpm' : 'throttle';
-  const rowSource: ((i: number) => number) | null =
-    by === 'rpm'
-      ? (i) => {
-          let s = 0;
-          for (const r of rpms!) s += r[i]!;
-          return s / rpms!.length;
-        }
-      : throttle
-        ? (i) => throttle[i]!
-        : input.collective
-          ? (i) => input.collective![i]!
-          : null;
+  const rowSource: readonly ArrayLike<number>[] | null =
+    by === 'rpm' ? rpms! : throttle ? [throttle] : input.collective ? [input.collective] : null;
   const rowPrefix = rowSource ? prefixSums(log.rows, rowSource) : null;
-  const motorPrefix = rpms ? rpms.map((r) => prefixSums(log.rows, (i) => r[i]!)) : null;
+  const motorPrefix = rpms ? rpms.map((r) => prefixSums(log.rows, [r])) : null;
   const segValue = (s: number) =>
     rowPrefix ? (rowPrefix[s + nperseg]! - rowPrefix[s]!) / nperseg : NaN;
 

@@ -51,22 +51,31 @@ export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): 
   let count = 0;
   for (const [r0, r1] of ranges) {
     for (let s = Math.max(0, r0); s + n <= Math.min(r1, x.length); s += step) {
-      let mean = 0;
+      // One read of the signal: window it and sum it; the mean comes off the windowed copy.
+      let sum = 0;
+      for (let i = 0; i < n; i++) {
+        const v = x[s + i]!;
+        seg[i] = v * w[i]!;
+        sum += v;
+      }
       if (detrend) {
-        for (let i = 0; i < n; i++) mean += x[s + i]!;
-        mean /= n;
+        const mean = sum / n;
+        for (let i = 0; i < n; i++) seg[i]! -= mean * w[i]!;
       }
-      for (let i = 0; i < n; i++) seg[i] = (x[s + i]! - mean) * w[i]!;
       fft.powerSpectrum(seg, pow);
-      for (let k = 0; k < bins; k++) {
-        const scale = k === 0 || k === half ? norm : 2 * norm;
-        const v = pow[k]! * scale;
-        pow[k] = v;
-        acc[k]! += v;
+      if (options.onSegment) {
+        for (let k = 0; k < bins; k++) pow[k]! *= k === 0 || k === half ? norm : 2 * norm;
+        for (let k = 0; k < bins; k++) acc[k]! += pow[k]!;
+        options.onSegment(s, pow);
+      } else {
+        for (let k = 0; k < bins; k++) acc[k]! += pow[k]!;
       }
-      options.onSegment?.(s, pow);
       count++;
     }
+  }
+  // Scale once at the end when segments were summed raw.
+  if (!options.onSegment) {
+    for (let k = 0; k < bins; k++) acc[k]! *= k === 0 || k === half ? norm : 2 * norm;
   }
   if (count > 0) for (let k = 0; k < bins; k++) acc[k]! /= count;
   const hz = new Float64Array(bins);
