@@ -1,0 +1,83 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import { readFileSync } from 'node:fs';
+import { expect, test } from '@playwright/test';
+import { writeScenarioCsv } from './fixtures/synth-log';
+
+/** The same flight written with headers of another layout: the column-map step must open. */
+function writeForeignHeaderCsv(): string {
+  const canonical = readFileSync(writeScenarioCsv('clean-quad-x', { seconds: 20 }), 'utf8').split(
+    '\n',
+  );
+  const headerAt = canonical.findIndex((l) => !l.startsWith('#'));
+  const names = canonical[headerAt]!.split(',');
+  const rename = (h: string) => {
+    const m = /^motor(\d+)/.exec(h);
+    if (m) return `Out${Number(m[1]) - 1}`;
+    if (h.startsWith('time')) return 'Timestamp (s)';
+    if (h.startsWith('gyro_x')) return 'GyroRoll (dps)';
+    if (h.startsWith('gyro_y')) return 'GyroPitch (dps)';
+    if (h.startsWith('gyro_z')) return 'GyroYaw (dps)';
+    return `Extra ${h.replace(/\W+/g, '')}`;
+  };
+  const out = [names.map(rename).join(','), ...canonical.slice(headerAt + 1)];
+  const dir = mkdtempSync(join(tmpdir(), 'hoverprint-e2e-foreign-'));
+  const path = join(dir, 'kite-export.csv');
+  writeFileSync(path, out.join('\n'));
+  return path;
+}
+
+test('the parse worker reports progress and the review shows the rows it read, from a gzipped log', async ({
+  page,
+}) => {
+  test.setTimeout(120_000);
+  const csv = writeScenarioCsv('weak-motor', { seconds: 60 });
+  const gz = csv + '.gz';
+  writeFileSync(gz, gzipSync(readFileSync(csv)));
+  await page.goto('/import');
+  await page.getByLabel('Flight logs').setInputFiles(gz);
+  const bar = page.getByRole('progressbar', { name: /Reading weak-motor\.csv\.gz/ });
+  await expect(bar).toBeVisible();
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  await expect(page.getByText(/60,00\d rows/)).toBeVisible();
+});
+
+test('an unknown header opens the column map; confirming it reads the flight', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.goto('/import');
+  await page.getByLabel('Flight logs').setInputFiles(writeForeignHeaderCsv());
+  const step = page.getByRole('region', { name: /Column map for kite-export\.csv/ });
+  await expect(step).toBeVisible({ timeout: 30_000 });
+  await expect(step.getByLabel('Channel for Timestamp (s)')).toHaveValue('time');
+  await expect(step.getByLabel('Channel for Out0')).toHaveValue('motor1');
+  await expect(step.getByLabel('Channel for GyroYaw (dps)')).toHaveValue('gyro_z');
+  // Motor outputs in this file are 0–1 fractions.
+  for (const h of ['Out0', 'Out1', 'Out2', 'Out3'])
+    await step.getByLabel(`Unit for ${h}`).selectOption('frac');
+  await step.getByRole('button', { name: 'Read with this map' }).click();
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
+});
+
+test('a first-time pilot tries a sample flight and lands on its review', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.goto('/import');
+  await page.getByRole('button', { name: 'Try a sample flight' }).click();
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 90_000 });
+  await expect(page.getByText('sample-weak-motor.csv', { exact: false })).toBeVisible();
+  await expect(page.getByRole('list', { name: 'Findings' })).toContainText('Motor 3');
+});
+
+test('cancelling an import keeps nothing and offers to try again', async ({ page }) => {
+  test.setTimeout(120_000);
+  const big = writeScenarioCsv('clean-quad-x', { seconds: 300, rateHz: 2000 });
+  await page.goto('/import');
+  await page.getByLabel('Flight logs').setInputFiles(big);
+  const row = page.getByRole('listitem', { name: /Import of clean-quad-x\.csv/ });
+  await row.getByRole('button', { name: 'Cancel' }).click();
+  await expect(row).toContainText('Cancelled; nothing was kept.');
+  await expect(row.getByRole('button', { name: 'Try again' })).toBeVisible();
+  await expect(page).toHaveURL(/\/import$/);
+});
