@@ -1,3 +1,4 @@
+import type { ServiceKind } from '../../schemas/aircraft';
 import type { Fault } from '../types';
 import type { DemoAircraft } from './fleet';
 
@@ -190,8 +191,6 @@ export const demoFlights: DemoFlight[] = drafts.map((d, index) => ({
   fileName: `${d.aircraft}-${d.date.slice(0, 10)}-${d.seed}.csv`,
 }));
 
-export type ServiceKind = 'repair' | 'part-swap' | 'adjustment' | 'inspection';
-
 export interface DemoServiceEntry {
   aircraft: DemoAircraft['key'];
   /** ISO 8601 date */
@@ -243,7 +242,7 @@ export const demoServiceLog: DemoServiceEntry[] = [
     aircraft: 'heron',
     date: '2026-10-21',
     author: 'maren',
-    kind: 'adjustment',
+    kind: 'tune',
     title: 'Battery tray moved back 11 mm',
     body: 'Balances the heavier camera. Checked on a finger under the arm junction.',
   },
