@@ -18,6 +18,17 @@ import { can } from '../teams/permissions';
 import { iso, isoOrNull } from '../util';
 import { Comment } from './comment.entity';
 
+/** Primary or unique key violation, as SQLite and PostgreSQL report it. */
+function isDuplicateKey(err: unknown): boolean {
+  const driver = (err as { driverError?: { code?: string } }).driverError;
+  const code = driver?.code ?? (err as { code?: string }).code;
+  return (
+    code === 'SQLITE_CONSTRAINT_PRIMARYKEY' ||
+    code === 'SQLITE_CONSTRAINT_UNIQUE' ||
+    code === '23505'
+  );
+}
+
 export class CommentsService {
   constructor(
     private readonly ds: DataSource,
@@ -119,13 +130,6 @@ export class CommentsService {
   ): Promise<{ comment: CommentDto; created: boolean }> {
     const input = CommentPutInput.parse(body);
     const flight = await this.flights.access(userId, input.flightId, 'comments.create');
-    const existing = await this.repo.findOneBy({ id });
-    if (existing) {
-      if (existing.authorId !== userId || existing.flightId !== input.flightId) {
-        throw new ConflictError('This comment id is already used.', 'id_taken');
-      }
-      return { comment: await this.dto(existing), created: false };
-    }
     let parentId: string | null = null;
     let parent: Comment | null = null;
     if (input.parentId) {
@@ -150,10 +154,32 @@ export class CommentsService {
       deletedAt: null,
       createdAt: Date.now(),
     };
-    await this.repo.insert(comment);
-    await this.refreshCounts(input.flightId);
+    // Insert first and treat a key clash as the retry it almost always is: one query fewer on
+    // the path every comment takes.
+    try {
+      await this.repo.insert(comment);
+    } catch (err) {
+      if (!isDuplicateKey(err)) throw err;
+      const existing = await this.repo.findOneBy({ id });
+      if (!existing || existing.authorId !== userId || existing.flightId !== input.flightId) {
+        throw new ConflictError('This comment id is already used.', 'id_taken');
+      }
+      return { comment: await this.dto(existing), created: false };
+    }
+    // A new comment only adds to the counters; resolve and delete recount.
+    await this.ds
+      .createQueryBuilder()
+      .update(Flight)
+      .set({
+        commentCount: () => 'commentCount + 1',
+        ...(parentId === null ? { openComments: () => 'openComments + 1' } : {}),
+      })
+      .where('id = :fid', { fid: input.flightId })
+      .execute();
     this.notify(comment, flight.pilotId, parent?.authorId ?? null, mentions);
-    return { comment: await this.dto(comment), created: true };
+    const names = mentions.length > 0 ? await this.names(mentions) : new Map<string, string>();
+    names.set(userId, flight.userName);
+    return { comment: this.toDto(comment, names), created: true };
   }
 
   async patch(userId: string, id: string, body: CommentPatch): Promise<CommentDto> {

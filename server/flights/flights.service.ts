@@ -153,12 +153,14 @@ export class FlightsService {
     const row = await this.repo
       .createQueryBuilder('f')
       .leftJoin(Membership, 'm', 'm.teamId = f.teamId AND m.userId = :userId', { userId })
+      .leftJoin(User, 'cu', 'cu.id = m.userId')
       .select([
         'f.id AS id',
         'f.teamId AS teamId',
         'f.pilotId AS pilotId',
         'f.aircraftId AS aircraftId',
         'm.role AS role',
+        'cu.name AS userName',
       ])
       .where('f.id = :flightId', { flightId })
       .getRawOne<{
@@ -167,10 +169,11 @@ export class FlightsService {
         pilotId: string;
         aircraftId: string;
         role: Role | null;
+        userName: string | null;
       }>();
     if (!row || !row.role) throw new NotFoundError('Flight');
     if (!can(row.role, action)) throw new ForbiddenError();
-    return { ...row, role: row.role };
+    return { ...row, role: row.role, userName: row.userName ?? '' };
   }
 
   private async summary(id: string): Promise<FlightSummary> {

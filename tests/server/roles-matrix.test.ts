@@ -113,16 +113,14 @@ async function comment(c: Ctx, authorId: string, flightId: string) {
 }
 async function extraMember(c: Ctx, role: Role) {
   const id = randomUUID();
-  await c.t.dataSource
-    .getRepository(User)
-    .insert({
-      id,
-      email: `${id}@crew.example`,
-      name: 'Extra',
-      passwordHash: 'x',
-      commentMail: true,
-      createdAt: Date.now(),
-    });
+  await c.t.dataSource.getRepository(User).insert({
+    id,
+    email: `${id}@crew.example`,
+    name: 'Extra',
+    passwordHash: 'x',
+    commentMail: true,
+    createdAt: Date.now(),
+  });
   await c.t.dataSource
     .getRepository(Membership)
     .insert({ teamId: c.teamId, userId: id, role, joinedAt: Date.now() });
@@ -449,12 +447,10 @@ describe('role × route matrix (PRODUCT.md §2)', () => {
       agents[who] = s.agent;
       ids[who] = s.id;
     }
-    const res = await agents.owner
-      .post('/api/auth/sign-in')
-      .send({
-        email: (await t.services.auth.me(ids.owner)).email,
-        password: 'correct horse battery',
-      });
+    const res = await agents.owner.post('/api/auth/sign-in').send({
+      email: (await t.services.auth.me(ids.owner)).email,
+      password: 'correct horse battery',
+    });
     ownerCookie = res.headers['set-cookie']![0]!.split(';')[0]!;
     teamId = (await t.services.teams.create(ids.owner, 'Club and filming crew')).id;
     for (const role of roles.filter((r) => r !== 'owner')) {

@@ -1,4 +1,5 @@
 import { spawn, type ChildProcess } from 'node:child_process';
+import { createServer } from 'node:net';
 
 export interface SpawnedServer {
   url: string;
@@ -7,40 +8,42 @@ export interface SpawnedServer {
   exited: Promise<number | null>;
 }
 
-/** Starts `tsx server/index.ts` as its own process and waits for its "listening" log line. */
-export async function spawnServer(env: Record<string, string>): Promise<SpawnedServer> {
-  const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'server/index.ts'], {
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      PORT: '0',
-      HOST: '127.0.0.1',
-      LOG_LEVEL: 'info',
-      ...env,
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
+/** A port that was free a moment ago (the OS hands out a fresh ephemeral one each time). */
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const s = createServer();
+    s.once('error', reject);
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as { port: number };
+      s.close(() => resolve(port));
+    });
   });
+}
+
+/** Starts `tsx server/index.ts` as its own process and waits until /api/health answers. */
+export async function spawnServer(env: Record<string, string>): Promise<SpawnedServer> {
+  const port = await freePort();
+  const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'server/index.ts'], {
+    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', ...env },
+    stdio: ['ignore', 'ignore', 'pipe'],
+  });
+  let stderr = '';
+  child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
   const exited = new Promise<number | null>((resolve) =>
     child.once('exit', (code) => resolve(code)),
   );
-  let stderr = '';
-  child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
-  const url = await new Promise<string>((resolve, reject) => {
-    let out = '';
-    const onData = (d: Buffer) => {
-      out += d.toString();
-      const m = /"url":"(http:\/\/[^"]+)"/.exec(out);
-      if (m) {
-        child.stdout!.off('data', onData);
-        // Keep draining so a full pipe never blocks the server.
-        child.stdout!.resume();
-        resolve(m[1]!.replace('localhost', '127.0.0.1'));
-      }
-    };
-    child.stdout!.on('data', onData);
-    void exited.then((code) =>
-      reject(new Error(`server exited (${code}) before listening:\n${stderr}`)),
+  const url = `http://127.0.0.1:${port}`;
+  for (;;) {
+    if (child.exitCode !== null || child.signalCode !== null) {
+      throw new Error(
+        `server exited (${child.exitCode ?? child.signalCode}) before listening:\n${stderr}`,
+      );
+    }
+    const ok = await fetch(`${url}/api/health`).then(
+      (r) => r.ok,
+      () => false,
     );
-  });
-  return { url, child, exited };
+    if (ok) return { url, child, exited };
+    await new Promise((r) => setTimeout(r, 100));
+  }
 }

@@ -1,0 +1,265 @@
+/**
+ * API load: comment writes per second and a paginated flight list over 10 k stored flights,
+ * driven by autocannon against the real server process on loopback with a fresh SQLite file.
+ * Reference in the same run: `GET /api/health` (one trivial query), so the ratios say how much
+ * of the machine's request budget a write or a list page costs. Bounded in count and time.
+ *
+ * Throughput is measured closed-loop (10 connections, as fast as the server answers). Latency
+ * is measured open-loop at a fixed offered rate — 500 writes/s (the target rate) and 200 list
+ * pages/s — with autocannon's coordinated-omission correction, because a closed loop's latency
+ * is just connections ÷ throughput and says nothing about a server meeting a given load.
+ */
+import { randomUUID } from 'node:crypto';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { join } from 'node:path';
+import { parseConfig } from '../../server/config';
+import { openDatabase } from '../../server/db/data-source';
+import { Flight } from '../../server/flights/flight.entity';
+import { findingStats, trendOf } from '../../server/flights/flight-summary';
+import { createMemoryMailer } from '../../server/mail/mailer';
+import { createServices } from '../../server/services';
+import { kite, report } from '../server/helpers/fixtures';
+import { spawnServer } from '../server/helpers/spawn-server';
+import type { Bench } from './registry';
+
+interface Histogram {
+  average: number;
+  p50: number;
+  p99: number;
+}
+interface Result {
+  latency: Histogram;
+  requests: Histogram & { total: number };
+  duration: number;
+  errors: number;
+  timeouts: number;
+  non2xx: number;
+  '2xx': number;
+}
+interface Request {
+  method?: string;
+  path?: string;
+  body?: string;
+  headers?: Record<string, string>;
+}
+type Autocannon = (opts: {
+  url: string;
+  connections: number;
+  duration: number;
+  amount?: number;
+  headers?: Record<string, string>;
+  overallRate?: number;
+  requests: { method?: string; setupRequest?: (req: Request) => Request }[];
+}) => Promise<Result>;
+// autocannon ships no types; only this file uses it.
+const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
+
+const FLIGHTS = 10_000;
+const PASSWORD = 'bench passphrase long';
+
+async function seed(dataDir: string) {
+  const config = parseConfig({ NODE_ENV: 'test', DATA_DIR: dataDir });
+  const { dataSource } = await openDatabase(config);
+  const services = createServices(dataSource, config, createMemoryMailer());
+  const userId = await services.auth.signUp({
+    email: 'mara@crew.example',
+    password: PASSWORD,
+    name: 'Mara',
+  });
+  const team = await services.teams.create(userId, 'Club and filming crew');
+  const aircraft = await services.fleet.create(userId, team.id, kite);
+  const r = report();
+  const { counts, worst } = findingStats(r);
+  const common = {
+    teamId: team.id,
+    aircraftId: aircraft.id,
+    pilotId: userId,
+    durationS: r.durationS,
+    sampleRateHz: r.sampleRateHz,
+    fileName: 'kite.csv',
+    sizeBytes: 1_000_000,
+    rawKey: null,
+    rawGzip: false,
+    reportVersion: r.version,
+    report: JSON.stringify(r),
+    detail: null,
+    trend: JSON.stringify(trendOf(r)),
+    worstSeverity: worst,
+    noteCount: counts.note,
+    watchCount: counts.watch,
+    actCount: counts.act,
+    commentCount: 0,
+    openComments: 0,
+    reviewState: 'none',
+    note: '',
+  };
+  const start = Date.UTC(2025, 0, 1);
+  const repo = dataSource.getRepository(Flight);
+  await dataSource.transaction(async (em) => {
+    for (let i = 0; i < FLIGHTS; i += 500) {
+      const rows = Array.from({ length: Math.min(500, FLIGHTS - i) }, (_, k) => ({
+        ...common,
+        id: randomUUID(),
+        sha256: (i + k).toString(16).padStart(64, '0'),
+        recordedAt: start + (i + k) * 3_600_000,
+        createdAt: Date.now(),
+        updatedAt: Date.now(),
+      }));
+      await em.getRepository(Flight).insert(rows);
+    }
+  });
+  const flightId = (
+    await repo.findOneOrFail({
+      where: { teamId: team.id },
+      select: { id: true },
+      order: { recordedAt: 'DESC' },
+    })
+  ).id;
+  await dataSource.destroy();
+  return { teamId: team.id, flightId };
+}
+
+async function signIn(url: string) {
+  const res = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'mara@crew.example', password: PASSWORD }),
+  });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status}`);
+  return res.headers.get('set-cookie')!.split(';')[0]!;
+}
+
+/** Walks the list once to collect cursors spread over all 10 k flights. */
+async function cursors(url: string, cookie: string, teamId: string) {
+  const out: string[] = [''];
+  let cursor: string | null = null;
+  do {
+    const q: string = `limit=200${cursor ? `&cursor=${cursor}` : ''}`;
+    const res = await fetch(`${url}/api/teams/${teamId}/flights?${q}`, { headers: { cookie } });
+    const body = (await res.json()) as { nextCursor: string | null };
+    cursor = body.nextCursor;
+    if (cursor) out.push(cursor);
+  } while (cursor);
+  return out;
+}
+
+function check(name: string, r: Result) {
+  if (r.errors || r.timeouts || r.non2xx) {
+    throw new Error(
+      `${name}: ${r.errors} errors, ${r.timeouts} timeouts, ${r.non2xx} non-2xx responses`,
+    );
+  }
+}
+
+const bench: Bench = async ({ json, dir }) => {
+  const dataDir = mkdtempSync(join(dir, 'api-'));
+  const log = (s: string) => {
+    if (!json) console.log(s);
+  };
+  const server = await (async () => {
+    log(`seeding ${FLIGHTS} flights…`);
+    const seeded = await seed(dataDir);
+    const s = await spawnServer({
+      DATA_DIR: dataDir,
+      LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'info',
+    });
+    return { ...s, ...seeded };
+  })();
+  try {
+    const cookie = await signIn(server.url);
+    const headers = { cookie, 'content-type': 'application/json' };
+    const base = { url: server.url, connections: 10, headers };
+
+    // Warm up the JIT and SQLite page cache.
+    await autocannon({
+      ...base,
+      duration: 2,
+      amount: 500,
+      requests: [{ method: 'GET', setupRequest: (r) => ({ ...r, path: '/api/health' }) }],
+    });
+
+    const health = await autocannon({
+      ...base,
+      duration: 8,
+      amount: 8000,
+      requests: [{ setupRequest: (r) => ({ ...r, method: 'GET', path: '/api/health' }) }],
+    });
+    check('health', health);
+
+    let t = 0;
+    const writeRequest = (r: Request): Request => ({
+      ...r,
+      method: 'PUT',
+      path: `/api/comments/${randomUUID()}`,
+      body: JSON.stringify({
+        flightId: server.flightId,
+        tS: (t++ % 1800) / 10,
+        body: 'Motor 3 runs warm after the punch-out; check the bearing.',
+      }),
+    });
+    const writes = await autocannon({
+      ...base,
+      duration: 8,
+      amount: 6000,
+      requests: [{ setupRequest: writeRequest }],
+    });
+    check('comment writes', writes);
+    const writesAt500 = await autocannon({
+      ...base,
+      duration: 8,
+      overallRate: 500,
+      requests: [{ setupRequest: writeRequest }],
+    });
+    check('comment writes at 500/s', writesAt500);
+
+    const pages = await cursors(server.url, cookie, server.teamId);
+    let p = 0;
+    const listRequest = (r: Request): Request => {
+      const c = pages[p++ % pages.length]!;
+      return {
+        ...r,
+        method: 'GET',
+        path: `/api/teams/${server.teamId}/flights?limit=50${c ? `&cursor=${c}` : ''}`,
+      };
+    };
+    const list = await autocannon({
+      ...base,
+      duration: 8,
+      amount: 4000,
+      requests: [{ setupRequest: listRequest }],
+    });
+    check('flight list', list);
+    const listAt200 = await autocannon({
+      ...base,
+      duration: 8,
+      overallRate: 200,
+      requests: [{ setupRequest: listRequest }],
+    });
+    check('flight list at 200/s', listAt200);
+
+    const perS = (r: Result) => r['2xx'] / r.duration;
+    const figures = {
+      writesPerS: Math.round(perS(writes)),
+      writeP99Ms: writesAt500.latency.p99,
+      listP99Ms: listAt200.latency.p99,
+    };
+    const ref = perS(health);
+    log(
+      `reference GET /api/health: ${Math.round(ref)} req/s (closed loop, 10 connections), p50 ${health.latency.p50} ms, p99 ${health.latency.p99} ms`,
+    );
+    log(
+      `comment writes: ${figures.writesPerS} /s closed loop (${(perS(writes) / ref).toFixed(2)}× health); at 500 /s offered: p50 ${writesAt500.latency.p50} ms, p99 ${writesAt500.latency.p99} ms — target ≥ 500 /s with p99 ≤ 50 ms`,
+    );
+    log(
+      `flight list, 50 a page over ${FLIGHTS} flights (${pages.length} cursors): ${Math.round(perS(list))} /s closed loop (${(perS(list) / ref).toFixed(2)}× health); at 200 /s offered: p50 ${listAt200.latency.p50} ms, p99 ${listAt200.latency.p99} ms — target p99 ≤ 30 ms`,
+    );
+    return figures;
+  } finally {
+    server.child.kill('SIGTERM');
+    await server.exited;
+    rmSync(dataDir, { recursive: true, force: true });
+  }
+};
+
+export default bench;
