@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import {
   useFieldArray,
@@ -44,7 +45,10 @@ export function AirframeEditor({
   submitting?: boolean;
   serverError?: string | null;
 }) {
-  const form = useForm({ resolver: zodResolver(AirframeForm), defaultValues: initial });
+  const form = useForm({
+    resolver: zodResolver(AirframeForm, plainMessages),
+    defaultValues: initial,
+  });
   const {
     register,
     control,

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { BenchRunInput, type BenchRow, type BenchRun } from '../../../../shared/schemas/aircraft';
@@ -125,7 +126,7 @@ function BenchRunForm({ aircraftId }: { aircraftId: string }) {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(BenchRunInput),
+    resolver: zodResolver(BenchRunInput, plainMessages),
     defaultValues: {
       date: new Date().toISOString().slice(0, 10),
       motor: '',

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Components } from '../../../../shared/schemas/aircraft';
@@ -32,7 +33,7 @@ export function PartsEditor({
     register,
     handleSubmit,
     formState: { errors, isDirty },
-  } = useForm({ resolver: zodResolver(PartsForm), values: initial });
+  } = useForm({ resolver: zodResolver(PartsForm, plainMessages), values: initial });
   const e = errors.components;
   return (
     <form

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ServiceEntryInput, ServiceKind } from '../../../../shared/schemas/aircraft';
@@ -43,7 +44,7 @@ export function ServiceLogPanel({
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(ServiceEntryInput),
+    resolver: zodResolver(ServiceEntryInput, plainMessages),
     defaultValues: { date: today(), kind: 'repair' as ServiceKind, note: '' },
   });
 

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ResetConfirmInput, type Me } from '../../../../shared/schemas/auth';
@@ -16,12 +17,15 @@ export function ResetConfirmForm({ token, onDone }: { token: string; onDone: (me
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm({ resolver: zodResolver(ResetConfirmInput), defaultValues: { token, password: '' } });
+  } = useForm({
+    resolver: zodResolver(ResetConfirmInput, plainMessages),
+    defaultValues: { token, password: '' },
+  });
 
   return (
     <form
       noValidate
-      aria-label="Choose a new password"
+      aria-label="Password reset"
       className="space-y-4"
       onSubmit={handleSubmit((input) => {
         setFormError(null);

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ResetRequestInput } from '../../../../shared/schemas/auth';
@@ -16,7 +17,10 @@ export function ResetRequestForm() {
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm({ resolver: zodResolver(ResetRequestInput), defaultValues: { email: '' } });
+  } = useForm({
+    resolver: zodResolver(ResetRequestInput, plainMessages),
+    defaultValues: { email: '' },
+  });
 
   if (request.isSuccess)
     return (

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { SignInInput, type Me } from '../../../../shared/schemas/auth';
@@ -16,7 +17,10 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (me: Me) => void }) {
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm({ resolver: zodResolver(SignInInput), defaultValues: { email: '', password: '' } });
+  } = useForm({
+    resolver: zodResolver(SignInInput, plainMessages),
+    defaultValues: { email: '', password: '' },
+  });
 
   const onSubmit = handleSubmit((input) => {
     setFormError(null);

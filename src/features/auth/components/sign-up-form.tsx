@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { SignUpInput, type Me } from '../../../../shared/schemas/auth';
@@ -26,7 +27,7 @@ export function SignUpForm({
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(SignUpInput),
+    resolver: zodResolver(SignUpInput, plainMessages),
     defaultValues: {
       name: '',
       email: email ?? '',

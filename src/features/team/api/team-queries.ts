@@ -22,10 +22,19 @@ export const teamQueries = {
   list: () => queryOptions({ queryKey: teamKeys.list(), queryFn: fetchTeams }),
   detail: (teamId: string) =>
     queryOptions({ queryKey: teamKeys.detail(teamId), queryFn: () => fetchTeam(teamId) }),
+  // People join and leave from other browsers: always ask again when the page opens.
   members: (teamId: string) =>
-    queryOptions({ queryKey: teamKeys.members(teamId), queryFn: () => fetchMembers(teamId) }),
+    queryOptions({
+      queryKey: teamKeys.members(teamId),
+      queryFn: () => fetchMembers(teamId),
+      staleTime: 0,
+    }),
   invites: (teamId: string) =>
-    queryOptions({ queryKey: teamKeys.invites(teamId), queryFn: () => fetchInvites(teamId) }),
+    queryOptions({
+      queryKey: teamKeys.invites(teamId),
+      queryFn: () => fetchInvites(teamId),
+      staleTime: 0,
+    }),
   presets: (teamId: string) =>
     queryOptions({ queryKey: teamKeys.presets(teamId), queryFn: () => fetchPresets(teamId) }),
   thresholds: (teamId: string) =>

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { TeamInput, type Team } from '../../../../shared/schemas/teams';
@@ -22,7 +23,7 @@ export function CreateTeamForm({
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm({ resolver: zodResolver(TeamInput), defaultValues: { name: '' } });
+  } = useForm({ resolver: zodResolver(TeamInput, plainMessages), defaultValues: { name: '' } });
   return (
     <form
       noValidate

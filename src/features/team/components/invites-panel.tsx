@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { InviteInput } from '../../../../shared/schemas/teams';
@@ -27,7 +28,7 @@ export function InvitesPanel({ teamId }: { teamId: string }) {
     reset,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(InviteInput),
+    resolver: zodResolver(InviteInput, plainMessages),
     defaultValues: { email: '', role: 'pilot' as const },
   });
 

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { TeamPatch } from '../../../../shared/schemas/teams';
@@ -24,7 +25,7 @@ export function TeamNameForm({
     handleSubmit,
     setError,
     formState: { errors, isDirty },
-  } = useForm({ resolver: zodResolver(TeamPatch), values: { name } });
+  } = useForm({ resolver: zodResolver(TeamPatch, plainMessages), values: { name } });
   return (
     <form
       noValidate

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { defaultThresholds, Thresholds } from '../../../../shared/analysis/thresholds';
@@ -132,7 +133,7 @@ function ThresholdsForm_({
     reset,
     setError,
     formState: { errors, isDirty },
-  } = useForm({ resolver: zodResolver(ThresholdsForm), values });
+  } = useForm({ resolver: zodResolver(ThresholdsForm, plainMessages), values });
 
   return (
     <form

@@ -1,0 +1,54 @@
+import { expect, test } from '@playwright/test';
+import { writeScenarioCsv } from './fixtures/synth-log';
+import { addAircraftFromPreset, createTeam, signUp, uniqueEmail } from './helpers/accounts';
+
+test('a log imported offline is kept on the device and synced when the network is back', async ({
+  page,
+  context,
+}) => {
+  test.setTimeout(120_000);
+  await signUp(page, { name: 'Kit Calloway', email: uniqueEmail('field') });
+  await createTeam(page, 'Field crew');
+  await addAircraftFromPreset(page, { name: 'Kite', preset: 'quad-x', armMm: 110 });
+
+  // Online once: the service worker installs and precaches the app shell.
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: 'Import' })
+    .click();
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+  });
+  await expect
+    .poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller)))
+    .toBe(true);
+  await page.getByLabel('Aircraft').selectOption({ label: 'Kite · 4 motors' });
+
+  await context.setOffline(true);
+  await expect(page.getByTestId('sync-state')).toHaveText(/^Offline/);
+  const log = writeScenarioCsv('weak-motor', { seconds: 20 });
+  await page.getByLabel('Flight logs').setInputFiles(log);
+  await expect(page).toHaveURL(/\/flights\/[0-9a-f-]{36}/, { timeout: 60_000 });
+  const flightId = page.url().match(/flights\/([0-9a-f-]{36})/)![1]!;
+  await expect(page.getByTestId('sync-state')).toHaveText('Offline · 1 flight not synced');
+
+  // Still offline, a reload gets the shell from the service worker and the flight from IndexedDB.
+  await page.reload();
+  await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
+  await expect(page.getByTestId('sync-state')).toHaveText('Offline · 1 flight not synced');
+
+  // Back online: the sync runner sends it without anyone asking.
+  await context.setOffline(false);
+  await page.evaluate(() => window.dispatchEvent(new Event('online')));
+  await expect(page.getByTestId('sync-state')).toHaveText('All synced', { timeout: 30_000 });
+
+  const stored = await page.request.get(`/api/flights/${flightId}`);
+  expect(stored.status()).toBe(200);
+  expect((await stored.json()).aircraftName).toBe('Kite');
+  const raw = await page.request.get(`/api/flights/${flightId}/raw`);
+  expect(raw.status()).toBe(200);
+
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Fleet' }).click();
+  await expect(page.getByRole('table', { name: 'Flights' })).toContainText('Kite');
+  await expect(page.getByText('Every flight read on this device is on the server.')).toBeVisible();
+});
