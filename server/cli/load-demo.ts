@@ -5,7 +5,7 @@
 import 'reflect-metadata';
 import { ConfigError, loadConfig } from '../config';
 import { openDatabase } from '../db/data-source';
-import { discardingMailer } from '../demo/discarding-mailer';
+import { createMemoryMailer } from '../mail/mailer';
 import { loadDemo } from '../demo/load-demo';
 import { createServices } from '../services';
 import { DEMO_PASSWORD, demoMembers } from '../../shared/sim/demo/crew';
@@ -17,7 +17,7 @@ async function main() {
     const started = Date.now();
     const result = await loadDemo(
       dataSource,
-      createServices(dataSource, config, discardingMailer()),
+      createServices(dataSource, config, createMemoryMailer()),
     );
     if (!result.loaded) {
       console.log('Demo team already loaded; nothing to do.');

@@ -33,7 +33,7 @@ export function demoId(kind: string, index: number): string {
 /**
  * Loads the demo crew, fleet, flights (synthesised, analysed with the same engine the browser
  * runs, raw logs stored) and coach comments. Does nothing when the demo owner already exists.
- * Pass services built on a discarding mailer: a demo load should not fill the inbox.
+ * Pass services built on a memory mailer: a demo load should not fill real inboxes.
  */
 export async function loadDemo(
   dataSource: DataSource,
