@@ -27,6 +27,8 @@ export interface AppDeps {
   /** Prebuilt services (to share them with demo loading); built from the rest when not given. */
   services?: Services;
   logger?: Logger;
+  /** Built client served in production; `dist/` of the working directory by default. */
+  clientDir?: string;
 }
 
 /** Builds the Express app without listening, so tests and the server share one wiring. */
@@ -68,7 +70,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', apiNotFound);
 
   if (config.env === 'production') {
-    const dist = resolve('dist');
+    const dist = deps.clientDir ?? resolve('dist');
     const index = join(dist, 'index.html');
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
     // Client routes (/fleet, /flights/…) all load the SPA shell.

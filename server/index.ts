@@ -1,6 +1,8 @@
 import 'reflect-metadata';
 import type { AddressInfo } from 'node:net';
+import { LessThan } from 'typeorm';
 import { createApp } from './app';
+import { Session } from './auth/session.entity';
 import { ConfigError, loadConfig, type Config } from './config';
 import { openDatabase } from './db/data-source';
 import { createLogger } from './http/logger';
@@ -28,9 +30,19 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const url = `http://localhost:${port}`;
   logger.info({ url, dbPath: config.dbPath, env: config.env }, `Hoverprint listening on ${url}`);
 
+  // Lucia leaves expired sessions in the table; sweep them hourly.
+  const sweep = setInterval(() => {
+    dataSource
+      .getRepository(Session)
+      .delete({ expiresAt: LessThan(Math.floor(Date.now() / 1000)) })
+      .catch((err: unknown) => logger.error({ err }, 'expired session sweep failed'));
+  }, 3_600_000);
+  sweep.unref();
+
   let closing: Promise<void> | undefined;
   const close = () =>
     (closing ??= (async () => {
+      clearInterval(sweep);
       await new Promise<void>((r) => {
         server.close(() => r());
         server.closeIdleConnections();

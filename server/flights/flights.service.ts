@@ -234,6 +234,8 @@ export class FlightsService {
           'Only the pilot who uploaded this flight, or the team owner, can replace it.',
         );
       }
+      // A retry without sizeBytes keeps the size the raw upload recorded.
+      fields.sizeBytes = input.sizeBytes ?? existing.sizeBytes;
       const same = (Object.keys(fields) as (keyof typeof fields)[]).every(
         (k) => existing[k] === fields[k],
       );
