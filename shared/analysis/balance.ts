@@ -23,24 +23,35 @@ export function hoverMeans(
   const output: number[] = [];
   const outputPow: number[] = [];
   const rpmSq: number[] | null = rpms ? [] : null;
-  let n = 0;
-  for (const [a, b] of hover) n += b - a;
   motors.forEach((m, i) => {
     let s = 0;
     let sp = 0;
     let sr = 0;
+    let n = 0;
+    let nr = 0;
     const r = rpms?.[i];
     for (const [a, b] of hover) {
       for (let k = a; k < b; k++) {
-        const u = Math.max(0, m[k]!);
-        s += u;
-        sp += gamma === 2 ? u * u : u ** gamma;
-        if (r) sr += r[k]! * r[k]!;
+        const v = m[k]!;
+        // Missing samples (NaN) are skipped, not averaged in.
+        if (v === v) {
+          const u = v > 0 ? v : 0;
+          s += u;
+          sp += gamma === 2 ? u * u : u ** gamma;
+          n++;
+        }
+        if (r) {
+          const w = r[k]!;
+          if (w === w) {
+            sr += w * w;
+            nr++;
+          }
+        }
       }
     }
     output.push(n ? s / n : NaN);
     outputPow.push(n ? sp / n : NaN);
-    rpmSq?.push(n ? sr / n : NaN);
+    rpmSq?.push(nr ? sr / nr : NaN);
   });
   return { output, outputPow, rpmSq };
 }

@@ -98,23 +98,28 @@ export function analyseHeadroom(
         current.fill(0);
         for (let i = s; i < s + block; i++) {
           if (source === 'motor') {
-            for (let m = 0; m < n; m++) current[m]! += perMotor[m]![i]!;
+            for (let m = 0; m < n; m++) {
+              const v = perMotor[m]![i]!;
+              if (v === v) current[m]! += v;
+            }
           } else {
             let tot = 0;
             for (let m = 0; m < n; m++) {
               const u = motors[m]![i]!;
-              const w = u > 0 ? (gamma === 2 ? u * u : u ** gamma) : 0;
+              const w = u > 0 ? (gamma === 2 ? u * u : u ** gamma) : 0; // NaN > 0 is false
               weight[m] = w;
               tot += w;
             }
             if (tot <= 0) continue;
             const share = ibat![i]! / tot;
+            if (share !== share) continue;
             for (let m = 0; m < n; m++) current[m]! += share * weight[m]!;
           }
         }
         let over = false;
         for (let m = 0; m < n; m++) {
           const c = current[m]! / block;
+          if (!Number.isFinite(c)) continue;
           if (escPeakA === null || c > escPeakA) {
             escPeakA = c;
             escPeakMotor = m + 1;

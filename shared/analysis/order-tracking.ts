@@ -40,7 +40,7 @@ export function attributeOrder(
         lo = Math.min(lo, hz[m]!);
         hi = Math.max(hi, hz[m]!);
       }
-      if (hi - lo < minSpread || hi * 2 >= fs) continue;
+      if (!(hi - lo >= minSpread) || hi * 2 >= fs) continue;
       used++;
       re.fill(0);
       im.fill(0);
@@ -48,11 +48,13 @@ export function attributeOrder(
       const k = (2 * Math.PI * harmonic) / 60 / fs;
       for (let i = s; i < s + len; i++) {
         for (let m = 0; m < n; m++) {
-          phase[m]! += k * rpms[m]![i]!;
+          const w = rpms[m]![i]!;
+          if (w === w) phase[m]! += k * w;
           const c = Math.cos(phase[m]!);
           const sn = Math.sin(phase[m]!);
           for (let ch = 0; ch < channels.length; ch++) {
             const v = channels[ch]![i]!;
+            if (v !== v) continue;
             re[m * channels.length + ch]! += v * c;
             im[m * channels.length + ch]! -= v * sn;
           }

@@ -74,8 +74,13 @@ export function energyUsed(
   for (let k = 1; k < time.length; k++) {
     const dt = time[k]! - time[k - 1]!;
     if (!(dt > 0)) continue;
-    as += 0.5 * (current[k]! + current[k - 1]!) * dt;
-    if (voltage) ws += 0.5 * (current[k]! * voltage[k]! + current[k - 1]! * voltage[k - 1]!) * dt;
+    const da = 0.5 * (current[k]! + current[k - 1]!) * dt;
+    // A missing sample (NaN) loses one step, not the total.
+    if (Number.isFinite(da)) as += da;
+    if (voltage) {
+      const dw = 0.5 * (current[k]! * voltage[k]! + current[k - 1]! * voltage[k - 1]!) * dt;
+      if (Number.isFinite(dw)) ws += dw;
+    }
   }
   return { mAh: as / 3.6, wh: voltage ? ws / 3600 : null };
 }
@@ -165,7 +170,8 @@ export function analysePower(log: ParsedLog, armed: Ranges, cells?: number): Pow
     let acc = 0;
     let next = 0;
     for (let k = 1; k < log.rows && next < q.length; k++) {
-      acc += 0.5 * (ibat[k]! + ibat[k - 1]!) * (time[k]! - time[k - 1]!);
+      const da = 0.5 * (ibat[k]! + ibat[k - 1]!) * (time[k]! - time[k - 1]!);
+      if (Number.isFinite(da)) acc += da;
       while (next < q.length && vm.at[next]! <= k) q[next++] = acc / 3.6;
     }
     const fit = fitSag(vm.mean, im.mean, q);

@@ -57,24 +57,28 @@ export function analyseTracking(log: ParsedLog, armed: Ranges): TrackingResult |
       for (let j = 0; j < blocks; j++) {
         let x = 0;
         let y = 0;
+        let c = 0;
         for (let i = a + j * decim, end = i + decim; i < end; i++) {
           const s = sp[i]!;
           const gv = g[i]!;
           const e = s - gv;
+          // Missing samples (NaN) are skipped.
+          if (e !== e) continue;
           se += e * e;
+          n++;
           if (e > worst || -e > worst) {
             worst = Math.abs(e);
             worstAt = i;
           }
           x += s;
           y += gv;
+          c++;
         }
-        xs[j] = x / decim;
-        ys[j] = y / decim;
+        xs[j] = c ? x / c : j > 0 ? xs[j - 1]! : 0;
+        ys[j] = c ? y / c : j > 0 ? ys[j - 1]! : 0;
         mx += xs[j]!;
         my += ys[j]!;
       }
-      n += blocks * decim;
       if (blocks < 4 * maxLag) continue;
       mx /= blocks;
       my /= blocks;

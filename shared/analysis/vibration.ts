@@ -56,15 +56,22 @@ function prefixSums(rows: number, cols: readonly ArrayLike<number>[]): Float64Ar
   const p = new Float64Array(rows + 1);
   const k = 1 / cols.length;
   let acc = 0;
+  // A missing value (NaN) holds the previous one, so one gap doesn't poison every later sum.
+  let last = 0;
   if (cols.length === 1) {
     const c = cols[0]!;
-    for (let i = 0; i < rows; i++) p[i + 1] = acc += c[i]!;
+    for (let i = 0; i < rows; i++) {
+      const v = c[i]!;
+      if (v === v) last = v;
+      p[i + 1] = acc += last;
+    }
     return p;
   }
   for (let i = 0; i < rows; i++) {
     let s = 0;
     for (const c of cols) s += c[i]!;
-    p[i + 1] = acc += s * k;
+    if (s === s) last = s * k;
+    p[i + 1] = acc += last;
   }
   return p;
 }
@@ -292,16 +299,20 @@ export function labelPeak(
   let match: [Exclude<PeakLabel, null | 'frame'>, number] | undefined;
   let motors: number[] = [];
   let aliasOfHz: number | undefined;
-  for (const o of orders) {
-    const hits = motorHz.flatMap((f, i) =>
-      Math.abs(hz - fold(o[1] * f)) <= tol(o[1] * f) ? [i + 1] : [],
-    );
-    if (hits.length) {
-      match = o;
-      motors = hits;
-      const f0 = o[1] * motorHz[hits[0]! - 1]!;
-      if (f0 > fs / 2) aliasOfHz = f0;
-      break;
+  // Orders seen directly win over orders folded down from above Nyquist.
+  search: for (const folded of [false, true]) {
+    for (const o of orders) {
+      const hits = motorHz.flatMap((f, i) => {
+        const at = o[1] * f;
+        if (folded !== at > fs / 2) return [];
+        return Math.abs(hz - fold(at)) <= tol(at) ? [i + 1] : [];
+      });
+      if (hits.length) {
+        match = o;
+        motors = hits;
+        if (folded) aliasOfHz = o[1] * motorHz[hits[0]! - 1]!;
+        break search;
+      }
     }
   }
   if (!match && ctx.poles && motorHz.length) {

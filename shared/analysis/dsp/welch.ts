@@ -58,6 +58,8 @@ export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): 
         seg[i] = v * w[i]!;
         sum += v;
       }
+      // A segment with a missing value (NaN) would poison the average: leave it out.
+      if (!Number.isFinite(sum)) continue;
       if (detrend) {
         const mean = sum / n;
         for (let i = 0; i < n; i++) seg[i]! -= mean * w[i]!;
