@@ -26,6 +26,8 @@ export type InspectResult =
 const HEAD_BYTES = 64 * 1024;
 /** Progress at most ten times a second (STYLE.md, Workers). */
 const PROGRESS_INTERVAL_MS = 100;
+/** How often the parse lets queued messages (a cancel) run, when chunks arrive back to back. */
+const BREAK_INTERVAL_MS = 50;
 
 const cancelled = new Set<string>();
 
@@ -54,7 +56,7 @@ const api = {
     const totalBytes = file.size;
     let lastReport = -Infinity;
     try {
-      const log = await parseLogStream(file.stream(), {
+      const log = await parseLogStream(withBreaks(file.stream()), {
         ...options,
         expectedBytes: totalBytes,
         signal: {
@@ -96,6 +98,21 @@ const api = {
     }
   },
 };
+
+/**
+ * A file's chunks, with a pause for the event loop every few tens of ms: a Blob already in
+ * memory can hand over chunk after chunk without ever letting a cancel message in.
+ */
+async function* withBreaks(stream: ReadableStream<Uint8Array>): AsyncGenerator<Uint8Array> {
+  let last = -Infinity; // the first break comes after the first chunk: a prompt cancel stops early
+  for await (const chunk of iterateBytes(stream)) {
+    yield chunk;
+    if (performance.now() - last >= BREAK_INTERVAL_MS) {
+      await new Promise((resolve) => setTimeout(resolve, 0));
+      last = performance.now();
+    }
+  }
+}
 
 async function readHead(file: Blob, limit: number): Promise<Uint8Array> {
   const magic = new Uint8Array(await file.slice(0, 2).arrayBuffer());

@@ -364,18 +364,21 @@ export class LogReader {
             b = buf[++p]!;
           }
           const digits0 = p;
-          while (b >= 48 && b <= 57) {
-            m = m * 10 + (b - 48);
-            b = buf[++p]!;
+          let d = b - 48;
+          while (d >>> 0 < 10) {
+            m = m * 10 + d;
+            d = buf[++p]! - 48;
           }
+          b = d + 48;
           let nd = p - digits0;
           if (b === DOT || b === decAlt) {
             const frac0 = ++p;
-            b = buf[p]!;
-            while (b >= 48 && b <= 57) {
-              m = m * 10 + (b - 48);
-              b = buf[++p]!;
+            d = buf[p]! - 48;
+            while (d >>> 0 < 10) {
+              m = m * 10 + d;
+              d = buf[++p]! - 48;
             }
+            b = d + 48;
             fd = p - frac0;
             nd += fd;
           }
