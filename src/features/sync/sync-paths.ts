@@ -1,3 +1,5 @@
-/** The two routes a flight sync uses (issue 6): summary first, raw log second. */
-export const flightPath = (id: string) => `/api/flights/${encodeURIComponent(id)}`;
-export const flightRawPath = (id: string) => `/api/flights/${encodeURIComponent(id)}/raw`;
+import { pathTo } from '../../../shared/api/paths';
+
+/** The two routes a flight sync uses: summary first, raw log second. */
+export const flightPath = (id: string) => pathTo('flight', { id });
+export const flightRawPath = (id: string) => pathTo('flightRaw', { id });
