@@ -48,8 +48,8 @@ export function rangeLength(r: Ranges): number {
 /**
  * Splits the flight into armed / idle / hover / manoeuvre on 50 ms blocks (long enough to
  * average out rotor vibration on the gyro, short enough to follow a flip). Hover = armed, off
- * the idle floor, low body rates, and collective within a band of its 1 s centred mean, for at
- * least `hoverMinS`.
+ * the idle floor, low body rates, and collective within a band of its mean over the half
+ * second before or after, for at least `hoverMinS`. The thresholds' reasons are in thresholds.ts.
  */
 export function findSegments(log: ParsedLog, th: Thresholds): Segments {
   const fs = log.sampleRateHz > 0 ? log.sampleRateHz : 1;
@@ -113,10 +113,15 @@ export function findSegments(log: ParsedLog, th: Thresholds): Segments {
       idleFlag[b] = 1;
       continue;
     }
+    // Steady against the half second before or the half second after, so the first and
+    // last blocks of a hold count even though a climb or descent sits on one side.
     const lo = Math.max(0, b - half);
     const hi = Math.min(nb, b + half + 1);
-    const mean = (prefix[hi]! - prefix[lo]!) / (hi - lo);
-    const steady = Math.abs(collective[b]! - mean) <= th.hoverCollectiveBand;
+    const back = (prefix[b + 1]! - prefix[lo]!) / (b + 1 - lo);
+    const fwd = (prefix[hi]! - prefix[b]!) / (hi - b);
+    const c = collective[b]!;
+    const steady =
+      Math.abs(c - back) <= th.hoverCollectiveBand || Math.abs(c - fwd) <= th.hoverCollectiveBand;
     const calm =
       Math.abs(rates[0]![b]!) <= th.hoverRateDegS &&
       Math.abs(rates[1]![b]!) <= th.hoverRateDegS &&
