@@ -55,6 +55,14 @@ export class LogReader {
   private mul = new Float64Array(0);
   private div = new Float64Array(0);
   private sinks: (Column | null)[] = [];
+  /** Index of the time field: its sink is the one Float64Array. */
+  private timeCol = 0;
+  /** Out-values of slowCell (kept on the reader to avoid an object per slow cell). */
+  private cellValue = 0;
+  private cellEmpty = false;
+  private cellBad = false;
+  /** The file's last line had no line ending (finish() supplied one). */
+  private finalWithoutEol = false;
   private capacity = 0;
   private rows = 0;
   private line = 1;
@@ -64,7 +72,6 @@ export class LogReader {
   private emptyCounts = new Float64Array(0);
   private firstEmptyLine = new Int32Array(0);
   private rowEmpties = new Int32Array(0);
-  private rowEmptyN = 0;
 
   /** Error held back until we know whether its line is the file's last (a cut-short line). */
   private pending: LogFormatError | null = null;
@@ -441,12 +448,6 @@ export class LogReader {
     this.rows = rows;
     this.line = line;
   }
-
-  private timeCol = 0;
-  private cellValue = 0;
-  private cellEmpty = false;
-  private cellBad = false;
-  private finalWithoutEol = false;
 
   private undoEmpties(n: number, line: number): void {
     for (let i = 0; i < n; i++) {
