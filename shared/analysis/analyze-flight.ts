@@ -256,14 +256,10 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
   let powerTrace: Trace | null = null;
   if (log.columns.vbat) {
     const cols: Record<string, ArrayLike<number>> = { vbat: log.columns.vbat };
-    if (power) {
-      const v = log.columns.vbat;
-      const cellV = new Float32Array(log.rows);
-      for (let i = 0; i < log.rows; i++) cellV[i] = v[i]! / power.cells;
-      cols.cell_v = cellV;
-    }
     if (log.columns.ibat) cols.ibat = log.columns.ibat;
     powerTrace = downsampleMinMax(time, cols, TRACE_POINTS);
+    // Per-cell voltage is the pack voltage scaled, so it is scaled after downsampling.
+    if (power) powerTrace.series.cell_v = powerTrace.series.vbat!.map((v) => v / power.cells);
   }
   const detail: ReviewDetail = {
     effort: downsampleMinMax(time, effortSeries, TRACE_POINTS),

@@ -51,34 +51,46 @@ export interface VibrationInput {
   prominenceDb: number;
 }
 
-/** Prefix sums of the mean of some columns, so any segment's mean is O(1). */
-function prefixSums(rows: number, cols: readonly ArrayLike<number>[]): Float64Array {
-  const p = new Float64Array(rows + 1);
-  const k = 1 / cols.length;
-  let acc = 0;
-  // A missing value (NaN) holds the previous one, so one gap doesn't poison every later sum.
-  let last = 0;
-  if (cols.length === 1) {
-    const c = cols[0]!;
-    for (let i = 0; i < rows; i++) {
-      const v = c[i]!;
-      if (v === v) last = v;
-      p[i + 1] = acc += last;
+/**
+ * Mean of some columns over every Welch segment (length n, hop n/2) of the ranges, in the order
+ * Welch visits them, from sums over half-segment chunks: one pass over the data, no per-sample
+ * arrays. Missing values (NaN) are left out of the mean.
+ */
+function segmentMeans(cols: readonly ArrayLike<number>[], ranges: Ranges, n: number): Float64Array {
+  const step = n >> 1;
+  const out: number[] = [];
+  for (const [a, b] of ranges) {
+    const chunks = Math.floor((b - a) / step);
+    const sum = new Float64Array(chunks);
+    const cnt = new Float64Array(chunks);
+    for (let j = 0; j < chunks; j++) {
+      let s = 0;
+      let c = 0;
+      for (const col of cols) {
+        for (let i = a + j * step, end = i + step; i < end; i++) {
+          const v = col[i]!;
+          if (v === v) {
+            s += v;
+            c++;
+          }
+        }
+      }
+      sum[j] = s;
+      cnt[j] = c;
     }
-    return p;
+    for (let j = 0; a + j * step + n <= b; j++) {
+      const c = cnt[j]! + cnt[j + 1]!;
+      out.push(c > 0 ? (sum[j]! + sum[j + 1]!) / c : NaN);
+    }
   }
-  for (let i = 0; i < rows; i++) {
-    let s = 0;
-    for (const c of cols) s += c[i]!;
-    if (s === s) last = s * k;
-    p[i + 1] = acc += last;
-  }
-  return p;
+  return Float64Array.from(out);
 }
 
 /** Quantile of a copy of the values (q in 0–1). */
 function quantile(values: ArrayLike<number>, q: number): number {
-  const s = Float64Array.from(values).sort();
+  const s = Float64Array.from(values)
+    .filter((v) => v === v)
+    .sort();
   return s.length ? s[Math.min(s.length - 1, Math.floor(q * s.length))]! : NaN;
 }
 
@@ -117,19 +129,25 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
   const by: 'rpm' | 'throttle' = rpms && rpms.length ? 'rpm' : 'throttle';
   const rowSource: readonly ArrayLike<number>[] | null =
     by === 'rpm' ? rpms! : throttle ? [throttle] : input.collective ? [input.collective] : null;
-  const rowPrefix = rowSource ? prefixSums(log.rows, rowSource) : null;
-  const motorPrefix = rpms ? rpms.map((r) => prefixSums(log.rows, [r])) : null;
-  const segValue = (s: number) =>
-    rowPrefix ? (rowPrefix[s + nperseg]! - rowPrefix[s]!) / nperseg : NaN;
-
-  // First pass: the row variable of every segment, to set the Campbell rows.
   const step = nperseg >> 1;
-  const values: number[] = [];
+  const segIndex = new Map<number, number>();
   for (const [a, b] of ranges)
-    for (let s = a; s + nperseg <= b; s += step) values.push(segValue(s));
+    for (let s = a; s + nperseg <= b; s += step) segIndex.set(s, segIndex.size);
+  const motorSeg = rpms ? rpms.map((r) => segmentMeans([r], ranges, nperseg)) : null;
+  // The row variable of every segment, to set the Campbell rows (rpm: mean of the motors').
+  const values: Float64Array =
+    by === 'rpm' && motorSeg
+      ? Float64Array.from(
+          motorSeg[0]!,
+          (_, j) => motorSeg.reduce((t, m) => t + m[j]!, 0) / motorSeg.length,
+        )
+      : rowSource
+        ? segmentMeans(rowSource, ranges, nperseg)
+        : new Float64Array(segIndex.size).fill(NaN);
+  const segValue = (s: number) => values[segIndex.get(s) ?? -1] ?? NaN;
   const lo = quantile(values, 0.02);
   const hi = quantile(values, 0.98);
-  const rowsOk = rowPrefix && Number.isFinite(lo) && hi > lo;
+  const rowsOk = rowSource !== null && Number.isFinite(lo) && hi > lo;
   const rowWidth = rowsOk ? (hi - lo) / CAMPBELL_ROWS : 1;
   const bins = (nperseg >> 1) + 1;
   const rowOf = (v: number) =>
@@ -217,15 +235,7 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
 
   // Each motor's typical rotation frequency over the analysed stretch (median of segment means).
   const motorHz: number[] = [];
-  if (motorPrefix) {
-    for (const p of motorPrefix) {
-      const vals: number[] = [];
-      for (const [a, b] of ranges)
-        for (let s = a; s + nperseg <= b; s += step)
-          vals.push((p[s + nperseg]! - p[s]!) / nperseg / 60);
-      motorHz.push(quantile(vals, 0.5));
-    }
-  }
+  if (motorSeg) for (const m of motorSeg) motorHz.push(quantile(m, 0.5) / 60);
   const rotorHz = motorHz.length ? motorHz.reduce((a, b) => a + b, 0) / motorHz.length : null;
   const attribution = new Map<number, ReturnType<typeof attributeOrder> | null>();
   for (const [name, ch] of Object.entries(channels)) {
