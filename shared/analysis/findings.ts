@@ -161,7 +161,7 @@ export function buildFindings(f: FindingInput): Finding[] {
             `Vibration at ${where} follows ${who} ${order}. ` +
             (p.label === 'rotor-1x'
               ? `That is usually an unbalanced or chipped prop or a bent shaft: with the battery out, ` +
-                `swap ${p.motor ? `motor ${p.motor}'s prop` : cands.length ? `the props on motors ${list(cands)}` : 'each prop'} for a new one, check the shaft ` +
+                `swap ${p.motor ? `motor ${p.motor}'s prop for a new one` : cands.length ? `the props on motors ${list(cands)} for new ones` : 'each prop for a new one'}, check the shaft ` +
                 `runs true and the bell is not scraped.`
               : p.label === 'rotor-2x'
                 ? `That often means a loose motor mount or a prop not seated flat: with the battery out, ` +
@@ -175,9 +175,10 @@ export function buildFindings(f: FindingInput): Finding[] {
           severity: sev,
           axis: channel,
           message:
-            `A vibration at ${where} is the motors' electrical frequency (about ${Math.round(p.aliasOfHz)} Hz) ` +
-            `folded down by the log rate: electrical noise, not shaking. With the battery out, route ` +
-            `motor wires away from the flight controller, check the capacitor on the power leads, ` +
+            `A vibration at ${where} matches the motors' electrical frequency (about ${Math.round(p.aliasOfHz)} Hz) ` +
+            `folded down by the log rate, so it may be electrical noise rather than shaking; logging at a ` +
+            `higher rate tells the two apart. With the battery out, route motor wires away from the ` +
+            `flight controller, check the capacitor on the power leads, ` +
             `and check the gyro's own filtering on the filter bench.`,
         };
       } else {

@@ -243,6 +243,7 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
     for (const peak of ch.peaks) {
       const verdict = labelPeak(peak.hz, {
         motorHz,
+        ...(motorSeg ? { motorSegHz: motorSeg.map((m) => m.map((v) => v / 60)) } : {}),
         blades,
         df,
         fs,
@@ -278,6 +279,8 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
 interface LabelContext {
   /** Typical rotation frequency of each motor, Hz (empty without rpm). */
   motorHz: number[];
+  /** Each motor's rotation frequency per Welch segment, Hz, to match orders flown only part of the time. */
+  motorSegHz?: readonly ArrayLike<number>[];
   /** Log rate, Hz: orders above Nyquist fold back (REFERENCES §3). */
   fs: number;
   /** Magnet poles, for the motors' electrical frequency (pole pairs × rotation). */
@@ -310,13 +313,27 @@ export function labelPeak(
   let motors: number[] = [];
   let aliasOfHz: number | undefined;
   // Orders seen directly win over orders folded down from above Nyquist.
+  // A motor matches an order at its typical speed, or when at least a tenth of the flight was
+  // flown at a speed that puts the order here (a punch-out or a long climb shows up too).
+  const share = (m: number, h: number, folded: boolean) => {
+    const seg = ctx.motorSegHz?.[m];
+    if (!seg || seg.length === 0) return 0;
+    let c = 0;
+    for (let j = 0; j < seg.length; j++) {
+      const at = h * seg[j]!;
+      if (folded === at > fs / 2 && Math.abs(hz - fold(at)) <= tol(at)) c++;
+    }
+    return c / seg.length;
+  };
   search: for (const folded of [false, true]) {
     for (const o of orders) {
-      const hits = motorHz.flatMap((f, i) => {
+      let hits = motorHz.flatMap((f, i) => {
         const at = o[1] * f;
         if (folded !== at > fs / 2) return [];
         return Math.abs(hz - fold(at)) <= tol(at) ? [i + 1] : [];
       });
+      if (!hits.length)
+        hits = motorHz.flatMap((_, i) => (share(i, o[1], folded) >= 0.1 ? [i + 1] : []));
       if (hits.length) {
         match = o;
         motors = hits;
