@@ -187,7 +187,8 @@ const unitAliases: Record<string, Unit> = {
 
 /** Our spelling of a unit as written in a header or column map ('RAD/S' → 'rad/s'), or null. */
 export function normalizeUnit(text: string): Unit | null {
-  return unitAliases[text.trim().toLowerCase()] ?? null;
+  const key = text.trim().toLowerCase();
+  return Object.hasOwn(unitAliases, key) ? unitAliases[key]! : null;
 }
 
 /**

@@ -119,7 +119,7 @@ function parseWords(header: string): ParsedHeader {
     .filter((w) => w !== '');
   if (unit === null) {
     for (const w of words) {
-      const u = unitWords[w];
+      const u = Object.hasOwn(unitWords, w) ? unitWords[w] : undefined;
       if (u) {
         unit = u;
         unitText = w;
@@ -140,8 +140,7 @@ const axisWords: Record<string, 0 | 1 | 2> = {
 
 function findAxis(words: string[]): 0 | 1 | 2 | null {
   for (const w of words) {
-    const a = axisWords[w];
-    if (a !== undefined) return a;
+    if (Object.hasOwn(axisWords, w)) return axisWords[w]!;
   }
   return null;
 }

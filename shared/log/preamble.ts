@@ -81,8 +81,8 @@ export function readPreamble(bytes: Uint8Array, final: boolean): Preamble | null
     } else if (trimmed.startsWith('#')) {
       const body = trimmed.slice(1).trim();
       const colon = body.indexOf(':');
-      if (colon > 0) metadata[body.slice(0, colon).trim()] = body.slice(colon + 1).trim();
-      else if (body !== '') metadata[body] = '';
+      if (colon > 0) setKey(metadata, body.slice(0, colon).trim(), body.slice(colon + 1).trim());
+      else if (body !== '') setKey(metadata, body, '');
       if (end === bytes.length) {
         throw new LogFormatError(
           'no-header',
@@ -105,6 +105,16 @@ export function readPreamble(bytes: Uint8Array, final: boolean): Preamble | null
     pos = next;
     line++;
   }
+}
+
+/** Stores a key from the file as an own property, even one named like `__proto__`. */
+function setKey(target: Record<string, string>, key: string, value: string): void {
+  Object.defineProperty(target, key, {
+    value,
+    enumerable: true,
+    writable: true,
+    configurable: true,
+  });
 }
 
 /** The delimiter that occurs most often outside quotes; comma on a tie or none. */

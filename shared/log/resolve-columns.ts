@@ -104,7 +104,7 @@ export function resolveColumns(
         { line: headerLine, column, headers },
       );
     }
-    const entry = map?.columns[header];
+    const entry = map && Object.hasOwn(map.columns, header) ? map.columns[header] : undefined;
     if (entry) {
       const unit = impliedUnit(entry)!;
       plans.push(

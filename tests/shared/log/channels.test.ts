@@ -108,3 +108,10 @@ describe('channel registry', () => {
     expect(motorCount({ channels: ['time'] })).toBe(0);
   });
 });
+
+describe('unit lookups', () => {
+  it('do not mistake object keys for units', () => {
+    expect(normalizeUnit('constructor')).toBeNull();
+    expect(normalizeUnit('__proto__')).toBeNull();
+  });
+});

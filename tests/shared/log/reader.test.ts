@@ -340,3 +340,16 @@ describe('whitespace', () => {
     expect(log.warnings.map((w) => w.code)).toEqual(['blank-lines']);
   });
 });
+
+describe('names that are also JavaScript object keys', () => {
+  it('keeps them as plain data in metadata and column maps', () => {
+    const text =
+      '# __proto__: polluted\n# constructor: x\ntime,motor1,constructor,toString\n0,0.5,1,2\n';
+    const log = parseLog(enc(text), { columnMap: { columns: {} } });
+    expect(log.metadata['__proto__']).toBe('polluted');
+    expect(Object.keys(log.metadata)).toEqual(['__proto__', 'constructor']);
+    expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+    expect(log.channels).toEqual(['time', 'motor1']);
+    expect(formatError(() => parseLog(enc(text))).code).toBe('needs-column-map');
+  });
+});
