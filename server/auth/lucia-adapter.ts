@@ -1,6 +1,8 @@
 import type { Adapter, DatabaseSession, DatabaseUser } from 'lucia';
 import { LessThanOrEqual, type DataSource } from 'typeorm';
+import { cachedQuery } from '../db/sql';
 import { Session } from './session.entity';
+import { User } from './user.entity';
 
 /**
  * Lucia v3 adapter over our TypeORM entities (the published SQLite adapter does not install
@@ -13,27 +15,45 @@ export class TypeOrmLuciaAdapter implements Adapter {
     return this.dataSource.getRepository(Session);
   }
 
-  async getSessionAndUser(
-    sessionId: string,
-  ): Promise<[DatabaseSession | null, DatabaseUser | null]> {
-    const row = (await this.dataSource.query(
-      `SELECT s.id AS sid, s.userId AS userId, s.expiresAt AS expiresAt,
-              u.email AS email, u.name AS name, u.commentMail AS commentMail
-         FROM sessions s JOIN users u ON u.id = s.userId
-        WHERE s.id = ?`,
-      [sessionId],
-    )) as {
+  /** Runs on every signed-in request, so its SQL is built once. */
+  private readonly sessionAndUser = cachedQuery<
+    { sessionId: string },
+    {
       sid: string;
       userId: string;
       expiresAt: number;
       email: string;
       name: string;
       commentMail: number;
-    }[];
-    const r = row[0];
+    }
+  >(this.dataSource, (p) =>
+    this.dataSource
+      .getRepository(Session)
+      .createQueryBuilder('s')
+      .innerJoin(User, 'u', 'u.id = s.userId')
+      .select([
+        's.id AS sid',
+        's.userId AS userId',
+        's.expiresAt AS expiresAt',
+        'u.email AS email',
+        'u.name AS name',
+        'u.commentMail AS commentMail',
+      ])
+      .where('s.id = :sessionId', { sessionId: p.sessionId }),
+  );
+
+  async getSessionAndUser(
+    sessionId: string,
+  ): Promise<[DatabaseSession | null, DatabaseUser | null]> {
+    const [r] = await this.sessionAndUser({ sessionId });
     if (!r) return [null, null];
     return [
-      { id: r.sid, userId: r.userId, expiresAt: new Date(r.expiresAt * 1000), attributes: {} },
+      {
+        id: r.sid,
+        userId: r.userId,
+        expiresAt: new Date(Number(r.expiresAt) * 1000),
+        attributes: {},
+      },
       {
         id: r.userId,
         attributes: { email: r.email, name: r.name, commentMail: Boolean(r.commentMail) },

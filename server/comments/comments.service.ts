@@ -16,6 +16,7 @@ import { commentMail, type CommentMailKind } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
 import { can } from '../teams/permissions';
 import { iso, isoOrNull } from '../util';
+import { cachedQuery, insertSql } from '../db/sql';
 import { Comment } from './comment.entity';
 
 /** Primary or unique key violation, as SQLite and PostgreSQL report it. */
@@ -40,6 +41,34 @@ export class CommentsService {
   private get repo() {
     return this.ds.getRepository(Comment);
   }
+
+  private readonly insertComment = insertSql(this.ds, 'comments', [
+    'id',
+    'flightId',
+    'authorId',
+    'parentId',
+    'tS',
+    'channel',
+    'body',
+    'mentions',
+    'createdAt',
+  ]);
+
+  private readonly bumpRoot = cachedQuery<{ fid: string }, never>(this.ds, (p) =>
+    this.ds
+      .createQueryBuilder()
+      .update(Flight)
+      .set({ commentCount: () => 'commentCount + 1', openComments: () => 'openComments + 1' })
+      .where('id = :fid', { fid: p.fid }),
+  );
+
+  private readonly bumpReply = cachedQuery<{ fid: string }, never>(this.ds, (p) =>
+    this.ds
+      .createQueryBuilder()
+      .update(Flight)
+      .set({ commentCount: () => 'commentCount + 1' })
+      .where('id = :fid', { fid: p.fid }),
+  );
 
   private async names(ids: Iterable<string>): Promise<Map<string, string>> {
     const unique = [...new Set(ids)];
@@ -157,7 +186,17 @@ export class CommentsService {
     // Insert first and treat a key clash as the retry it almost always is: one query fewer on
     // the path every comment takes.
     try {
-      await this.repo.insert(comment);
+      await this.ds.query(this.insertComment, [
+        comment.id,
+        comment.flightId,
+        comment.authorId,
+        comment.parentId,
+        comment.tS,
+        comment.channel,
+        comment.body,
+        JSON.stringify(comment.mentions),
+        comment.createdAt,
+      ]);
     } catch (err) {
       if (!isDuplicateKey(err)) throw err;
       const existing = await this.repo.findOneBy({ id });
@@ -167,15 +206,7 @@ export class CommentsService {
       return { comment: await this.dto(existing), created: false };
     }
     // A new comment only adds to the counters; resolve and delete recount.
-    await this.ds
-      .createQueryBuilder()
-      .update(Flight)
-      .set({
-        commentCount: () => 'commentCount + 1',
-        ...(parentId === null ? { openComments: () => 'openComments + 1' } : {}),
-      })
-      .where('id = :fid', { fid: input.flightId })
-      .execute();
+    await (parentId === null ? this.bumpRoot : this.bumpReply)({ fid: input.flightId });
     this.notify(comment, flight.pilotId, parent?.authorId ?? null, mentions);
     const names = mentions.length > 0 ? await this.names(mentions) : new Map<string, string>();
     names.set(userId, flight.userName);

@@ -5,6 +5,7 @@ import { Comment } from '../comments/comment.entity';
 import { Aircraft } from '../fleet/aircraft.entity';
 import { BenchRun } from '../fleet/bench-run.entity';
 import { ServiceEntry } from '../fleet/service-entry.entity';
+import { FlightPayload } from '../flights/flight-payload.entity';
 import { Flight } from '../flights/flight.entity';
 import { ImportPreset } from '../presets/preset.entity';
 import { Invite } from '../teams/invite.entity';
@@ -23,6 +24,7 @@ export const entities = [
   ServiceEntry,
   BenchRun,
   Flight,
+  FlightPayload,
   Comment,
   ImportPreset,
 ];

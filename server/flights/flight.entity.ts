@@ -4,8 +4,9 @@ import { Aircraft } from '../fleet/aircraft.entity';
 import { Team } from '../teams/team.entity';
 
 /**
- * One flight log and its analysis. The id is the client's UUID. The report is kept as JSON with
- * its schema version; the columns beside it are what lists filter and sort on.
+ * One flight log and its analysis summary. The id is the client's UUID. The columns are what
+ * lists filter and sort on; the report and review detail JSON live in `flight_payloads`, so a
+ * list never reads (or walks the overflow pages of) megabytes of traces.
  */
 @Entity('flights')
 // The team's flight list, newest first, with the id as tie-breaker for the cursor.
@@ -39,10 +40,6 @@ export class Flight {
   @Column('text', { nullable: true }) rawKey!: string | null;
   @Column('boolean', { default: false }) rawGzip!: boolean;
   @Column('integer') reportVersion!: number;
-  /** FlightReport JSON. */
-  @Column('text') report!: string;
-  /** ReviewDetail JSON (downsampled traces and spectra), optional. */
-  @Column('text', { nullable: true }) detail!: string | null;
   /** TrendPoint fields extracted from the report, so trends never parse whole reports. */
   @Column('text') trend!: string;
   /** 0 none, 1 note, 2 watch, 3 act. */

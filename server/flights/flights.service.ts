@@ -31,6 +31,8 @@ import { Membership } from '../teams/membership.entity';
 import { can, type Action } from '../teams/permissions';
 import type { TeamsService } from '../teams/teams.service';
 import { iso } from '../util';
+import { FlightPayload } from './flight-payload.entity';
+import { cachedQuery } from '../db/sql';
 import { Flight } from './flight.entity';
 import { findingStats, severityName, severityRank, trendOf } from './flight-summary';
 import { rawKey, type RawStore } from './raw-store';
@@ -145,14 +147,21 @@ export class FlightsService {
     return this.ds.getRepository(Flight);
   }
 
-  /**
-   * The flight's team-level facts plus the caller's role, in one query. 404 for a missing flight
-   * and for outsiders alike; 403 when the role may not do `action`.
-   */
-  async access(userId: string, flightId: string, action: Action) {
-    const row = await this.repo
+  private readonly accessQuery = cachedQuery<
+    { userId: string; flightId: string },
+    {
+      id: string;
+      teamId: string;
+      pilotId: string;
+      aircraftId: string;
+      role: Role | null;
+      userName: string | null;
+    }
+  >(this.ds, (p) =>
+    this.ds
+      .getRepository(Flight)
       .createQueryBuilder('f')
-      .leftJoin(Membership, 'm', 'm.teamId = f.teamId AND m.userId = :userId', { userId })
+      .leftJoin(Membership, 'm', 'm.teamId = f.teamId AND m.userId = :userId', { userId: p.userId })
       .leftJoin(User, 'cu', 'cu.id = m.userId')
       .select([
         'f.id AS id',
@@ -162,15 +171,15 @@ export class FlightsService {
         'm.role AS role',
         'cu.name AS userName',
       ])
-      .where('f.id = :flightId', { flightId })
-      .getRawOne<{
-        id: string;
-        teamId: string;
-        pilotId: string;
-        aircraftId: string;
-        role: Role | null;
-        userName: string | null;
-      }>();
+      .where('f.id = :flightId', { flightId: p.flightId }),
+  );
+
+  /**
+   * The flight's team-level facts plus the caller's role and name, in one query. 404 for a
+   * missing flight and for outsiders alike; 403 when the role may not do `action`.
+   */
+  async access(userId: string, flightId: string, action: Action) {
+    const [row] = await this.accessQuery({ userId, flightId });
     if (!row || !row.role) throw new NotFoundError('Flight');
     if (!can(row.role, action)) throw new ForbiddenError();
     return { ...row, role: row.role, userName: row.userName ?? '' };
@@ -211,14 +220,18 @@ export class FlightsService {
       sha256: input.sha256,
       sizeBytes: input.sizeBytes ?? null,
       reportVersion: input.report.version,
-      report: JSON.stringify(input.report),
-      detail: input.detail === undefined ? null : JSON.stringify(input.detail),
       trend: JSON.stringify(trendOf(input.report)),
       worstSeverity: worst,
       noteCount: counts.note,
       watchCount: counts.watch,
       actCount: counts.act,
       note: input.note ?? '',
+    };
+
+    const payload = {
+      flightId: id,
+      report: JSON.stringify(input.report),
+      detail: input.detail === undefined ? null : JSON.stringify(input.detail),
     };
 
     const existing = await this.repo.findOneBy({ id });
@@ -236,20 +249,25 @@ export class FlightsService {
       }
       // A retry without sizeBytes keeps the size the raw upload recorded.
       fields.sizeBytes = input.sizeBytes ?? existing.sizeBytes;
-      const same = (Object.keys(fields) as (keyof typeof fields)[]).every(
-        (k) => existing[k] === fields[k],
-      );
+      const stored = await this.ds.getRepository(FlightPayload).findOneBy({ flightId: id });
+      const same =
+        (Object.keys(fields) as (keyof typeof fields)[]).every((k) => existing[k] === fields[k]) &&
+        stored?.report === payload.report &&
+        stored.detail === payload.detail;
       if (same) return { outcome: 'unchanged', flight: await this.summary(id) };
       const keepRaw = existing.sha256 === input.sha256;
-      await this.repo.update(
-        { id },
-        {
-          ...fields,
-          rawKey: keepRaw ? existing.rawKey : null,
-          rawGzip: keepRaw ? existing.rawGzip : false,
-          updatedAt: now,
-        },
-      );
+      await this.ds.transaction(async (em) => {
+        await em.getRepository(Flight).update(
+          { id },
+          {
+            ...fields,
+            rawKey: keepRaw ? existing.rawKey : null,
+            rawGzip: keepRaw ? existing.rawGzip : false,
+            updatedAt: now,
+          },
+        );
+        await em.getRepository(FlightPayload).upsert(payload, ['flightId']);
+      });
       if (!keepRaw && existing.rawKey) await this.releaseRaw(existing.rawKey);
       return { outcome: 'replaced', flight: await this.summary(id) };
     }
@@ -260,17 +278,20 @@ export class FlightsService {
     });
     if (dup) return { outcome: 'duplicate', flight: await this.summary(dup.id) };
 
-    await this.repo.insert({
-      id,
-      ...fields,
-      pilotId: userId,
-      rawKey: null,
-      rawGzip: false,
-      commentCount: 0,
-      openComments: 0,
-      reviewState: 'none',
-      createdAt: now,
-      updatedAt: now,
+    await this.ds.transaction(async (em) => {
+      await em.getRepository(Flight).insert({
+        id,
+        ...fields,
+        pilotId: userId,
+        rawKey: null,
+        rawGzip: false,
+        commentCount: 0,
+        openComments: 0,
+        reviewState: 'none',
+        createdAt: now,
+        updatedAt: now,
+      });
+      await em.getRepository(FlightPayload).insert(payload);
     });
     return { outcome: 'created', flight: await this.summary(id) };
   }
@@ -278,10 +299,7 @@ export class FlightsService {
   async get(userId: string, id: string): Promise<FlightDetail> {
     await this.access(userId, id, 'team.read');
     const summary = await this.summary(id);
-    const f = await this.repo.findOneOrFail({
-      where: { id },
-      select: { id: true, report: true, detail: true },
-    });
+    const f = await this.ds.getRepository(FlightPayload).findOneByOrFail({ flightId: id });
     return {
       ...summary,
       report: FlightReport.parse(JSON.parse(f.report)),
@@ -311,26 +329,51 @@ export class FlightsService {
     if (users === 0) await this.rawStore.remove(key);
   }
 
+  /** One cached SQL text per combination of filters (and page size) a client uses. */
+  private readonly listQueries = new Map<
+    string,
+    (p: Record<string, string | number>) => Promise<SummaryRow[]>
+  >();
+
   async list(userId: string, teamId: string, q: FlightListQuery): Promise<FlightPage> {
     await this.teams.authorize(userId, teamId, 'team.read');
-    const qb = this.summaryQuery().where('f.teamId = :teamId', { teamId });
-    if (q.aircraftId) qb.andWhere('f.aircraftId = :aircraftId', { aircraftId: q.aircraftId });
-    if (q.pilotId) qb.andWhere('f.pilotId = :pilotId', { pilotId: q.pilotId });
-    if (q.from) qb.andWhere('f.recordedAt >= :from', { from: Date.parse(q.from) });
-    if (q.to) qb.andWhere('f.recordedAt < :to', { to: Date.parse(q.to) });
-    if (q.openComments !== undefined)
-      qb.andWhere(q.openComments ? 'f.openComments > 0' : 'f.openComments = 0');
-    if (q.severity) qb.andWhere('f.worstSeverity >= :sev', { sev: severityRank(q.severity) });
-    if (q.review) qb.andWhere('f.reviewState = :review', { review: q.review });
-    if (q.cursor) {
-      const [r, cid] = decodeCursor(q.cursor);
-      qb.andWhere('(f.recordedAt < :cr OR (f.recordedAt = :cr AND f.id < :cid))', { cr: r, cid });
+    const params: Record<string, string | number> = { teamId };
+    if (q.aircraftId) params.aircraftId = q.aircraftId;
+    if (q.pilotId) params.pilotId = q.pilotId;
+    if (q.from) params.from = Date.parse(q.from);
+    if (q.to) params.to = Date.parse(q.to);
+    if (q.severity) params.sev = severityRank(q.severity);
+    if (q.review) params.review = q.review;
+    if (q.cursor) [params.cr, params.cid] = decodeCursor(q.cursor);
+    const key = `${Object.keys(params).join(',')}|open=${String(q.openComments)}|limit=${q.limit}`;
+    let run = this.listQueries.get(key);
+    if (!run) {
+      if (this.listQueries.size > 500) this.listQueries.clear();
+      run = cachedQuery<Record<string, string | number>, SummaryRow>(this.ds, (p) => {
+        const qb = this.summaryQuery().where('f.teamId = :teamId', { teamId: p.teamId });
+        if ('aircraftId' in p)
+          qb.andWhere('f.aircraftId = :aircraftId', { aircraftId: p.aircraftId });
+        if ('pilotId' in p) qb.andWhere('f.pilotId = :pilotId', { pilotId: p.pilotId });
+        if ('from' in p) qb.andWhere('f.recordedAt >= :from', { from: p.from });
+        if ('to' in p) qb.andWhere('f.recordedAt < :to', { to: p.to });
+        if (q.openComments !== undefined)
+          qb.andWhere(q.openComments ? 'f.openComments > 0' : 'f.openComments = 0');
+        if ('sev' in p) qb.andWhere('f.worstSeverity >= :sev', { sev: p.sev });
+        if ('review' in p) qb.andWhere('f.reviewState = :review', { review: p.review });
+        if ('cr' in p) {
+          qb.andWhere('(f.recordedAt < :cr OR (f.recordedAt = :cr AND f.id < :cid))', {
+            cr: p.cr,
+            cid: p.cid,
+          });
+        }
+        return qb
+          .orderBy('f.recordedAt', 'DESC')
+          .addOrderBy('f.id', 'DESC')
+          .limit(q.limit + 1);
+      });
+      this.listQueries.set(key, run);
     }
-    const rows = await qb
-      .orderBy('f.recordedAt', 'DESC')
-      .addOrderBy('f.id', 'DESC')
-      .limit(q.limit + 1)
-      .getRawMany<SummaryRow>();
+    const rows = await run(params);
     const more = rows.length > q.limit;
     const page = rows.slice(0, q.limit);
     const last = page[page.length - 1];

@@ -15,6 +15,7 @@ import { BadRequestError, ConflictError, NotFoundError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { inviteMail } from '../mail/templates';
 import { iso, isoOrNull } from '../util';
+import { cachedQuery } from '../db/sql';
 import { Invite } from './invite.entity';
 import { Membership } from './membership.entity';
 import { assertCan, type Action } from './permissions';
@@ -31,12 +32,20 @@ export class TeamsService {
 
   /** The caller's role in the team; 404 for outsiders so a team's existence does not leak. */
   async roleIn(userId: string, teamId: string): Promise<Role> {
-    const m = await this.ds
-      .getRepository(Membership)
-      .findOne({ where: { teamId, userId }, select: { role: true } });
+    const [m] = await this.roleQuery({ teamId, userId });
     if (!m) throw new NotFoundError('Team');
-    return m.role as Role;
+    return m.role;
   }
+
+  private readonly roleQuery = cachedQuery<{ teamId: string; userId: string }, { role: Role }>(
+    this.ds,
+    (p) =>
+      this.ds
+        .getRepository(Membership)
+        .createQueryBuilder('m')
+        .select('m.role', 'role')
+        .where('m.teamId = :teamId AND m.userId = :userId', { teamId: p.teamId, userId: p.userId }),
+  );
 
   /** Role check in one call: 404 for outsiders, 403 when the role may not do it. */
   async authorize(userId: string, teamId: string, action: Action): Promise<Role> {

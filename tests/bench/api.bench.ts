@@ -15,6 +15,7 @@ import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import { parseConfig } from '../../server/config';
 import { openDatabase } from '../../server/db/data-source';
+import { FlightPayload } from '../../server/flights/flight-payload.entity';
 import { Flight } from '../../server/flights/flight.entity';
 import { findingStats, trendOf } from '../../server/flights/flight-summary';
 import { createMemoryMailer } from '../../server/mail/mailer';
@@ -82,8 +83,6 @@ async function seed(dataDir: string) {
     rawKey: null,
     rawGzip: false,
     reportVersion: r.version,
-    report: JSON.stringify(r),
-    detail: null,
     trend: JSON.stringify(trendOf(r)),
     worstSeverity: worst,
     noteCount: counts.note,
@@ -107,6 +106,9 @@ async function seed(dataDir: string) {
         updatedAt: Date.now(),
       }));
       await em.getRepository(Flight).insert(rows);
+      await em
+        .getRepository(FlightPayload)
+        .insert(rows.map((f) => ({ flightId: f.id, report: JSON.stringify(r), detail: null })));
     }
   });
   const flightId = (

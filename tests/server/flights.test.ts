@@ -12,6 +12,7 @@ import {
   RawUploadResponse,
 } from '../../shared/schemas/flights';
 import { Trends } from '../../shared/schemas/aircraft';
+import { FlightPayload } from '../../server/flights/flight-payload.entity';
 import { Flight } from '../../server/flights/flight.entity';
 import { csvLog, flightBody, kite, report, sha256 } from './helpers/fixtures';
 import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
@@ -369,6 +370,8 @@ describe('flights', () => {
       await pilot.agent.delete(`/api/flights/${id}`).expect(204);
       expect(rawFiles(t.dir).some((f) => f.includes(sha256(csv)))).toBe(false);
       await owner.agent.get(`/api/flights/${id}`).expect(404);
+      // The report and detail go with it.
+      expect(await t.dataSource.getRepository(FlightPayload).countBy({ flightId: id })).toBe(0);
     });
   });
 });

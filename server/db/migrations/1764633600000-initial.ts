@@ -1,6 +1,6 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 
-/** Users, sessions, teams and roles, fleet, flights, comments and import presets. */
+/** Users, sessions, teams and roles, fleet, flights and their payloads, comments, import presets. */
 export class Initial1764633600000 implements MigrationInterface {
   name = 'Initial1764633600000';
 
@@ -51,7 +51,7 @@ export class Initial1764633600000 implements MigrationInterface {
       'CREATE INDEX "idx_bench_runs_aircraft_date" ON "bench_runs" ("aircraftId", "date")',
     );
     await q.query(
-      'CREATE TABLE "flights" ("id" text PRIMARY KEY NOT NULL, "teamId" text NOT NULL, "aircraftId" text NOT NULL, "pilotId" text NOT NULL, "recordedAt" integer NOT NULL, "durationS" real NOT NULL, "sampleRateHz" real NOT NULL, "fileName" text NOT NULL, "sha256" text NOT NULL, "sizeBytes" integer, "rawKey" text, "rawGzip" boolean NOT NULL DEFAULT (0), "reportVersion" integer NOT NULL, "report" text NOT NULL, "detail" text, "trend" text NOT NULL, "worstSeverity" integer NOT NULL, "noteCount" integer NOT NULL, "watchCount" integer NOT NULL, "actCount" integer NOT NULL, "commentCount" integer NOT NULL DEFAULT (0), "openComments" integer NOT NULL DEFAULT (0), "reviewState" text NOT NULL DEFAULT (\'none\'), "note" text NOT NULL DEFAULT (\'\'), "createdAt" integer NOT NULL, "updatedAt" integer NOT NULL, CONSTRAINT "FK_9023a76bf37704da30cd33ccb2b" FOREIGN KEY ("teamId") REFERENCES "teams" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_522d54330c3bf3b013b1fe99793" FOREIGN KEY ("aircraftId") REFERENCES "aircraft" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_03c1db6060bd75d067b8485cd74" FOREIGN KEY ("pilotId") REFERENCES "users" ("id") ON DELETE NO ACTION ON UPDATE NO ACTION)',
+      'CREATE TABLE "flights" ("id" text PRIMARY KEY NOT NULL, "teamId" text NOT NULL, "aircraftId" text NOT NULL, "pilotId" text NOT NULL, "recordedAt" integer NOT NULL, "durationS" real NOT NULL, "sampleRateHz" real NOT NULL, "fileName" text NOT NULL, "sha256" text NOT NULL, "sizeBytes" integer, "rawKey" text, "rawGzip" boolean NOT NULL DEFAULT (0), "reportVersion" integer NOT NULL, "trend" text NOT NULL, "worstSeverity" integer NOT NULL, "noteCount" integer NOT NULL, "watchCount" integer NOT NULL, "actCount" integer NOT NULL, "commentCount" integer NOT NULL DEFAULT (0), "openComments" integer NOT NULL DEFAULT (0), "reviewState" text NOT NULL DEFAULT (\'none\'), "note" text NOT NULL DEFAULT (\'\'), "createdAt" integer NOT NULL, "updatedAt" integer NOT NULL, CONSTRAINT "FK_9023a76bf37704da30cd33ccb2b" FOREIGN KEY ("teamId") REFERENCES "teams" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_522d54330c3bf3b013b1fe99793" FOREIGN KEY ("aircraftId") REFERENCES "aircraft" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_03c1db6060bd75d067b8485cd74" FOREIGN KEY ("pilotId") REFERENCES "users" ("id") ON DELETE NO ACTION ON UPDATE NO ACTION)',
     );
     await q.query('CREATE INDEX "idx_flights_team_sha256" ON "flights" ("teamId", "sha256")');
     await q.query(
@@ -62,6 +62,9 @@ export class Initial1764633600000 implements MigrationInterface {
     );
     await q.query(
       'CREATE INDEX "idx_flights_team_recorded" ON "flights" ("teamId", "recordedAt", "id")',
+    );
+    await q.query(
+      'CREATE TABLE "flight_payloads" ("flightId" text PRIMARY KEY NOT NULL, "report" text NOT NULL, "detail" text, CONSTRAINT "FK_4881b718f90d42147096fa6da0f" FOREIGN KEY ("flightId") REFERENCES "flights" ("id") ON DELETE CASCADE ON UPDATE NO ACTION)',
     );
     await q.query(
       'CREATE TABLE "comments" ("id" text PRIMARY KEY NOT NULL, "flightId" text NOT NULL, "authorId" text NOT NULL, "parentId" text, "tS" real NOT NULL, "channel" text, "body" text NOT NULL, "mentions" text NOT NULL, "resolvedAt" integer, "resolvedById" text, "editedAt" integer, "deletedAt" integer, "createdAt" integer NOT NULL, CONSTRAINT "FK_0f870158d916ebff140b4cd24d4" FOREIGN KEY ("flightId") REFERENCES "flights" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_4548cc4a409b8651ec75f70e280" FOREIGN KEY ("authorId") REFERENCES "users" ("id") ON DELETE NO ACTION ON UPDATE NO ACTION, CONSTRAINT "FK_8770bd9030a3d13c5f79a7d2e81" FOREIGN KEY ("parentId") REFERENCES "comments" ("id") ON DELETE CASCADE ON UPDATE NO ACTION)',
@@ -79,6 +82,7 @@ export class Initial1764633600000 implements MigrationInterface {
   async down(q: QueryRunner): Promise<void> {
     await q.query('DROP TABLE "import_presets"');
     await q.query('DROP TABLE "comments"');
+    await q.query('DROP TABLE "flight_payloads"');
     await q.query('DROP TABLE "flights"');
     await q.query('DROP TABLE "bench_runs"');
     await q.query('DROP TABLE "service_entries"');
