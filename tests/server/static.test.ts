@@ -47,6 +47,12 @@ describe('production: one process serves the client and the API', () => {
     expect(ApiErrorBody.parse(res.body).error.code).toBe('not_found');
   });
 
+  it('shows the dev inbox of the fake mail only to this machine', async () => {
+    // supertest connects over loopback, so this is the local case.
+    const res = await request(app).get('/api/dev/mail').expect(200);
+    expect(res.body).toEqual({ messages: [] });
+  });
+
   it('answers the health check', async () => {
     await request(app).get('/api/health').expect(200, { ok: true, db: 'ok' });
   });
