@@ -69,7 +69,7 @@ test('a coach comments at the moment of a finding; the pilot is mailed a link to
   await pilotPage.getByLabel('Aircraft').selectOption({ label: 'Kite · 4 motors' });
   await pilotPage
     .getByLabel('Flight logs')
-    .setInputFiles(writeScenarioCsv('weak-motor', { seconds: 30 }));
+    .setInputFiles(writeScenarioCsv('worn-motor-3', { seconds: 30 }));
   await expect(pilotPage).toHaveURL(/\/flights\/[0-9a-f-]{36}/, { timeout: 60_000 });
   const flightId = new URL(pilotPage.url()).pathname.split('/')[2]!;
   await expect

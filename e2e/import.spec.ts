@@ -33,12 +33,12 @@ test('the parse worker reports progress and the review shows the rows it read, f
   page,
 }) => {
   test.setTimeout(120_000);
-  const csv = writeScenarioCsv('weak-motor', { seconds: 60 });
+  const csv = writeScenarioCsv('worn-motor-3', { seconds: 60 });
   const gz = csv + '.gz';
   writeFileSync(gz, gzipSync(readFileSync(csv)));
   await page.goto('/import');
   await page.getByLabel('Flight logs').setInputFiles(gz);
-  const bar = page.getByRole('progressbar', { name: /Reading weak-motor\.csv\.gz/ });
+  const bar = page.getByRole('progressbar', { name: /Reading worn-motor-3\.csv\.gz/ });
   await expect(bar).toBeVisible();
   await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
   await expect(page.getByText(/60,00\d rows/)).toBeVisible();

@@ -10,12 +10,12 @@ test('a pilot drops a log with a weak motor and sees that motor named and marked
   test.setTimeout(120_000);
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(e.message));
-  const log = writeScenarioCsv('weak-motor');
+  const log = writeScenarioCsv('worn-motor-3');
   await page.goto('/import');
   await page.getByLabel('Flight logs').setInputFiles(log);
 
   // The worker path: progress is reported while the file is read.
-  await expect(page.getByRole('progressbar', { name: /Reading weak-motor\.csv/ })).toBeVisible();
+  await expect(page.getByRole('progressbar', { name: /Reading worn-motor-3\.csv/ })).toBeVisible();
 
   // The review opens on its own when the analysis is done, before any upload.
   await expect(page).toHaveURL(/\/flights\/[0-9a-f-]{36}/, { timeout: 60_000 });
@@ -61,4 +61,72 @@ test('a malformed file shows the line and column of the problem and loses nothin
   await expect(alert).toContainText('gyro_x');
   await expect(page).toHaveURL(/\/import$/);
   await expect(row.getByRole('button', { name: 'Try again' })).toBeVisible();
+});
+
+test('every evidence section opens without errors, and the filter bench runs in the worker after a reload', async ({
+  page,
+}) => {
+  test.setTimeout(180_000);
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  await page.goto('/import');
+  await page
+    .getByLabel('Flight logs')
+    .setInputFiles(writeScenarioCsv('frame-resonance', { seconds: 40, rateHz: 2000 }));
+  await expect(page).toHaveURL(/\/flights\/[0-9a-f-]{36}/, { timeout: 60_000 });
+  const nav = page.getByRole('navigation', { name: 'Evidence' });
+  const sectionTitle = page.locator('#section-title');
+  for (const name of [
+    'Balance',
+    'Torque split',
+    'Effort',
+    'Vibration',
+    'Power',
+    'Headroom',
+    'Tracking',
+    'Compare',
+  ]) {
+    await nav.getByRole('link', { name, exact: true }).click();
+    await expect(sectionTitle).toHaveText(name);
+  }
+  await nav.getByRole('link', { name: 'Vibration', exact: true }).click();
+  await expect(page.getByRole('table', { name: 'Vibration peaks' })).toContainText('Hz');
+  await expect(page.getByRole('img', { name: 'Campbell diagram' })).toBeVisible();
+
+  // After a reload the worker no longer holds the log; the bench reads the kept file again.
+  await nav.getByRole('link', { name: 'Filter bench', exact: true }).click();
+  await page.reload();
+  await page.getByRole('button', { name: /^Notch at \d+ Hz$/ }).click();
+  await page.getByRole('button', { name: 'Apply to this flight' }).click();
+  await expect(
+    page.getByRole('img', { name: /spectrum before and after the filters/ }),
+  ).toBeVisible({ timeout: 60_000 });
+  await expect(page.getByText(/delay at 20 Hz ≈ \d+\.\d\d ms/)).toBeVisible();
+  expect(errors).toEqual([]);
+});
+
+test('compare states what changed against another flight of the same aircraft', async ({
+  page,
+}) => {
+  test.setTimeout(180_000);
+  await page.goto('/import');
+  await page
+    .getByLabel('Flight logs')
+    .setInputFiles(writeScenarioCsv('clean-quad-x', { seconds: 30 }));
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  await page.goto('/import');
+  await page
+    .getByLabel('Flight logs')
+    .setInputFiles(writeScenarioCsv('worn-motor-3', { seconds: 30 }));
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  await page
+    .getByRole('navigation', { name: 'Evidence' })
+    .getByRole('link', { name: 'Compare' })
+    .click();
+  const pick = page.getByLabel('Compare with');
+  const value = await pick.locator('option', { hasText: 'clean-quad-x.csv' }).getAttribute('value');
+  await pick.selectOption(value!);
+  const changed = page.getByRole('region', { name: 'What changed' });
+  await expect(changed).toContainText(/Motor 3 deviation rose from [+−]\d+ % to \+\d+ %/);
+  await expect(page.getByRole('img', { name: /spectra of both flights/ })).toBeVisible();
 });

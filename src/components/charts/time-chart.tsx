@@ -2,6 +2,7 @@ import { useEffect, useMemo, useRef } from 'react';
 import ReactEChartsCore from 'echarts-for-react/esm/core';
 import type { EChartsType } from 'echarts/core';
 import { echarts } from './echarts';
+import { useAfterPaint } from './use-after-paint';
 import { inkSeries } from './palette';
 
 export interface TimeSeries {
@@ -64,6 +65,7 @@ function pairs(t: ArrayLike<number>, y: ArrayLike<number>): [number, number | nu
  * Series use LTTB sampling so long traces stay light when zoomed out.
  */
 export function TimeChart(props: TimeChartProps) {
+  const ready = useAfterPaint();
   const {
     t,
     series,
@@ -261,15 +263,19 @@ export function TimeChart(props: TimeChartProps) {
 
   return (
     <div role="img" aria-label={ariaLabel}>
-      <ReactEChartsCore
-        echarts={echarts}
-        option={option}
-        notMerge
-        lazyUpdate
-        style={{ height, width: '100%' }}
-        onChartReady={onReady}
-        onEvents={onEvents}
-      />
+      {ready ? (
+        <ReactEChartsCore
+          echarts={echarts}
+          option={option}
+          notMerge
+          lazyUpdate
+          style={{ height, width: '100%' }}
+          onChartReady={onReady}
+          onEvents={onEvents}
+        />
+      ) : (
+        <div style={{ height, width: '100%' }} />
+      )}
     </div>
   );
 }

@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import ReactEChartsCore from 'echarts-for-react/esm/core';
 import { echarts } from './echarts';
+import { useAfterPaint } from './use-after-paint';
 import { inkSeries } from './palette';
 
 export interface XySeries {
@@ -47,6 +48,7 @@ function points(s: XySeries, xLog: boolean): [number, number | null][] {
 
 /** A plain x–y line chart: spectra, filter responses, voltage against current. */
 export function XyChart(props: XyChartProps) {
+  const ready = useAfterPaint();
   const {
     series,
     xName,
@@ -127,13 +129,17 @@ export function XyChart(props: XyChartProps) {
   );
   return (
     <div role="img" aria-label={ariaLabel}>
-      <ReactEChartsCore
-        echarts={echarts}
-        option={option}
-        notMerge
-        lazyUpdate
-        style={{ height, width: '100%' }}
-      />
+      {ready ? (
+        <ReactEChartsCore
+          echarts={echarts}
+          option={option}
+          notMerge
+          lazyUpdate
+          style={{ height, width: '100%' }}
+        />
+      ) : (
+        <div style={{ height, width: '100%' }} />
+      )}
     </div>
   );
 }
