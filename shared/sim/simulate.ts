@@ -538,9 +538,15 @@ export function simulate(
           iP += kiP * eP * dt;
           iY += kiY * eY * dt;
         }
-        oR = kpR * eR + iR;
-        oP = kpP * eP + iP;
-        oY = kpY * eY + iY;
+        // The integrators hold trim as a share of the collective. A steady offset (CG, a weak
+        // motor) needs a moment in proportion to thrust (∝ output²) while each unit of
+        // differential output buys moment in proportion to output, so the output that holds
+        // it grows with throttle; a fixed additive trim would be wrong after every throttle step
+        // (a punch-out, the drop that follows) until the integrator caught up again.
+        const trim = Math.max(0.25, throttle / pilotHover);
+        oR = kpR * eR + iR * trim;
+        oP = kpP * eP + iP * trim;
+        oY = kpY * eY + iY * trim;
       }
 
       // --- Mixer with desaturation (attitude before collective) ----------------------------

@@ -325,6 +325,25 @@ describe('simulate: each fault changes what it should and nothing else', () => {
     expect(Math.abs(extra - 40)).toBeLessThanOrEqual(8);
   });
 
+  it('a steady CG offset stays trimmed through throttle steps (punch-out and the drop after it)', () => {
+    // A rate loop with integral action holds a steady offset. The moment a CG offset asks for
+    // grows with thrust, so the trim has to follow the collective: the pitch error through the
+    // punch-out and recovery stays close to the healthy aircraft's.
+    const wideFront = scenario('wide-front-healthy');
+    const pitchErrorRms = (s: Scenario) => {
+      const { log, truth } = run(s);
+      const sp = col(log, 'sp_pitch');
+      const g = col(log, 'gyro_y');
+      const rows = truth.phases
+        .filter((p) => p.kind === 'punch-out' || p.kind === 'recover')
+        .map((p) => [Math.round(p.t0 * 500), Math.round(p.t1 * 500)] as [number, number]);
+      return Math.sqrt(meanOver(rows, (i) => (sp[i]! - g[i]!) ** 2));
+    };
+    const healthy = pitchErrorRms(wideFront);
+    const offset = pitchErrorRms(withFaults(wideFront, [{ kind: 'cg-offset', dxMm: 14, dyMm: 0 }]));
+    expect(offset).toBeLessThan(healthy * 1.5 + 1);
+  });
+
   it('combines faults: a weak motor and a CG offset both show', () => {
     const s = withFaults(scenario('weak-motor'), [{ kind: 'cg-offset', dxMm: 0, dyMm: 12 }]);
     const { log, truth } = run(s);
