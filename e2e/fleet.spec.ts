@@ -1,6 +1,13 @@
+import { mkdirSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { writeScenarioCsv } from './fixtures/synth-log';
-import { addAircraftFromPreset, createTeam, signUp, uniqueEmail } from './helpers/accounts';
+import {
+  addAircraftFromPreset,
+  createTeam,
+  localSyncErrors,
+  signUp,
+  uniqueEmail,
+} from './helpers/accounts';
 
 test('a tuner edits an airframe, logs a repair and a bench run, and finds a synced flight with the filters', async ({
   page,
@@ -63,7 +70,11 @@ test('a tuner edits an airframe, logs a repair and a bench run, and finds a sync
     .getByLabel('Flight logs')
     .setInputFiles(writeScenarioCsv('weak-motor', { seconds: 20 }));
   await expect(page).toHaveURL(/\/flights\/[0-9a-f-]{36}/, { timeout: 60_000 });
-  await expect(page.getByTestId('sync-state')).toHaveText('All synced', { timeout: 30_000 });
+  await expect(page.getByTestId('sync-state'), 'sync should finish')
+    .toHaveText('All synced', { timeout: 30_000 })
+    .catch(async (error: unknown) => {
+      throw new Error(`${String(error)}\nlocal store: ${await localSyncErrors(page)}`);
+    });
 
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Fleet' }).click();
   const flights = page.getByRole('table', { name: 'Flights' });
@@ -76,8 +87,19 @@ test('a tuner edits an airframe, logs a repair and a bench run, and finds a sync
   await expect(flights).toContainText('weak-motor.csv');
   await expect(page.getByRole('list', { name: 'Aircraft' })).toContainText('1 flight');
 
+  const artifacts = new URL('./artifacts/', import.meta.url).pathname;
+  mkdirSync(artifacts, { recursive: true });
+  await page.setViewportSize({ width: 1440, height: 1000 });
+  await page.screenshot({ path: `${artifacts}fleet-desktop.png`, fullPage: true });
+
   // The aircraft's trends now have a point per synced flight.
   await page.getByRole('list', { name: 'Aircraft' }).getByRole('link', { name: 'Kite' }).click();
   await expect(page.getByRole('img', { name: 'Balance trend' })).toBeVisible();
   await expect(page.getByRole('img', { name: 'Battery trend' })).toBeVisible();
+  await page.screenshot({ path: `${artifacts}aircraft-trends-desktop.png`, fullPage: true });
+  await page
+    .getByRole('navigation', { name: 'Aircraft sections' })
+    .getByRole('link', { name: 'Airframe' })
+    .click();
+  await page.screenshot({ path: `${artifacts}aircraft-airframe-desktop.png`, fullPage: true });
 });

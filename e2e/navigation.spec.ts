@@ -55,6 +55,10 @@ test('signed in, the main navigation, aircraft sections and deep links all land 
   await nav.getByRole('link', { name: 'Inbox' }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'Dev inbox' })).toBeVisible();
 
+  await page.getByRole('link', { name: 'Moss Ferrand' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Account' })).toBeVisible();
+  await expect(page.getByLabel(/E-mail me when someone comments/)).toBeChecked();
+
   // Deep links load the app shell from the server and land on the same screens.
   await page.goto('/team');
   await expect(page.getByRole('heading', { level: 1, name: 'Team' })).toBeVisible();

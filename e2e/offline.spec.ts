@@ -1,6 +1,12 @@
 import { expect, test } from '@playwright/test';
 import { writeScenarioCsv } from './fixtures/synth-log';
-import { addAircraftFromPreset, createTeam, signUp, uniqueEmail } from './helpers/accounts';
+import {
+  addAircraftFromPreset,
+  createTeam,
+  localSyncErrors,
+  signUp,
+  uniqueEmail,
+} from './helpers/accounts';
 
 test('a log imported offline is kept on the device and synced when the network is back', async ({
   page,
@@ -40,7 +46,11 @@ test('a log imported offline is kept on the device and synced when the network i
   // Back online: the sync runner sends it without anyone asking.
   await context.setOffline(false);
   await page.evaluate(() => window.dispatchEvent(new Event('online')));
-  await expect(page.getByTestId('sync-state')).toHaveText('All synced', { timeout: 30_000 });
+  await expect(page.getByTestId('sync-state'), 'sync should finish')
+    .toHaveText('All synced', { timeout: 30_000 })
+    .catch(async (error: unknown) => {
+      throw new Error(`${String(error)}\nlocal store: ${await localSyncErrors(page)}`);
+    });
 
   const stored = await page.request.get(`/api/flights/${flightId}`);
   expect(stored.status()).toBe(200);

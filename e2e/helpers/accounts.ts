@@ -74,3 +74,25 @@ export function linkIn(mail: CaughtMail, pathPrefix: string): string {
   if (!match) throw new Error(`no ${pathPrefix} link in "${mail.subject}":\n${mail.text}`);
   return match[1]!;
 }
+
+/** What the device's store says about flights not yet on the server (for failure messages). */
+export async function localSyncErrors(page: Page): Promise<string> {
+  return page.evaluate(
+    () =>
+      new Promise<string>((resolve) => {
+        const open = indexedDB.open('hoverprint');
+        open.onerror = () => resolve('cannot open the local database');
+        open.onsuccess = () => {
+          const all = open.result.transaction('flights').objectStore('flights').getAll();
+          all.onsuccess = () =>
+            resolve(
+              JSON.stringify(
+                (all.result as { fileName: string; syncState: string; lastError?: string }[]).map(
+                  (f) => [f.fileName, f.syncState, f.lastError ?? null],
+                ),
+              ),
+            );
+        };
+      }),
+  );
+}

@@ -1,4 +1,5 @@
 import { createBrowserRouter } from 'react-router-dom';
+import { AccountRoute } from './routes/account';
 import { AppLayout } from './routes/app-layout';
 import { DevMailRoute } from './routes/dev-mail';
 import { FleetRoute } from './routes/fleet';
@@ -37,6 +38,7 @@ export const router = createBrowserRouter([
       { path: 'reset', element: <ResetRequestRoute /> },
       { path: 'reset/:token', element: <ResetConfirmRoute /> },
       { path: 'invite/:token', element: <InviteRoute /> },
+      { path: 'account', element: <AccountRoute /> },
       { path: 'dev/mail', element: <DevMailRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],

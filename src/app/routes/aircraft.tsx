@@ -71,7 +71,8 @@ function AircraftView({
             {a.name} · {a.motors.length} motors · {a.massG} g · {a.prop.diameterIn}×{a.prop.pitchIn}
             ″ {a.prop.blades}
             -blade{a.cells ? ` · ${a.cells}S` : ''}
-            {a.escMaxA ? ` · ESC ${a.escMaxA} A` : ''} · {aircraft.flightCount} flights
+            {a.escMaxA ? ` · ESC ${a.escMaxA} A` : ''} · {aircraft.flightCount} flight
+            {aircraft.flightCount === 1 ? '' : 's'}
           </span>
         }
         actions={

@@ -27,17 +27,18 @@ export function useSyncDriver(options: {
 
   useEffect(() => (onPass ? onSyncPass(onPass) : undefined), [onPass]);
 
-  // A new flight or a queued write: try to send it at once.
+  // A new flight or a queued write: try to send it at once. Keyed by the newest save and the
+  // newest outbox entry, which only grow, so every addition is seen.
   const changeStamp = useLiveQuery(async () => {
     const db = localDb();
-    const [flights, writes] = await Promise.all([
-      db.flights.where('syncState').equals('pending').count(),
-      db.outbox.where('state').equals('pending').count(),
+    const [flight, write] = await Promise.all([
+      db.flights.orderBy('savedAt').last(),
+      db.outbox.orderBy('seq').last(),
     ]);
-    return flights * 100_003 + writes;
+    return `${flight?.savedAt ?? 0}:${write?.seq ?? 0}`;
   }, []);
   useEffect(() => {
-    if (changeStamp) syncEngine().kick();
+    if (changeStamp && changeStamp !== '0:0') syncEngine().kick();
   }, [changeStamp]);
 }
 

@@ -17,7 +17,7 @@ export function AircraftCards({ aircraft }: { aircraft: Aircraft[] }) {
           <AirframeTopView
             motors={a.airframe.motors}
             propDiameterIn={a.airframe.prop.diameterIn}
-            className="h-24 w-24 shrink-0 border-0"
+            className="h-24 w-24 shrink-0 rounded"
           />
           <div className="min-w-0 flex-1 text-sm">
             <Link

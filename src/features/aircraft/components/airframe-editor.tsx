@@ -24,6 +24,7 @@ import { MM_PER_INCH, overlappingProps } from '../model/top-view-geometry';
 import { AirframeTopView } from './airframe-top-view';
 
 const num = { setValueAs: optionalNumber };
+const round1 = (v: number) => Math.round(v * 10) / 10;
 
 /**
  * Airframe editor: a layout preset as a starting point, the motor table (position and spin of
@@ -65,7 +66,8 @@ export function AirframeEditor({
     const info = layoutPresets[preset];
     const arm = Number(armMm);
     const built = presetAirframe(preset, { armMm: arm > 0 ? arm : info.defaults.armMm });
-    motors.replace(built.motors);
+    // A tenth of a millimetre is finer than any frame is built to.
+    motors.replace(built.motors.map((m) => ({ ...m, x: round1(m.x), y: round1(m.y) })));
     // Typical build values only fill what the pilot has not typed yet.
     const a = dirtyFields.airframe;
     if (!a?.massG) setValue('airframe.massG', built.massG);

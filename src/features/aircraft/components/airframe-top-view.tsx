@@ -10,11 +10,12 @@ export function AirframeTopView({
   motors,
   propDiameterIn,
   cg,
-  className = '',
+  className = 'aspect-square w-full rounded border border-line',
 }: {
   motors: readonly Motor[];
   propDiameterIn: number;
   cg?: { x: number; y: number } | undefined;
+  /** Size and frame; defaults to a bordered square filling its column. */
   className?: string;
 }) {
   const propR =
@@ -30,7 +31,7 @@ export function AirframeTopView({
       role="img"
       aria-label={label}
       viewBox={`${-ext} ${-ext} ${ext * 2} ${ext * 2}`}
-      className={'aspect-square w-full rounded border border-line bg-paper ' + className}
+      className={'bg-paper ' + className}
     >
       {/* nose marker */}
       <g aria-hidden>

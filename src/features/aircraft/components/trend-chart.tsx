@@ -40,7 +40,7 @@ export function TrendChart({
   const option = useMemo(
     () => ({
       animation: false,
-      grid: { left: 52, right: 18, top: 30, bottom: 28 },
+      grid: { left: 52, right: 18, top: 44, bottom: 28 },
       legend: {
         top: 0,
         left: 48,

@@ -19,9 +19,9 @@ export function AccountMenu() {
     );
   return (
     <div className="flex items-center gap-2 text-xs">
-      <span className="text-ink-soft" title={me.email}>
+      <Link to="/account" className="text-ink-soft hover:text-ink hover:underline" title={me.email}>
         {me.name}
-      </span>
+      </Link>
       <Button
         tone="quiet"
         size="sm"

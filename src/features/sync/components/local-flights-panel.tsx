@@ -77,7 +77,9 @@ export function LocalFlightsPanel({
                 defaultValue=""
                 onChange={(e) => {
                   if (e.target.value)
-                    void assignLocalFlight(f.id, { teamId, aircraftId: e.target.value });
+                    void assignLocalFlight(f.id, { teamId, aircraftId: e.target.value }).then(() =>
+                      syncEngine().kick(),
+                    );
                 }}
               >
                 <option value="" disabled>
