@@ -296,6 +296,26 @@ export class LogReader {
   }
 
   /**
+   * When the line at `pos` is blank, spaces only, or a `#` comment, notes it and returns where
+   * the next line starts; otherwise −1.
+   */
+  private skipLine(buf: Uint8Array, pos: number, end: number, rows: number, line: number): number {
+    const delim = this.delim;
+    let q = pos;
+    let b = buf[q]!;
+    if (b === HASH) {
+      while (buf[q] !== LF && buf[q] !== CR) q++;
+      if (this.commentLines++ === 0) this.firstCommentLine = line;
+    } else {
+      while (b === 32 || (b === 9 && delim !== 9)) b = buf[++q]!;
+      if (b !== LF && b !== CR) return -1;
+      this.blankLines++;
+    }
+    this.noteSkippedLine(rows);
+    return this.pastLineEnd(buf, q, end);
+  }
+
+  /**
    * Reads the rows of buf[start, end), which holds whole lines only (buf[end − 1] is a line
    * ending), so no scan below needs a bounds check: every one stops at a line ending.
    */
@@ -319,32 +339,14 @@ export class LogReader {
     }
     rowLoop: while (pos < end) {
       let b = buf[pos]!;
-      if (b === LF || b === CR) {
-        pos = this.pastLineEnd(buf, pos, end);
-        this.blankLines++;
-        this.noteSkippedLine(rows);
-        line++;
-        continue;
-      }
-      if (b === 32 || (b === 9 && delim !== 9)) {
-        // A line of spaces only is a blank line, not a row of empty cells.
-        let q = pos;
-        while (buf[q] === 32 || (buf[q] === 9 && delim !== 9)) q++;
-        if (buf[q] === LF || buf[q] === CR) {
-          pos = this.pastLineEnd(buf, q, end);
-          this.blankLines++;
-          this.noteSkippedLine(rows);
+      // Rows almost always start with a digit; blank and comment lines start below '0'.
+      if (b < 48) {
+        const next = this.skipLine(buf, pos, end, rows, line);
+        if (next >= 0) {
+          pos = next;
           line++;
           continue;
         }
-      }
-      if (b === HASH) {
-        while (buf[pos] !== LF && buf[pos] !== CR) pos++;
-        pos = this.pastLineEnd(buf, pos, end);
-        if (this.commentLines++ === 0) this.firstCommentLine = line;
-        this.noteSkippedLine(rows);
-        line++;
-        continue;
       }
       if (this.pending !== null) throw this.pending;
       if (rows === cap) {
