@@ -88,6 +88,11 @@ test('every evidence section opens without errors, and the filter bench runs in 
   ]) {
     await nav.getByRole('link', { name, exact: true }).click();
     await expect(sectionTitle).toHaveText(name);
+    await page.waitForTimeout(300); // charts build after the first paint
+    await page.screenshot({
+      path: `${artifacts}section-${name.replace(/\W+/g, '-').toLowerCase()}.png`,
+      fullPage: true,
+    });
   }
   await nav.getByRole('link', { name: 'Vibration', exact: true }).click();
   await expect(page.getByRole('table', { name: 'Vibration peaks' })).toContainText('Hz');
@@ -102,6 +107,7 @@ test('every evidence section opens without errors, and the filter bench runs in 
     page.getByRole('img', { name: /spectrum before and after the filters/ }),
   ).toBeVisible({ timeout: 60_000 });
   await expect(page.getByText(/delay at 20 Hz ≈ \d+\.\d\d ms/)).toBeVisible();
+  await page.screenshot({ path: `${artifacts}section-filter-bench.png`, fullPage: true });
   expect(errors).toEqual([]);
 });
 

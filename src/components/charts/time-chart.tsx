@@ -139,11 +139,11 @@ export function TimeChart(props: TimeChartProps) {
       });
     return {
       animation: false,
-      grid: { left: 48, right: 16, top: legend ? 28 : 10, bottom: slider ? 52 : 24 },
+      grid: { left: 56, right: 16, top: legend ? 28 : 10, bottom: slider ? 52 : 24 },
       legend: legend
         ? {
             top: 0,
-            left: 44,
+            right: 16,
             itemWidth: 14,
             itemHeight: 3,
             textStyle: { fontSize: 11, color: inkSeries.axis },
@@ -169,7 +169,9 @@ export function TimeChart(props: TimeChartProps) {
       yAxis: {
         type: 'value',
         name: yName,
-        nameTextStyle: { fontSize: 10, color: inkSeries.axis, align: 'left' },
+        nameLocation: 'middle',
+        nameGap: 38,
+        nameTextStyle: { fontSize: 10, color: inkSeries.axis },
         min: yMin,
         max: yMax,
         scale: yMin === undefined,

@@ -65,7 +65,7 @@ export function XyChart(props: XyChartProps) {
   const option = useMemo(
     () => ({
       animation: false,
-      grid: { left: 52, right: 18, top: 30, bottom: 40 },
+      grid: { left: 58, right: 18, top: 30, bottom: 40 },
       legend: {
         top: 0,
         left: 48,
@@ -84,18 +84,21 @@ export function XyChart(props: XyChartProps) {
         nameLocation: 'middle',
         nameGap: 24,
         nameTextStyle: { fontSize: 10, color: inkSeries.axis },
-        min: xMin,
-        max: xMax,
-        axisLabel: { color: inkSeries.axis, fontSize: 10 },
+        // A log axis otherwise widens to whole decades (1 Hz … 10 kHz) and wastes half the width.
+        min: xMin ?? (xLog ? 'dataMin' : undefined),
+        max: xMax ?? (xLog ? 'dataMax' : undefined),
+        axisLabel: { color: inkSeries.axis, fontSize: 10, hideOverlap: true },
         splitLine: { lineStyle: { color: inkSeries.grid } },
       },
       yAxis: {
         type: 'value',
         name: yName,
+        nameLocation: 'middle',
+        nameGap: 40,
         min: yMin,
         max: yMax,
         scale: yMin === undefined,
-        nameTextStyle: { fontSize: 10, color: inkSeries.axis, align: 'left' },
+        nameTextStyle: { fontSize: 10, color: inkSeries.axis },
         axisLabel: { color: inkSeries.axis, fontSize: 10 },
         splitLine: { lineStyle: { color: inkSeries.grid } },
       },

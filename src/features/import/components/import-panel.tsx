@@ -1,3 +1,4 @@
+import { Caution } from '../../../components/ui/caution';
 import { useCallback, useEffect, useReducer, useRef, useState } from 'react';
 import { useDropzone } from 'react-dropzone';
 import { useQuery } from '@tanstack/react-query';
@@ -246,14 +247,13 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
           The airframe decides what each motor is expected to carry. With an assumed quad X, an
           asymmetric frame shows up as imbalance that is really geometry.
         </p>
-        <div className="rounded border border-line bg-paper-sunk p-3 text-xs leading-relaxed text-ink-soft">
-          <p className="font-medium text-ink">Before you check anything on the bench</p>
-          <p className="mt-1">
+        <Caution title="Before you check anything on the bench">
+          <p>
             Take the props off before powering the aircraft on the bench. Disconnect the pack before
             touching motors or wiring, and keep LiPo packs within their voltage and temperature
             limits.
           </p>
-        </div>
+        </Caution>
       </aside>
     </div>
   );

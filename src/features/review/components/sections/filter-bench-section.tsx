@@ -1,3 +1,4 @@
+import { Caution } from '../../../../components/ui/caution';
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import {
@@ -251,11 +252,13 @@ export function FilterBenchSection({
           </div>
         </div>
       )}
-      <p className="text-xs text-ink-faint">
-        A preview on logged data, not a tune. Every millisecond of filter delay is control lag; try
-        changes in small steps, with the aircraft restrained or in open space, props off for any
-        bench checks.
-      </p>
+      <Caution title="Filter changes">
+        <p>
+          A preview on logged data, not a tune. Every millisecond of filter delay is control lag;
+          try changes in small steps, with the aircraft restrained or in open space, props off for
+          any bench checks.
+        </p>
+      </Caution>
     </div>
   );
 }

@@ -1,3 +1,4 @@
+import { Caution } from '../../../../components/ui/caution';
 import { useMemo } from 'react';
 import type { FlightReport } from '../../../../../shared/analysis/report-schema';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
@@ -74,12 +75,14 @@ export function HeadroomSection({
           ))}
         </ul>
       )}
-      <p className="rounded border border-line bg-paper-sunk px-3 py-2 text-xs text-ink-soft">
-        A motor pinned at full output has no room left to correct; one pinned at the floor cannot
-        slow further. ESC ratings are usually continuous figures with a short burst allowance:
-        running over them heats the FETs and can end in a burnt ESC and a fall. Size ESCs with
-        margin over the measured peak.
-      </p>
+      <Caution title="Motors and ESCs">
+        <p>
+          A motor pinned at full output has no room left to correct; one pinned at the floor cannot
+          slow further. ESC ratings are usually continuous figures with a short burst allowance:
+          running over them heats the FETs and can end in a burnt ESC and a fall. Size ESCs with
+          margin over the measured peak.
+        </p>
+      </Caution>
     </div>
   );
 }

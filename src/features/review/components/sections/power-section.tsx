@@ -1,3 +1,4 @@
+import { Caution } from '../../../../components/ui/caution';
 import type { FlightReport } from '../../../../../shared/analysis/report-schema';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
 import { TimeChart, type TimeSeries } from '../../../../components/charts/time-chart';
@@ -84,11 +85,13 @@ export function PowerSection({
           ariaLabel="Pack current over time"
         />
       )}
-      <p className="rounded border border-line bg-paper-sunk px-3 py-2 text-xs text-ink-soft">
-        LiPo packs: land before the cells sag below about 3.5 V under load, store them near 3.8 V
-        per cell, charge on a fireproof surface at the rate their maker states, and retire packs
-        that puff or run hot. Internal resistance that climbs flight after flight is a tired pack.
-      </p>
+      <Caution title="LiPo packs">
+        <p>
+          LiPo packs: land before the cells sag below about 3.5 V under load, store them near 3.8 V
+          per cell, charge on a fireproof surface at the rate their maker states, and retire packs
+          that puff or run hot. Internal resistance that climbs flight after flight is a tired pack.
+        </p>
+      </Caution>
     </div>
   );
 }
