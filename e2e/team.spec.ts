@@ -1,3 +1,4 @@
+import { mkdirSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { createTeam, linkIn, mailTo, signUp, uniqueEmail } from './helpers/accounts';
 
@@ -53,5 +54,9 @@ test('the owner invites a coach, who joins through the link in the dev inbox and
   await expect(members).toContainText('Dov Kettering');
   await members.getByLabel('Role of Dov Kettering').selectOption('tuner');
   await expect(members.getByLabel('Role of Dov Kettering')).toHaveValue('tuner');
+  const artifacts = new URL('./artifacts/', import.meta.url).pathname;
+  mkdirSync(artifacts, { recursive: true });
+  await owner.setViewportSize({ width: 1280, height: 900 });
+  await owner.screenshot({ path: `${artifacts}team-desktop.png`, fullPage: true });
   await coachContext.close();
 });

@@ -1,7 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { NavLink, Outlet } from 'react-router-dom';
-import { useDevMail } from '../../features/mail/api/mail-api';
+import { useDevMailAvailable } from '../../features/mail/api/mail-api';
 import { useActiveTeam } from '../../features/session/active-team';
 import { useMe } from '../../features/session/api/session-queries';
 import { AccountMenu } from '../../features/session/components/account-menu';
@@ -27,7 +27,7 @@ export function AppLayout() {
   const me = useMe().data;
   const { team } = useActiveTeam();
   const queryClient = useQueryClient();
-  const inbox = useDevMail();
+  const hasInbox = useDevMailAvailable();
   const onPass = useCallback(
     (result: SyncPassResult) => {
       if (result.flightsSynced > 0)
@@ -54,7 +54,7 @@ export function AppLayout() {
                 {item.label}
               </NavLink>
             ))}
-            {inbox.data && (
+            {hasInbox && (
               <NavLink to="/dev/mail" className={linkClass}>
                 Inbox
               </NavLink>

@@ -29,3 +29,9 @@ export const mailQueries = {
 };
 
 export const useDevMail = () => useQuery(mailQueries.inbox());
+
+/** Whether this server has a dev inbox at all; asked once, for the navigation. */
+export const useDevMailAvailable = () => {
+  const inbox = useQuery({ ...mailQueries.inbox(), refetchInterval: false, staleTime: Infinity });
+  return Boolean(inbox.data);
+};
