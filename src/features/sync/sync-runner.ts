@@ -1,4 +1,5 @@
 import {
+  getLocalFlight,
   listOutbox,
   listUnsyncedFlights,
   markFlightAttemptFailed,
@@ -183,6 +184,16 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
 
   for (const entry of await listOutbox()) {
     if (entry.state === 'failed' || entry.seq === undefined) continue;
+    // A comment on a flight still only on this device waits for that flight, and so does
+    // everything queued after it.
+    const flightId = (entry.body as { flightId?: unknown } | undefined)?.flightId;
+    if (typeof flightId === 'string') {
+      const local = await getLocalFlight(flightId);
+      if (local && local.syncState !== 'synced') {
+        result.waiting += 1;
+        break;
+      }
+    }
     if (entry.nextAttemptAt > deps.now()) {
       // Later writes may depend on this one (a reply on a comment), so keep the order.
       due(entry.nextAttemptAt);

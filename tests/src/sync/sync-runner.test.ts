@@ -1,6 +1,7 @@
 import 'fake-indexeddb/auto';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import {
+  assignLocalFlight,
   closeLocalDb,
   enqueue,
   getLocalFlight,
@@ -178,6 +179,29 @@ describe('sync pass', () => {
     const result = await runSyncPass(deps(server));
     expect(result.stoppedBy).toBe('signed-out');
     expect((await getLocalFlight(FLIGHT))?.syncState).toBe('pending');
+  });
+
+  it('holds a comment on a flight that is still only on this device, and sends it after the flight', async () => {
+    await saveFlight(null);
+    await enqueue({
+      id: 'c1',
+      method: 'PUT',
+      path: '/api/comments/c1',
+      body: { flightId: FLIGHT, tS: 3, body: 'hm' },
+    });
+    const server = fakeServer(() => json(200, {}));
+    const held = await runSyncPass(deps(server));
+    expect(server.calls).toEqual([]);
+    expect(held.waiting).toBe(2);
+    expect((await listOutbox())[0]?.attempts).toBe(0);
+
+    await assignLocalFlight(FLIGHT, { teamId: TEAM, aircraftId: AIRCRAFT });
+    await runSyncPass(deps(server));
+    expect(server.calls.map((c) => `${c.method} ${c.url}`)).toEqual([
+      `PUT /api/flights/${FLIGHT}`,
+      `PUT /api/flights/${FLIGHT}/raw`,
+      'PUT /api/comments/c1',
+    ]);
   });
 
   it('holds a flight with no aircraft until the pilot picks one', async () => {
