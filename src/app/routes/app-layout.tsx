@@ -3,7 +3,7 @@ import { useCallback } from 'react';
 import { NavLink, Outlet } from 'react-router-dom';
 import { useDevMailAvailable } from '../../features/mail/api/mail-api';
 import { useActiveTeam } from '../../features/session/active-team';
-import { useMe } from '../../features/session/api/session-queries';
+import { sessionKeys, useMe } from '../../features/session/api/session-queries';
 import { AccountMenu } from '../../features/session/components/account-menu';
 import { TeamSwitcher } from '../../features/session/components/team-switcher';
 import { ServerStatus } from '../../features/status/components/server-status';
@@ -30,6 +30,9 @@ export function AppLayout() {
   const hasInbox = useDevMailAvailable();
   const onPass = useCallback(
     (result: SyncPassResult) => {
+      // The session ended elsewhere (expired, password changed): let the header find out.
+      if (result.stoppedBy === 'signed-out')
+        void queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
       if (result.flightsSynced > 0)
         void Promise.all([
           queryClient.invalidateQueries({ queryKey: fleetKeys.lists() }),

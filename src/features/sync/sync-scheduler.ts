@@ -1,5 +1,8 @@
 import { runSyncPass, type SyncDeps, type SyncPassResult } from './sync-runner';
 
+/** How long to wait before trying an unreachable server again, ms. */
+export const OFFLINE_RETRY_MS = 30_000;
+
 export interface SyncSchedulerState {
   running: boolean;
   lastResult: SyncPassResult | null;
@@ -61,7 +64,15 @@ export function createSyncScheduler(
         const result = await run(deps);
         set({ lastResult: result, lastRunAt: deps.now(), lastError: null });
         options.onPass?.(result);
-        schedule(result.stoppedBy ? null : result.nextRetryAt);
+        // Unreachable server while the browser says online: look again in a while. Signed out:
+        // wait for the session to come back (setEnabled).
+        schedule(
+          result.stoppedBy === 'offline'
+            ? deps.now() + OFFLINE_RETRY_MS
+            : result.stoppedBy === 'signed-out'
+              ? null
+              : result.nextRetryAt,
+        );
       } catch (error) {
         // IndexedDB trouble or a bug: report it and try again later rather than spin.
         set({

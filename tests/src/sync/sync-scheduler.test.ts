@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import { createSyncScheduler } from '../../../src/features/sync/sync-scheduler';
+import { createSyncScheduler, OFFLINE_RETRY_MS } from '../../../src/features/sync/sync-scheduler';
 import type { SyncDeps, SyncPassResult } from '../../../src/features/sync/sync-runner';
 
 const idle: SyncPassResult = {
@@ -44,6 +44,25 @@ describe('sync scheduler', () => {
     await vi.waitFor(() => expect(scheduler.getState().running).toBe(false));
     expect(run).toHaveBeenCalledTimes(2);
     scheduler.stop();
+  });
+
+  it('looks again later when the server could not be reached', async () => {
+    vi.useFakeTimers();
+    try {
+      const run = vi
+        .fn<(d: SyncDeps) => Promise<SyncPassResult>>()
+        .mockResolvedValueOnce({ ...idle, stoppedBy: 'offline' })
+        .mockResolvedValue(idle);
+      const scheduler = createSyncScheduler(deps, { run });
+      scheduler.setEnabled(true);
+      await vi.advanceTimersByTimeAsync(OFFLINE_RETRY_MS - 1);
+      expect(run).toHaveBeenCalledTimes(1);
+      await vi.advanceTimersByTimeAsync(1);
+      expect(run).toHaveBeenCalledTimes(2);
+      scheduler.stop();
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('comes back when the earliest back-off is due', async () => {
