@@ -27,7 +27,7 @@ const findings: Finding[] = [
     severity: 'act',
     motor: 3,
     tS: 12.5,
-    message: 'Motor 3 works 14 % harder than the frame predicts in hover.',
+    message: 'Works 14 % harder than the frame predicts in hover.',
   },
   { code: 'cg-offset', severity: 'watch', message: 'The CG sits 9 mm forward of the design CG.' },
 ];
@@ -46,7 +46,7 @@ describe('verdict list', () => {
     renderList();
     const items = within(screen.getByRole('list', { name: 'Findings' })).getAllByRole('listitem');
     expect(items.map((li) => li.textContent)).toEqual([
-      expect.stringContaining('Motor 3 works 14 %'),
+      expect.stringMatching(/Motor 3:\s*Works 14 %/),
       expect.stringContaining('Cells sagged'),
       expect.stringContaining('The CG sits 9 mm'),
       expect.stringContaining('A small peak near 180 Hz'),
@@ -70,6 +70,21 @@ describe('verdict list', () => {
     expect(within(items[3]!).getByRole('link').getAttribute('href')).toBe(
       `/flights/${flightId}/vibration`,
     );
+  });
+
+  it('does not name the motor twice when the message already does', () => {
+    renderList([
+      {
+        code: 'motor-saturation',
+        severity: 'note',
+        motor: 2,
+        tS: 3,
+        message: 'Motor 2 hit its limit for 0.4 s.',
+      },
+    ]);
+    const item = within(screen.getByRole('list', { name: 'Findings' })).getByRole('listitem');
+    expect(item.textContent).not.toContain('Motor 2:');
+    expect(item.textContent).toContain('Motor 2 hit its limit');
   });
 
   it('hands the chosen finding to the page so the cursor can move there', async () => {

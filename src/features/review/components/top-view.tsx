@@ -1,5 +1,6 @@
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import { motorColor } from '../../../components/charts/palette';
+import { signedFixed } from '../model/format';
 
 export interface TopViewProps {
   airframe: Airframe;
@@ -11,7 +12,7 @@ export interface TopViewProps {
   flagged: ReadonlySet<number>;
 }
 
-const fmtPct = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(1)} %`;
+const fmtPct = (v: number) => `${signedFixed(v)} %`;
 const BAR_FULL_PCT = 20;
 
 /**

@@ -40,6 +40,9 @@ export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictLis
         <ol className="divide-y divide-line" aria-label="Findings">
           {ranked.map((f, i) => {
             const section = sectionForFinding(f);
+            // The engine's message usually names the motor already; the colour dot stays either way.
+            const named =
+              f.motor !== undefined && new RegExp(`\\bmotor ${f.motor}\\b`, 'i').test(f.message);
             const search = f.tS !== undefined ? `?t=${Math.round(f.tS * 1000) / 1000}` : '';
             return (
               <li
@@ -56,7 +59,11 @@ export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictLis
                           className="inline-block h-2.5 w-2.5 rounded-full"
                           style={{ background: motorColor(f.motor) }}
                         />
-                        Motor {f.motor}:
+                        {named ? (
+                          <span className="sr-only">Motor {f.motor}</span>
+                        ) : (
+                          `Motor ${f.motor}:`
+                        )}
                       </span>
                     )}
                     {f.message}

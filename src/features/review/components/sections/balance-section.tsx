@@ -3,6 +3,7 @@ import type { ReviewDetail } from '../../../../../shared/analysis/review-detail'
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { motorColor } from '../../../../components/charts/palette';
 import { CgDetail, TopView } from '../top-view';
+import { signedFixed } from '../../model/format';
 
 export interface BalanceSectionProps {
   report: FlightReport;
@@ -15,9 +16,7 @@ export interface BalanceSectionProps {
 const pct = (v: number | undefined) =>
   v === undefined || !Number.isFinite(v) ? '—' : `${(v * 100).toFixed(1)} %`;
 const signed = (v: number | undefined, digits = 1) =>
-  v === undefined || !Number.isFinite(v)
-    ? '—'
-    : `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(digits)}`;
+  v === undefined ? '—' : signedFixed(v, digits);
 
 const patternTitle: Record<ReviewDetail['diagnosis']['pattern'], string> = {
   healthy: 'Balanced',
