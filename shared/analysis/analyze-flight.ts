@@ -14,11 +14,17 @@ import { findSegments, motorColumns, type Ranges } from './segments';
 import { resolveThresholds, type Thresholds } from './thresholds';
 import { analyseTracking } from './tracking';
 import { analyseVibration, toReviewSpectrum } from './vibration';
+import { benchRunCurve, type BenchRunTable, type ThrustCurve } from './thrust-curve';
 
 export interface AnalyzeOptions {
   /** The aircraft's geometry; without it a preset for the log's motor count is assumed. */
   airframe?: Airframe;
   thresholds?: Partial<Thresholds>;
+  /**
+   * A bench run of this motor and prop (throttle 0–1 → thrust in grams, the `BenchRow` shape):
+   * the thrust proxy for balance, torque split and CG when rpm is not logged (PRODUCT.md §4).
+   */
+  benchRun?: BenchRunTable;
 }
 
 export interface FlightAnalysis {
@@ -94,6 +100,15 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     warnings.push('No motor outputs (motor1…) in the log: effort, balance and headroom need them.');
   const gamma = airframe.thrustExponent ?? 2;
   const rpms = presentColumns(log, 'rpm', motorCount);
+  let bench: ThrustCurve | undefined;
+  if (options.benchRun) {
+    try {
+      bench = benchRunCurve(options.benchRun);
+    } catch (e) {
+      throw new AnalysisInputError(e instanceof Error ? e.message : String(e));
+    }
+    if (rpms) warnings.push('rpm is logged, so balance and CG use rpm² rather than the bench run.');
+  }
 
   const seg = findSegments(log, th);
   const armed: Ranges = seg.armed.length ? seg.armed : [[0, log.rows]];
@@ -108,8 +123,8 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
   let balance: BalanceResult | null = null;
   let hoverOutput: number | null = null;
   if (motorCount > 0 && seg.hoverS > 0) {
-    const means = hoverMeans(motors, rpms, seg.hover, gamma);
-    balance = analyseBalance(airframe, means);
+    const means = hoverMeans(motors, rpms, seg.hover, gamma, bench);
+    balance = analyseBalance(airframe, means, bench);
     hoverOutput = means.output.reduce((a, b) => a + b, 0) / motorCount;
   }
   const diagnosis = diagnose(airframe, balance, seg.hoverS, th);

@@ -3,6 +3,7 @@ import { multiply } from '../airframe/linear-algebra';
 import type { Column } from '../log/types';
 import type { Airframe } from '../schemas/airframe';
 import type { Ranges } from './segments';
+import { powerLawCurve, type ThrustCurve } from './thrust-curve';
 
 export interface HoverMeans {
   /** Mean output per motor over hover, 0–1. */
@@ -11,21 +12,29 @@ export interface HoverMeans {
   outputPow: number[];
   /** Mean rpm² per motor, when every motor's rpm is logged. */
   rpmSq: number[] | null;
+  /** Mean thrust of the output through a bench-run curve per motor (grams), when one is attached. */
+  benchThrust?: number[];
 }
 
-/** Per-motor hover means (γ = the airframe's thrust exponent, default 2). */
+/**
+ * Per-motor hover means (γ = the airframe's thrust exponent, default 2; `bench` adds the mean
+ * thrust through a bench-run curve, g).
+ */
 export function hoverMeans(
   motors: readonly Column[],
   rpms: readonly Column[] | null,
   hover: Ranges,
   gamma: number,
+  bench?: ThrustCurve,
 ): HoverMeans {
   const output: number[] = [];
   const outputPow: number[] = [];
   const rpmSq: number[] | null = rpms ? [] : null;
+  const benchThrust: number[] = [];
   motors.forEach((m, i) => {
     let s = 0;
     let sp = 0;
+    let sb = 0;
     let sr = 0;
     let n = 0;
     let nr = 0;
@@ -38,6 +47,7 @@ export function hoverMeans(
           const u = v > 0 ? v : 0;
           s += u;
           sp += gamma === 2 ? u * u : u ** gamma;
+          if (bench) sb += bench.thrust(u);
           n++;
         }
         if (r) {
@@ -51,9 +61,17 @@ export function hoverMeans(
     }
     output.push(n ? s / n : NaN);
     outputPow.push(n ? sp / n : NaN);
+    benchThrust.push(n ? sb / n : NaN);
     rpmSq?.push(nr ? sr / nr : NaN);
   });
-  return { output, outputPow, rpmSq };
+  return { output, outputPow, rpmSq, ...(bench ? { benchThrust } : {}) };
+}
+
+function median(v: number[]): number {
+  const s = v.filter((x) => Number.isFinite(x)).sort((a, b) => a - b);
+  if (!s.length) return NaN;
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
 }
 
 const normalise = (v: number[]) => {
@@ -65,9 +83,9 @@ export interface BalanceResult {
   expectedShare: number[];
   measuredShare: number[];
   deviationPct: number[];
-  /** Shares of hover output^γ (what the diagnosis reads: a weak motor shows in its output). */
+  /** Shares of hover output^γ, or of bench-run thrust (what the diagnosis reads: a weak motor shows in its output). */
   outputShare: number[];
-  proxy: 'rpm' | 'output';
+  proxy: 'rpm' | 'bench-run' | 'output';
   cwShare: number;
   ccwShare: number;
   asymmetryPct: number;
@@ -78,18 +96,33 @@ export interface BalanceResult {
 
 /**
  * Balance, torque split and CG from hover means (PRODUCT.md §7 definitions). Measured shares
- * use rpm² when logged (propeller law), output^γ otherwise; deviation compares each motor's
- * mean output with the output that delivers its expected share at the measured total.
+ * use rpm² when logged (propeller law), else the bench-run curve when one is attached, else
+ * output^γ. Deviation compares each motor's mean output with the output that delivers its
+ * expected share of the measured total through the same curve. With rpm logged the total is the
+ * rpm² sum, put into output terms by the median motor's thrust per output — so one worn motor,
+ * which needs more output for the same rpm, cannot inflate the yardstick it is judged by.
  */
-export function analyseBalance(airframe: Airframe, means: HoverMeans): BalanceResult {
-  const gamma = airframe.thrustExponent ?? 2;
+export function analyseBalance(
+  airframe: Airframe,
+  means: HoverMeans,
+  bench?: ThrustCurve,
+): BalanceResult {
+  const curve = bench ?? powerLawCurve(airframe.thrustExponent ?? 2);
   const expectedShare = expectedHoverShares(airframe);
-  const proxyValues = means.rpmSq ?? means.outputPow;
+  const outputThrust = bench && means.benchThrust ? means.benchThrust : means.outputPow;
+  const proxyValues = means.rpmSq ?? outputThrust;
   const measuredShare = normalise(proxyValues);
-  const outputShare = normalise(means.outputPow);
-  const totalPow = means.outputPow.reduce((a, b) => a + b, 0);
+  const outputShare = normalise(outputThrust);
+  // Thrust of each motor's mean output held steady: the same averaging as the output it is
+  // compared with, so control jitter does not bias every motor low.
+  const steady = means.output.map((u) => curve.thrust(u));
+  let total = steady.reduce((a, b) => a + b, 0);
+  if (means.rpmSq) {
+    const perOutput = median(means.rpmSq.map((r, i) => r / steady[i]!));
+    if (perOutput > 0) total = means.rpmSq.reduce((a, b) => a + b, 0) / perOutput;
+  }
   const deviationPct = means.output.map((u, i) => {
-    const expectedOut = (expectedShare[i]! * totalPow) ** (1 / gamma);
+    const expectedOut = curve.output(expectedShare[i]! * total);
     return (u / expectedOut - 1) * 100;
   });
   let cw = 0;
@@ -115,7 +148,7 @@ export function analyseBalance(airframe: Airframe, means: HoverMeans): BalanceRe
     measuredShare,
     deviationPct,
     outputShare,
-    proxy: means.rpmSq ? 'rpm' : 'output',
+    proxy: means.rpmSq ? 'rpm' : bench && means.benchThrust ? 'bench-run' : 'output',
     cwShare: cw,
     ccwShare: ccw,
     asymmetryPct: (cw - ccw) * 100,

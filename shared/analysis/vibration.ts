@@ -145,8 +145,10 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
         ? segmentMeans(rowSource, ranges, nperseg)
         : new Float64Array(segIndex.size).fill(NaN);
   const segValue = (s: number) => values[segIndex.get(s) ?? -1] ?? NaN;
-  const lo = quantile(values, 0.02);
-  const hi = quantile(values, 0.98);
+  // Rows span every segment's value: a short punch-out at the top speed still gets its row, so
+  // a line it alone excites can be traced to the rotors.
+  const lo = quantile(values, 0);
+  const hi = quantile(values, 1);
   const rowsOk = rowSource !== null && Number.isFinite(lo) && hi > lo;
   const rowWidth = rowsOk ? (hi - lo) / CAMPBELL_ROWS : 1;
   const bins = (nperseg >> 1) + 1;
@@ -157,6 +159,7 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
   // judged on its own rows; the Campbell matrix drawn is the sum over the gyro axes.
   const rowAcc: Record<string, Float64Array[]> = {};
   const rowCount = new Float64Array(CAMPBELL_ROWS);
+  const rowValueSum = new Float64Array(CAMPBELL_ROWS);
 
   for (const name of VIBRATION_CHANNELS) {
     const col = log.columns[name];
@@ -175,7 +178,10 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
                 const r = rowOf(v);
                 const row = acc[r]!;
                 for (let k = 0; k < bins; k++) row[k]! += est[k]!;
-                if (countRows) rowCount[r]!++;
+                if (countRows) {
+                  rowCount[r]!++;
+                  rowValueSum[r]! += v;
+                }
               }
             }
           }
@@ -201,11 +207,13 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
 
   const rowCentres = Array.from({ length: CAMPBELL_ROWS }, (_, r) => lo + (r + 0.5) * rowWidth);
   const counted = Array.from(rowCount, (c, r) => (c > 0 ? r : -1)).filter((r) => r >= 0);
-  const rowDb = (acc: Float64Array[]) =>
+  const rowMean = (acc: Float64Array[]) =>
     acc.map((row, r) => {
       const c = rowCount[r]!;
-      return Float64Array.from(row, (v) => (c > 0 ? toDb(v / c) : NaN));
+      return Float64Array.from(row, (v) => (c > 0 ? v / c : NaN));
     });
+  const rowDb = (acc: Float64Array[]) =>
+    rowMean(acc).map((row) => Float64Array.from(row, (v) => (v === v ? toDb(v) : NaN)));
   let campbell: CampbellMatrix | null = null;
   const gyroRows = Object.entries(rowAcc).filter(([n]) => GYRO.has(n));
   if (rowsOk && gyroRows.length) {
@@ -239,7 +247,8 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
   const rotorHz = motorHz.length ? motorHz.reduce((a, b) => a + b, 0) / motorHz.length : null;
   const attribution = new Map<number, ReturnType<typeof attributeOrder> | null>();
   for (const [name, ch] of Object.entries(channels)) {
-    const dbRows = rowAcc[name] ? rowDb(rowAcc[name]) : [];
+    const powRows = rowAcc[name] ? rowMean(rowAcc[name]) : [];
+    const dbRows = powRows.map((row) => Float64Array.from(row, (v) => (v === v ? toDb(v) : NaN)));
     for (const peak of ch.peaks) {
       const verdict = labelPeak(peak.hz, {
         motorHz,
@@ -248,7 +257,13 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
         df,
         fs,
         ...(input.poles ? { poles: input.poles } : {}),
-        rows: counted.map((r) => ({ value: rowCentres[r]!, db: dbRows[r]! })),
+        rows: counted.map((r) => ({
+          value: rowValueSum[r]! / rowCount[r]!,
+          db: dbRows[r]!,
+          power: powRows[r]!,
+          count: rowCount[r]!,
+        })),
+        rowWidth,
         by,
       });
       peak.label = verdict.label;
@@ -287,8 +302,60 @@ interface LabelContext {
   poles?: number;
   blades: number;
   df: number;
-  rows: { value: number; db: Float64Array }[];
+  /**
+   * Short-time spectra grouped by rotor speed (or throttle): the mean value of the segments in
+   * the row, their mean spectrum in dB and, optionally, in linear units with the segment count.
+   */
+  rows: { value: number; db: Float64Array; power?: Float64Array; count?: number }[];
+  /** Width of a row in its own units (rpm or throttle), for the spread of speeds within it. */
+  rowWidth?: number;
   by: 'rpm' | 'throttle';
+}
+
+/** Median of the bins within ±12 of k (leaving out ±2), linear units: the floor under a peak. */
+function floorAt(p: ArrayLike<number>, k: number): number {
+  const vals: number[] = [];
+  for (let j = Math.max(1, k - 12); j <= Math.min(p.length - 1, k + 12); j++) {
+    if (Math.abs(j - k) > 2 && p[j]! === p[j]!) vals.push(p[j]!);
+  }
+  if (!vals.length) return 0;
+  vals.sort((a, b) => a - b);
+  return vals[vals.length >> 1]!;
+}
+
+/**
+ * Share of a peak's energy above the local floor, summed over the short-time spectra, that comes
+ * from rows whose own order-h line (folded by the log rate when above Nyquist) passes through
+ * the peak: near 1 for a line that follows the rotors even when they ran there only briefly (a
+ * punch-out), near 0 for a line that holds its frequency while they change speed.
+ */
+function orderEnergyShare(
+  hz: number,
+  h: number,
+  folded: boolean,
+  ctx: LabelContext,
+  tol: (f: number) => number,
+): number {
+  const { rows, df, fs } = ctx;
+  const k = Math.round(hz / df);
+  const half = ((ctx.rowWidth ?? 0) / 2 / 60) * h;
+  let on = 0;
+  let all = 0;
+  for (const row of rows) {
+    const p = row.power;
+    if (!p || k <= 0 || k >= p.length) continue;
+    let top = 0;
+    for (let j = Math.max(1, k - 1); j <= Math.min(p.length - 1, k + 1); j++)
+      top = Math.max(top, p[j]!);
+    const excess = Math.max(0, top - floorAt(p, k)) * (row.count ?? 1);
+    if (!(excess > 0)) continue;
+    all += excess;
+    const at = (h * row.value) / 60;
+    if (folded !== at > fs / 2) continue;
+    const f = Math.abs(at - fs * Math.round(at / fs));
+    if (Math.abs(hz - f) <= tol(at) + half) on += excess;
+  }
+  return all > 0 ? on / all : 0;
 }
 
 /**
@@ -342,12 +409,25 @@ export function labelPeak(
       }
     }
   }
-  if (!match && ctx.poles && motorHz.length) {
-    // Motor electrical frequency, usually folded down from far above the log rate: not one of
-    // our labels, but worth naming in the finding.
-    const pp = ctx.poles / 2;
-    const hit = motorHz.find((f) => Math.abs(hz - fold(pp * f)) <= tol(f));
-    if (hit !== undefined) return { label: null, aliasOfHz: pp * hit };
+  if (!match && by === 'rpm' && motorHz.length) {
+    // Orders the rotors reached only for a moment: most of the peak's energy sits in the
+    // short-time spectra whose own order line runs through it (Campbell rows).
+    energy: for (const folded of [false, true]) {
+      for (const o of orders) {
+        if (orderEnergyShare(hz, o[1], folded, ctx, tol) >= 0.6) {
+          match = o;
+          if (folded) {
+            const top = rows.reduce((m, r) => Math.max(m, r.value), 0);
+            aliasOfHz = (o[1] * top) / 60;
+          }
+          break energy;
+        }
+      }
+    }
+    if (match) {
+      const extraE = aliasOfHz !== undefined ? { aliasOfHz } : {};
+      return { label: match[0], ...extraE };
+    }
   }
   const extra = aliasOfHz !== undefined ? { aliasOfHz } : {};
   const mean = motorHz.length ? motorHz.reduce((a, b) => a + b, 0) / motorHz.length : 0;
@@ -380,6 +460,13 @@ export function labelPeak(
       : { label: match[0], ...extra };
   }
   if (far >= 3 && frameVotes >= Math.max(3, 0.6 * far)) return { label: 'frame' };
+  if (ctx.poles && motorHz.length) {
+    // Motor electrical frequency, usually folded down from far above the log rate: not one of
+    // our labels, but worth naming in the finding.
+    const pp = ctx.poles / 2;
+    const hit = motorHz.find((f) => Math.abs(hz - fold(pp * f)) <= tol(f));
+    if (hit !== undefined) return { label: null, aliasOfHz: pp * hit };
+  }
   return { label: null };
 }
 

@@ -123,6 +123,26 @@ describe('balance, torque split and CG', () => {
     expect(b.measuredShare[3]! / b.measuredShare[0]!).toBeCloseTo(1.21, 9);
   });
 
+  it('with rpm logged, judges a worn motor against the healthy motors’ thrust per output', () => {
+    // Motor 3 worn: same rpm (so the same thrust, T = C_T·ρ·n²·D⁴) for 1/√0.91 more output.
+    const af = quad();
+    const out = [1, 1, 1 / Math.sqrt(0.91), 1].map((k) => new Float64Array(100).fill(0.4 * k));
+    const rpm = [0, 1, 2, 3].map(() => new Float64Array(100).fill(12000));
+    const b = analyseBalance(af, hoverMeans(out, rpm, all, 2));
+    expect(b.deviationPct[2]).toBeCloseTo((1 / Math.sqrt(0.91) - 1) * 100, 6);
+    for (const i of [0, 1, 3]) expect(b.deviationPct[i]).toBeCloseTo(0, 6);
+  });
+
+  it('compares mean outputs on both sides, so control jitter does not bias every motor low', () => {
+    const af = quad();
+    // Each motor alternates 0.35 / 0.45 around a 0.4 mean.
+    const out = [0, 1, 2, 3].map(() =>
+      Float64Array.from({ length: 100 }, (_, i) => (i % 2 ? 0.45 : 0.35)),
+    );
+    const b = analyseBalance(af, hoverMeans(out, null, all, 2));
+    b.deviationPct.forEach((v) => expect(v).toBeCloseTo(0, 9));
+  });
+
   it('says there was too little hover to judge below the threshold', () => {
     const af = quad();
     const b = analyseBalance(af, hoverMeans(columnsFor([1, 1, 1, 1]), null, all, 2));

@@ -118,6 +118,68 @@ describe('labelPeak', () => {
   });
 });
 
+describe('labelPeak: constancy across rotor speed before coincidences', () => {
+  // Rows of short-time spectra at three rotor speeds, each with a line at the same 140 Hz bin.
+  const fs = 500;
+  const df = fs / 128;
+  const k = Math.round(140 / df);
+  const rowAt = (rpm: number) => {
+    const power = new Float64Array(65).fill(1e-4);
+    power[k] = 1e-1;
+    return {
+      value: rpm,
+      power,
+      count: 10,
+      db: Float64Array.from(power, (p) => 10 * Math.log10(p)),
+    };
+  };
+  const ctx = {
+    blades: 2,
+    df,
+    fs,
+    by: 'rpm' as const,
+    poles: 24,
+    rowWidth: 300,
+    // 95 Hz rotors: 12 pole pairs × 95 = 1140 Hz folds to 140 Hz at 500 Hz.
+    motorHz: [95, 95, 95, 95, 95, 95],
+    rows: [rowAt(4800), rowAt(5700), rowAt(6600)],
+  };
+
+  it('calls a line that holds its frequency across rotor speeds frame, whatever folds onto it', () => {
+    expect(labelPeak(k * df, ctx).label).toBe('frame');
+  });
+
+  it('keeps the folded electrical reading when there is no spread of speeds to judge by', () => {
+    expect(labelPeak(k * df, { ...ctx, rows: [] })).toMatchObject({
+      label: null,
+      aliasOfHz: 1140,
+    });
+  });
+
+  it('names a rotor order the rotors reached only in one row (a punch-out) from where its energy sits', () => {
+    const power = new Float64Array(65).fill(1e-4);
+    const kPunch = Math.round(200 / df);
+    power[kPunch] = 1e-1;
+    const punch = {
+      value: 12000,
+      power,
+      count: 3,
+      db: Float64Array.from(power, (p) => 10 * Math.log10(p)),
+    };
+    const quiet = (rpm: number) => {
+      const p = new Float64Array(65).fill(1e-4);
+      return {
+        value: rpm,
+        power: p,
+        count: 200,
+        db: Float64Array.from(p, (v) => 10 * Math.log10(v)),
+      };
+    };
+    const r = labelPeak(kPunch * df, { ...ctx, rows: [quiet(5700), quiet(6000), punch] });
+    expect(r.label).toBe('rotor-1x');
+  });
+});
+
 describe('filter bench', () => {
   it('returns the response and before/after spectra, and the notch removes its tone', () => {
     const log = sweepLog();
