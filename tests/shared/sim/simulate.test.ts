@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { G0 } from '../../../shared/airframe/allocation';
 import { presetAirframe } from '../../../shared/airframe/presets';
+import { findPeaks } from '../../../shared/analysis/dsp/peaks';
+import { welch } from '../../../shared/analysis/dsp/welch';
 import { scenarios, withFaults } from '../../../shared/sim/scenarios';
 import { reactionYawSign, simulate } from '../../../shared/sim/simulate';
 import type { Scenario } from '../../../shared/sim/types';
@@ -342,6 +344,30 @@ describe('simulate: each fault changes what it should and nothing else', () => {
     const healthy = pitchErrorRms(wideFront);
     const offset = pitchErrorRms(withFaults(wideFront, [{ kind: 'cg-offset', dxMm: 14, dyMm: 0 }]));
     expect(offset).toBeLessThan(healthy * 1.5 + 1);
+  });
+
+  it('logs at 1 kHz carry no line the same flight at 4 kHz lacks (nothing folds in)', () => {
+    // Each vibration source is generated at the log rate behind the anti-alias model, so a line
+    // above Nyquist is dropped rather than folded: every peak of the 1 kHz log must sit where the
+    // 4 kHz log of the same flight has one too. Welch (1967) PSD, 3.9 Hz bins at both rates.
+    const s = scenario('clean-quad-x');
+    const peaksAt = (rateHz: number) => {
+      const { log } = run(s, { seconds: 30, rateHz, seed: 3 });
+      const from = Math.round(2 * rateHz);
+      const spec = welch(col(log, 'gyro_x'), rateHz, {
+        nperseg: rateHz === 1000 ? 256 : 1024,
+        ranges: [[from, log.rows - rateHz]],
+      });
+      return findPeaks(spec, { minHz: 20, minProminenceDb: 10, max: 8 }).map((p) => p.hz);
+    };
+    const low = peaksAt(1000);
+    const high = peaksAt(4000);
+    expect(low.length).toBeGreaterThan(0);
+    for (const hz of low)
+      expect(
+        high.some((h) => Math.abs(h - hz) <= 8),
+        `${hz} Hz`,
+      ).toBe(true);
   });
 
   it('combines faults: a weak motor and a CG offset both show', () => {
