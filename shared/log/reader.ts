@@ -3,6 +3,7 @@ import { describePlace, LogFormatError } from './errors';
 import { readPreamble, type Delimiter, type Preamble } from './preamble';
 import { resolveColumns, type ColumnPlan, type ReadOptions } from './resolve-columns';
 import { analyseTimeBase } from './time-base';
+import { checkAssumedUnits } from './unit-checks';
 import type { Column, LogWarning, ParsedLog } from './types';
 import { decodeUtf8 } from './utf8';
 
@@ -713,6 +714,9 @@ export class LogReader {
     }
     const tb = analyseTimeBase(time, (r) => this.lineOfRow(r));
     warnings.push(...tb.warnings);
+    warnings.push(
+      ...checkAssumedUnits(this.plans, columns, tb.timeBase.medianStepS, pre.headerLine),
+    );
     return {
       channels,
       columns,

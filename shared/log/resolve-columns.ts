@@ -27,6 +27,8 @@ export interface ColumnPlan {
   offset: number;
   /** Value in `unit` → canonical unit. */
   conversion: Conversion;
+  /** The unit was written (header brackets or column map), not assumed as the default. */
+  unitStated: boolean;
 }
 
 export interface ReadOptions {
@@ -80,6 +82,7 @@ export function resolveColumns(
   headers.forEach((header, i) => {
     const column = i + 1;
     const skip: ColumnPlan = {
+      unitStated: false,
       header,
       channel: null,
       unit: null,
@@ -117,6 +120,7 @@ export function resolveColumns(
           { ...entry, poles: options.poles },
           headerLine,
           column,
+          entry.unit !== undefined || entry.min !== undefined,
         ),
       );
       return;
@@ -133,6 +137,7 @@ export function resolveColumns(
           { poles: options.poles },
           headerLine,
           column,
+          splitHeader(header).unit !== null,
         ),
       );
       return;
@@ -195,6 +200,7 @@ function plan(
   input: { poles?: number; min?: number; max?: number },
   line: number,
   column: number,
+  unitStated: boolean,
 ): ColumnPlan {
   const conversion = conversionFor(channel, unit, input);
   if (typeof conversion === 'string') {
@@ -206,7 +212,7 @@ function plan(
       header,
     });
   }
-  return { header, channel, unit, scale, offset, conversion };
+  return { header, channel, unit, scale, offset, conversion, unitStated };
 }
 
 function checkChannels(plans: ColumnPlan[], headers: string[], line: number): void {

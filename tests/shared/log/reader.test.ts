@@ -238,7 +238,7 @@ describe('a log cut short', () => {
 
 describe('lines among the samples', () => {
   it('skips blank and # lines, reporting them, and keeps line numbers true', () => {
-    const log = parse('time,motor1\n0,0.5\n\n# pause\n1,0.5\n2,0.5\n');
+    const log = parse('time,motor1\n0,0.5\n\n# pause\n0.001,0.5\n0.002,0.5\n');
     expect(log.rows).toBe(3);
     expect(log.warnings.map((w) => w.code).sort()).toEqual(['blank-lines', 'comment-lines']);
     expect(log.warnings.find((w) => w.code === 'comment-lines')?.line).toBe(4);
@@ -335,7 +335,7 @@ describe('the streaming reader', () => {
 
 describe('whitespace', () => {
   it('treats a line of spaces as blank, not as a row of empty cells', () => {
-    const log = parseLog(enc('time,motor1\n0,0.5\n   \n1,0.5\n'));
+    const log = parseLog(enc('time,motor1\n0,0.5\n   \n0.001,0.5\n'));
     expect(log.rows).toBe(2);
     expect(log.warnings.map((w) => w.code)).toEqual(['blank-lines']);
   });
