@@ -85,6 +85,15 @@ test('a tuner edits an airframe, logs a repair and a bench run, and finds a sync
   await expect(page).toHaveURL(/aircraftId=/);
   await filters.getByLabel('Aircraft').selectOption({ label: 'Kite' });
   await expect(flights).toContainText('weak-motor.csv');
+  await filters.getByLabel('Pilot').selectOption({ label: 'Rook Tallis' });
+  // A weak motor is at least worth watching.
+  await filters.getByLabel('Verdict at least').selectOption('watch');
+  await expect(page).toHaveURL(/severity=watch/);
+  await expect(flights).toContainText('weak-motor.csv');
+  await filters.getByLabel('Review').selectOption('reviewed');
+  await expect(page.getByText('No flights match.')).toBeVisible();
+  await page.getByRole('button', { name: 'Clear filters' }).click();
+  await expect(flights).toContainText('weak-motor.csv');
   await expect(page.getByRole('list', { name: 'Aircraft' })).toContainText('1 flight');
 
   const artifacts = new URL('./artifacts/', import.meta.url).pathname;

@@ -13,11 +13,20 @@ import { FlightFilters } from '../../features/fleet/components/flight-filters';
 import { FlightTable } from '../../features/fleet/components/flight-table';
 import { useActiveTeam } from '../../features/session/active-team';
 import { RequireSession } from '../../features/session/components/require-session';
+import { useMembers } from '../../features/team/api/team-queries';
 import { LocalFlightsPanel } from '../../features/sync/components/local-flights-panel';
 import { can } from '../../lib/permissions';
 import { NoTeam } from './no-team';
 
-const filterKeys = ['aircraftId', 'severity', 'review', 'openComments', 'from', 'to'] as const;
+const filterKeys = [
+  'aircraftId',
+  'pilotId',
+  'severity',
+  'review',
+  'openComments',
+  'from',
+  'to',
+] as const;
 
 /** The list filter lives in the address so a filtered view can be bookmarked and shared. */
 function useFilterParams(): [FlightFilter, (next: FlightFilter) => void] {
@@ -31,6 +40,7 @@ function useFilterParams(): [FlightFilter, (next: FlightFilter) => void] {
     // Anything malformed in a hand-edited address is dropped rather than sent.
     const parsed = FlightListQuery.pick({
       aircraftId: true,
+      pilotId: true,
       severity: true,
       review: true,
       from: true,
@@ -79,7 +89,9 @@ function TeamFleet({
   const awaiting = useAwaitingReview(teamId);
   const [filter, setFilter] = useFilterParams();
   const flights = useFlightList(teamId, filter);
+  const members = useMembers(teamId);
   const aircraftOptions = (aircraft.data?.aircraft ?? []).map((a) => ({ id: a.id, name: a.name }));
+  const pilotOptions = (members.data?.members ?? []).map((m) => ({ id: m.userId, name: m.name }));
   const rows = flights.data?.pages.flatMap((p) => p.flights) ?? [];
 
   return (
@@ -153,7 +165,12 @@ function TeamFleet({
 
         <Panel title="Flights">
           <div className="space-y-4">
-            <FlightFilters filter={filter} aircraft={aircraftOptions} onChange={setFilter} />
+            <FlightFilters
+              filter={filter}
+              aircraft={aircraftOptions}
+              pilots={pilotOptions}
+              onChange={setFilter}
+            />
             {flights.isPending ? (
               <Loading what="flights" />
             ) : flights.isError ? (

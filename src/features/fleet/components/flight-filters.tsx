@@ -15,10 +15,12 @@ const endOfDay = (day: string) => (day ? new Date(`${day}T23:59:59.999`).toISOSt
 export function FlightFilters({
   filter,
   aircraft,
+  pilots,
   onChange,
 }: {
   filter: FlightFilter;
   aircraft: { id: string; name: string }[];
+  pilots: { id: string; name: string }[];
   onChange: (next: FlightFilter) => void;
 }) {
   const set = (patch: Partial<FlightFilter>) => onChange({ ...filter, ...patch });
@@ -35,6 +37,19 @@ export function FlightFilters({
         {aircraft.map((a) => (
           <option key={a.id} value={a.id}>
             {a.name}
+          </option>
+        ))}
+      </SelectField>
+      <SelectField
+        label="Pilot"
+        className="w-40"
+        value={filter.pilotId ?? ''}
+        onChange={(e) => set({ pilotId: e.target.value || undefined })}
+      >
+        <option value="">Anyone</option>
+        {pilots.map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.name}
           </option>
         ))}
       </SelectField>
