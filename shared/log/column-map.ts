@@ -255,7 +255,10 @@ const axisNames: Record<string, readonly string[]> = {
  * Suggests a column map from the words and units in the headers, for a person to confirm.
  * It never applies itself: the reader only uses a map it is given.
  */
-export function proposeColumnMap(headers: string[]): ProposedColumnMap {
+export function proposeColumnMap(
+  headers: string[],
+  sampleRows: string[][] = [],
+): ProposedColumnMap {
   const parsed = headers.map(parseWords);
   const guesses = parsed.map((p) => guessFamily(p.words));
   // Indexed families numbered from 0 in the file (motor0…motor3) become motor1…motor4.
@@ -347,11 +350,58 @@ export function proposeColumnMap(headers: string[]): ProposedColumnMap {
       reason: `the word "${g.clue}" suggests ${channel}${shifted}; ${unitReason}`,
     };
   });
+  entries.forEach((e, i) => {
+    if (e.channel === null || e.unit !== null || sampleRows.length === 0) return;
+    const values = sampleRows.map((r) => Number(r[i])).filter((v) => Number.isFinite(v));
+    const guess = unitFromValues(e.channel, values);
+    if (guess) {
+      e.unit = guess.unit;
+      e.reason = e.reason.replace('no unit in the header: check it', `${guess.why}: check it`);
+    }
+  });
   const mapped = new Set(entries.map((e) => e.channel).filter((c): c is string => c !== null));
   const missing: string[] = [];
   if (!mapped.has('time')) missing.push('time');
   if (!mapped.has('motor1')) missing.push('motor1');
   return { entries, missing };
+}
+
+/**
+ * A unit suggested by the first values of a column whose header names none (common practice
+ * for flight logs: a 1000–2000 µs pulse, a step of hundreds of µs or a few ms, pack voltage in
+ * mV above 100).
+ */
+function unitFromValues(channel: string, values: number[]): { unit: Unit; why: string } | null {
+  if (values.length === 0) return null;
+  const min = Math.min(...values);
+  const max = Math.max(...values);
+  const range = `values ${min}…${max}`;
+  if (/^motor[0-9]+$|^throttle$/.test(channel)) {
+    if (min >= 900 && max <= 2100)
+      return { unit: 'us', why: `${range} look like a 1000–2000 µs pulse` };
+    if (min >= 0 && max <= 1) return { unit: 'frac', why: `${range} look like a 0–1 fraction` };
+    if (min >= 0 && max <= 100) return { unit: '%', why: `${range} look like a percentage` };
+    return null;
+  }
+  if (channel === 'time' && values.length >= 2) {
+    const steps = values
+      .slice(1)
+      .map((v, i) => v - values[i]!)
+      .sort((a, b) => a - b);
+    const step = steps[steps.length >> 1]!;
+    if (!(step > 0)) return null;
+    const unit: Unit = step >= 50 ? 'us' : step >= 0.5 ? 'ms' : 's';
+    return {
+      unit,
+      why: `samples ${step} apart look like ${unit === 'us' ? 'microseconds' : unit === 'ms' ? 'milliseconds' : 'seconds'}`,
+    };
+  }
+  if (channel === 'vbat') {
+    return max > 100
+      ? { unit: 'mV', why: `${range} look like millivolts` }
+      : { unit: 'V', why: `${range} look like volts` };
+  }
+  return null;
 }
 
 /** The confirmed part of a proposal as a column map (entries with a channel and a unit). */

@@ -65,7 +65,7 @@ export function inspectHeader(firstBytes: Uint8Array): HeaderPreview {
     metadata: pre.metadata,
     headerLine: pre.headerLine,
     canonical,
-    proposal: proposeColumnMap(pre.headers),
+    proposal: proposeColumnMap(pre.headers, sampleRows),
     sampleRows,
   };
 }

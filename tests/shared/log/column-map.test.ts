@@ -94,3 +94,33 @@ describe('ColumnMap schema (shared with the server for import presets)', () => {
     expect(r.error?.issues.map((i) => i.message).join(' ')).toMatch(message);
   });
 });
+
+describe('units suggested by the first values', () => {
+  it('fills in units the headers do not state, and says why', () => {
+    const p = proposeColumnMap(
+      ['Stamp', 'Motor 1', 'Motor 2', 'Thr', 'Battery'],
+      [
+        ['1000000', '1012', '48.5', '0.31', '16650'],
+        ['1000250', '1498', '52', '0.35', '16640'],
+        ['1000500', '1990', '55.5', '0.4', '16620'],
+      ],
+    );
+    expect(p.entries.map((e) => e.unit)).toEqual([null, 'us', '%', 'frac', 'mV']);
+    expect(p.entries[1]!.reason).toMatch(/1012…1990 look like a 1000–2000 µs pulse: check it/);
+    // "Stamp" is not a time word, so it gets no channel and no unit.
+    expect(p.entries[0]!.channel).toBeNull();
+    const t = proposeColumnMap(['elapsed'], [['0'], ['4'], ['8']]);
+    expect(t.entries[0]).toMatchObject({ channel: 'time', unit: 'ms' });
+  });
+
+  it('leaves the unit open when values say nothing', () => {
+    const p = proposeColumnMap(
+      ['gyro x', 'Motor 1'],
+      [
+        ['12.5', '-3'],
+        ['13', '4000'],
+      ],
+    );
+    expect(p.entries.map((e) => e.unit)).toEqual([null, null]);
+  });
+});
