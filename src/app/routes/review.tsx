@@ -55,7 +55,7 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
   const airframe = aircraft.data?.airframe ?? assumedAirframe(report.motorCount);
   const role = me?.teams.find((t) => t.id === flight.teamId)?.role ?? null;
 
-  const onServer = signedIn && flight.teamId !== null;
+  const onServer = signedIn && flight.teamId !== null && flight.syncedToTeam;
   const comments = useQuery({ ...commentQueries.flight(flight.id), enabled: onServer });
   const pins = useMemo(
     () =>
@@ -149,7 +149,8 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
         <CommentsRail
           ref={rail}
           flightId={flight.id}
-          teamId={flight.teamId}
+          teamId={onServer ? flight.teamId : null}
+          waitingForSync={signedIn && flight.teamId !== null && !flight.syncedToTeam}
           me={me ? { id: me.id, name: me.name } : null}
           role={role}
           pilotId={flight.pilotId ?? (flight.source === 'local' ? (me?.id ?? null) : null)}

@@ -181,7 +181,16 @@ export function TimeChart(props: TimeChartProps) {
       dataZoom: [
         { type: 'inside', xAxisIndex: 0, filterMode: 'none' },
         ...(slider
-          ? [{ type: 'slider', xAxisIndex: 0, height: 18, bottom: 6, filterMode: 'none' }]
+          ? [
+              {
+                type: 'slider',
+                xAxisIndex: 0,
+                height: 18,
+                bottom: 6,
+                filterMode: 'none',
+                showDataShadow: false,
+              },
+            ]
           : []),
       ],
       series: [

@@ -22,6 +22,8 @@ export interface CommentsRailProps {
   flightId: string;
   /** The flight's team, or null while it lives only on this device. */
   teamId: string | null;
+  /** The flight has a team but the sync has not sent it yet. */
+  waitingForSync?: boolean;
   me: UserRef | null;
   role: Role | null;
   /** Who flew it: a pilot resolves threads on their own flights. */
@@ -36,7 +38,18 @@ export interface CommentsRailProps {
 /** Comments pinned to moments of the flight; the role decides what can be done here. */
 export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
   function CommentsRail(props, ref) {
-    const { flightId, teamId, me, role, pilotId, cursorT, onSeek, selectedId, onSelect } = props;
+    const {
+      flightId,
+      teamId,
+      waitingForSync = false,
+      me,
+      role,
+      pilotId,
+      cursorT,
+      onSeek,
+      selectedId,
+      onSelect,
+    } = props;
     const rights = commentRights(role, me?.id ?? null, pilotId);
     const onServer = teamId !== null && me !== null;
     const comments = useQuery({ ...commentQueries.flight(flightId), enabled: onServer });
@@ -95,7 +108,9 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
           <p className="text-sm text-ink-soft">
             {me === null
               ? 'Sign in to comment. This flight is kept on this device and syncs to your team when you do.'
-              : 'This flight has no team yet; comments open once it is synced to one.'}
+              : waitingForSync
+                ? 'Comments open once this flight has reached your team; it is sent as soon as you are online.'
+                : 'This flight has no team yet; comments open once it is synced to one.'}
           </p>
         )}
         {onServer && rights.canComment && (

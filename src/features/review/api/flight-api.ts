@@ -25,6 +25,8 @@ export interface ReviewFlight {
   recordedAt: string | null;
   /** Raw log kept on this device, to re-read for the filter bench after a reload. */
   file: Blob | null;
+  /** The team server has the flight (comments live there). */
+  syncedToTeam: boolean;
 }
 
 export class FlightNotFoundError extends Error {
@@ -58,6 +60,7 @@ export async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
       pilotId: null,
       recordedAt: local.recordedAt ?? null,
       file: local.file,
+      syncedToTeam: local.syncState === 'synced' || local.summarySynced === true,
     };
   }
   try {
@@ -78,6 +81,7 @@ export async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
       pilotId: stored.pilot.id,
       recordedAt: stored.recordedAt,
       file: null,
+      syncedToTeam: true,
     };
   } catch (e) {
     if (e instanceof ApiError && (e.status === 404 || e.status === 401 || e.status === 403)) {
@@ -128,6 +132,11 @@ export const reviewQueries = {
       queryKey: reviewKeys.flight(id),
       queryFn: () => fetchReviewFlight(id),
       staleTime: Infinity,
+      // A flight waiting for the sync is looked at again, so comments open once it has landed.
+      refetchInterval: (q) => {
+        const f = q.state.data;
+        return f && f.source === 'local' && f.teamId !== null && !f.syncedToTeam ? 5000 : false;
+      },
       retry: (n, e) => !(e instanceof FlightNotFoundError) && n < 1,
     }),
   aircraft: (id: string) =>
