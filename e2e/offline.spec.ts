@@ -42,6 +42,11 @@ test('a log imported offline is kept on the device and synced when the network i
   await page.reload();
   await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
   await expect(page.getByTestId('sync-state')).toHaveText('Offline · 1 flight not synced');
+  // The team's aircraft are remembered, so the next log can be filed without a network too.
+  await page.goto('/import');
+  await expect(
+    page.getByLabel('Aircraft').locator('option', { hasText: 'Kite · 4 motors' }),
+  ).toHaveCount(1);
 
   // Back online: the sync runner sends it without anyone asking.
   await context.setOffline(false);
