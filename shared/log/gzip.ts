@@ -74,12 +74,12 @@ export async function* gunzip(
   let stop = false;
   const pump = (async () => {
     try {
-      await writer.write(first);
+      await writer.write(first.slice());
       for (;;) {
         if (stop) break;
         const next = await rest.next();
         if (next.done) break;
-        await writer.write(next.value);
+        await writer.write(next.value.slice()); // the source may reuse its buffer
       }
       if (!stop) await writer.close();
     } catch (err) {

@@ -54,7 +54,8 @@ export function parseLog(
 
 /**
  * Parses a log from a stream (a File's `stream()`, a Node file stream), plain or gzip
- * (detected by its magic bytes), without holding the whole file.
+ * (detected by its magic bytes), without holding the whole file. No chunk is kept once the
+ * next one is asked for, so a source may read every chunk into the same buffer.
  */
 export async function parseLogStream(
   stream: ByteStream | AsyncIterable<Uint8Array>,
@@ -74,7 +75,8 @@ export async function parseLogStream(
   while (head.length < 2) {
     const next = await counted.next();
     if (next.done) break;
-    head = head.length === 0 ? next.value : concat(head, next.value);
+    // Copied: the caller may reuse its read buffer for the next chunk.
+    head = head.length === 0 ? next.value.slice() : concat(head, next.value);
   }
   const gz = isGzip(head);
   if (gz) delete readOptions.expectedBytes; // the file size says little about the CSV inside

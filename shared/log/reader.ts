@@ -30,7 +30,8 @@ const POW10 = Float64Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
 /**
  * Streaming CSV → typed columns. Push byte chunks in any sizes (a row, a number or a CRLF may
  * straddle chunks), then `finish()`. Numbers are decoded straight from the bytes; only the
- * preamble and error messages ever become strings.
+ * preamble and error messages ever become strings. `push` copies what it keeps (an unfinished
+ * line), so the caller may reuse the chunk's buffer as soon as it returns.
  */
 export class LogReader {
   private bytes = 0;

@@ -99,3 +99,28 @@ describe('parseLogStream', () => {
     expect(err.code).toBe('empty-file');
   });
 });
+
+describe('a source that reuses one read buffer', () => {
+  async function* reusing(bytes: Uint8Array, size: number) {
+    const buf = new Uint8Array(size);
+    for (let i = 0; i < bytes.length; i += size) {
+      const n = Math.min(size, bytes.length - i);
+      buf.set(bytes.subarray(i, i + n));
+      yield buf.subarray(0, n);
+      buf.fill(0x2c); // scribble: nothing read earlier may depend on these bytes
+    }
+  }
+  const text = log(700);
+  const expected = parseLog(enc(text));
+
+  it.each([1, 3, 64, 1000])(
+    'reads the same columns from %i-byte chunks, plain and gzip',
+    async (size) => {
+      const plain = await parseLogStream(reusing(enc(text), size));
+      expect(Array.from(plain.columns.vbat!)).toEqual(Array.from(expected.columns.vbat!));
+      expect(plain.metadata).toEqual(expected.metadata);
+      const gz = await parseLogStream(reusing(new Uint8Array(gzipSync(enc(text))), size));
+      expect(Array.from(gz.columns.time!)).toEqual(Array.from(expected.columns.time!));
+    },
+  );
+});
