@@ -35,22 +35,32 @@ export function hoverMeans(
     let s = 0;
     let sp = 0;
     let sb = 0;
-    let sr = 0;
     let n = 0;
-    let nr = 0;
-    const r = rpms?.[i];
+    // Separate tight loops per quantity: the common case (γ = 2, no bench run) is two adds and
+    // a multiply per sample.
     for (const [a, b] of hover) {
       for (let k = a; k < b; k++) {
         const v = m[k]!;
         // Missing samples (NaN) are skipped, not averaged in.
-        if (v === v) {
-          const u = v > 0 ? v : 0;
-          s += u;
-          sp += gamma === 2 ? u * u : u ** gamma;
-          if (bench) sb += bench.thrust(u);
-          n++;
+        if (v !== v) continue;
+        const u = v > 0 ? v : 0;
+        s += u;
+        sp += gamma === 2 ? u * u : u ** gamma;
+        n++;
+      }
+      if (bench) {
+        for (let k = a; k < b; k++) {
+          const v = m[k]!;
+          if (v === v) sb += bench.thrust(v > 0 ? v : 0);
         }
-        if (r) {
+      }
+    }
+    const r = rpms?.[i];
+    let sr = 0;
+    let nr = 0;
+    if (r) {
+      for (const [a, b] of hover) {
+        for (let k = a; k < b; k++) {
           const w = r[k]!;
           if (w === w) {
             sr += w * w;

@@ -55,15 +55,28 @@ export function analyseHeadroom(
     }
     open[m] = null;
   };
+  const floors = Float64Array.from(motors, (_, m) => floor[m] ?? 0);
+  let floorTop = -Infinity;
+  for (let m = 0; m < n; m++) floorTop = Math.max(floorTop, floors[m]! + 0.002);
   for (const [a, b] of armed) {
     for (let i = a; i < b; i++) {
       let any = false;
       let mean = 0;
-      for (let m = 0; m < n; m++) mean += motors[m]![i]!;
+      let hi = -Infinity;
+      let lo = Infinity;
+      for (let m = 0; m < n; m++) {
+        const u = motors[m]![i]!;
+        mean += u;
+        if (u > hi) hi = u;
+        if (u < lo) lo = u;
+      }
+      // Most samples are nowhere near either limit: one look at the extremes settles them.
+      // (A missing value fails both tests, as it does below.)
+      if (!(hi >= level) && !(lo <= floorTop)) continue;
       mean /= n || 1;
       for (let m = 0; m < n; m++) {
         const u = motors[m]![i]!;
-        const f = floor[m] ?? 0;
+        const f = floors[m]!;
         const sat = u >= level || (u <= f + 0.002 && mean > f + 0.15);
         if (sat) {
           any = true;

@@ -40,6 +40,15 @@ export class RealFft {
     }
   }
 
+  /**
+   * The transform of a real input into the instance's scratch buffer: interleaved re/im, bins
+   * 0…size/2 valid. Overwritten by the next call; copy what you keep.
+   */
+  transformInPlace(input: Float64Array): Float64Array {
+    this.core.realTransform(this.out, input);
+    return this.out;
+  }
+
   /** Complex spectrum of a real input, bins 0…size/2, as separate re and im arrays. */
   spectrum(input: Float64Array): { re: Float64Array; im: Float64Array } {
     this.core.realTransform(this.out, input);

@@ -46,12 +46,39 @@ export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): 
   const acc = new Float64Array(bins);
   const seg = new Float64Array(n);
   const pow = new Float64Array(bins);
+  const scale = new Float64Array(bins);
+  for (let k = 0; k < bins; k++) scale[k] = k === 0 || k === half ? norm : 2 * norm;
   const detrend = (options.detrend ?? 'constant') === 'constant';
+  // Removing the mean before windowing only changes the bins where the window's own DFT is
+  // non-zero (bins 0 and 1 for a periodic Hann, REFERENCES.md §1: [N/2, −N/4, 0, …]), so the
+  // mean comes off those bins after the transform instead of off every sample before it.
+  const wBins: number[] = [];
+  const wRe: number[] = [];
+  const wIm: number[] = [];
+  if (detrend) {
+    for (let k = 0; k < bins; k++) {
+      let re = 0;
+      let im = 0;
+      for (let i = 0; i < n; i++) {
+        const a = (-2 * Math.PI * k * i) / n;
+        re += w[i]! * Math.cos(a);
+        im += w[i]! * Math.sin(a);
+      }
+      if (Math.hypot(re, im) > 1e-9 * fig.sum) {
+        wBins.push(k);
+        wRe.push(re);
+        wIm.push(im);
+      }
+      // Past the main lobe a window this smooth has nothing left worth correcting.
+      if (k > 8 && wBins.length && k > wBins[wBins.length - 1]! + 8) break;
+    }
+  }
   const ranges = options.ranges ?? [[0, x.length] as const];
+  const onSegment = options.onSegment;
   let count = 0;
   for (const [r0, r1] of ranges) {
     for (let s = Math.max(0, r0); s + n <= Math.min(r1, x.length); s += step) {
-      // One read of the signal: window it and sum it; the mean comes off the windowed copy.
+      // One read of the signal: window it and sum it.
       let sum = 0;
       for (let i = 0; i < n; i++) {
         const v = x[s + i]!;
@@ -60,25 +87,36 @@ export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): 
       }
       // A segment with a missing value (NaN) would poison the average: leave it out.
       if (!Number.isFinite(sum)) continue;
+      const out = fft.transformInPlace(seg);
       if (detrend) {
         const mean = sum / n;
-        for (let i = 0; i < n; i++) seg[i]! -= mean * w[i]!;
+        for (let j = 0; j < wBins.length; j++) {
+          const k = wBins[j]!;
+          out[2 * k]! -= mean * wRe[j]!;
+          out[2 * k + 1]! -= mean * wIm[j]!;
+        }
       }
-      fft.powerSpectrum(seg, pow);
-      if (options.onSegment) {
-        for (let k = 0; k < bins; k++) pow[k]! *= k === 0 || k === half ? norm : 2 * norm;
-        for (let k = 0; k < bins; k++) acc[k]! += pow[k]!;
-        options.onSegment(s, pow);
+      if (onSegment) {
+        for (let k = 0; k < bins; k++) {
+          const re = out[2 * k]!;
+          const im = out[2 * k + 1]!;
+          const p = (re * re + im * im) * scale[k]!;
+          pow[k] = p;
+          acc[k]! += p;
+        }
+        onSegment(s, pow);
       } else {
-        for (let k = 0; k < bins; k++) acc[k]! += pow[k]!;
+        for (let k = 0; k < bins; k++) {
+          const re = out[2 * k]!;
+          const im = out[2 * k + 1]!;
+          acc[k]! += re * re + im * im;
+        }
       }
       count++;
     }
   }
   // Scale once at the end when segments were summed raw.
-  if (!options.onSegment) {
-    for (let k = 0; k < bins; k++) acc[k]! *= k === 0 || k === half ? norm : 2 * norm;
-  }
+  if (!onSegment) for (let k = 0; k < bins; k++) acc[k]! *= scale[k]!;
   if (count > 0) for (let k = 0; k < bins; k++) acc[k]! /= count;
   const hz = new Float64Array(bins);
   const df = fs / n;
