@@ -4,6 +4,8 @@ import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
+import { presetAirframe } from '../shared/airframe/presets';
+import { PASSWORD, uniqueEmail } from './helpers/accounts';
 import { writeScenarioCsv } from './fixtures/synth-log';
 
 /** The same flight written with headers of another layout: the column-map step must open. */
@@ -80,4 +82,46 @@ test('cancelling an import keeps nothing and offers to try again', async ({ page
   await expect(row).toContainText('Cancelled; nothing was kept.');
   await expect(row.getByRole('button', { name: 'Try again' })).toBeVisible();
   await expect(page).toHaveURL(/\/import$/);
+});
+
+test('a flight imported as an unknown quad is filed under its aircraft later, re-analysed and synced', async ({
+  browser,
+}) => {
+  test.setTimeout(180_000);
+  const context = await browser.newContext();
+  const email = uniqueEmail('pilot');
+  expect(
+    (
+      await context.request.post('/api/auth/sign-up', {
+        data: { name: 'Rosa Kite', email, password: PASSWORD },
+      })
+    ).ok(),
+  ).toBe(true);
+  const team = (await (
+    await context.request.post('/api/teams', { data: { name: 'Heron crew' } })
+  ).json()) as { id: string };
+  const res = await context.request.post(`/api/teams/${team.id}/aircraft`, {
+    data: { name: 'Heron', airframe: presetAirframe('wide-front-x', { name: 'Heron wide-front' }) },
+  });
+  expect(res.ok(), await res.text()).toBe(true);
+
+  const page = await context.newPage();
+  await page.goto('/import');
+  await page
+    .getByLabel('Flight logs')
+    .setInputFiles(writeScenarioCsv('wide-front-healthy', { seconds: 20 }));
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  const flightId = new URL(page.url()).pathname.split('/')[2]!;
+  await expect(page.getByText('(assumed airframe)')).toBeVisible();
+
+  await page.getByLabel('Aircraft').selectOption({ label: 'Heron · 4 motors' });
+  await page.getByRole('button', { name: 'File under this aircraft' }).click();
+  await expect(page.getByText('(assumed airframe)')).toHaveCount(0, { timeout: 60_000 });
+  await expect(page.getByRole('img', { name: /Top view of Heron wide-front/ })).toBeVisible();
+  await expect
+    .poll(async () => (await context.request.get(`/api/flights/${flightId}`)).status(), {
+      timeout: 60_000,
+    })
+    .toBe(200);
+  await context.close();
 });

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { reviewQueries, type ReviewFlight } from '../../features/review/api/flight-api';
 import { ReviewPage } from '../../features/review/components/review-page';
 import { assumedAirframe } from '../../features/review/model/assumed-airframe';
@@ -16,6 +16,8 @@ import {
   type CompareCandidate,
 } from '../../features/compare/components/compare-panel';
 import { useMe } from '../../features/session/api/session-queries';
+import { useActiveTeam } from '../../features/session/active-team';
+import { AssignAircraft } from '../../features/import/components/assign-aircraft';
 import { listLocalFlights } from '../../lib/local-db';
 
 export function ReviewRoute() {
@@ -123,15 +125,33 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
     enabled: sectionId === 'compare' && vs !== null,
   });
 
-  const status =
-    flight.source === 'local' ? (
-      <p className="text-xs text-ink-faint">
-        kept on this device
-        {flight.teamId ? ' · syncs to the team when online' : ' · not in a team yet'}
-      </p>
-    ) : (
-      <p className="text-xs text-ink-faint">stored by the team</p>
-    );
+  const queryClient = useQueryClient();
+  const { team } = useActiveTeam();
+  const canFile =
+    signedIn &&
+    flight.source === 'local' &&
+    flight.aircraftId === null &&
+    team !== undefined &&
+    team.role !== 'viewer' &&
+    team.role !== 'coach';
+  const status = canFile ? (
+    <AssignAircraft
+      flightId={flight.id}
+      file={flight.file}
+      fileName={flight.fileName}
+      teamId={flight.teamId ?? team!.id}
+      onDone={() =>
+        void queryClient.invalidateQueries({ queryKey: reviewQueries.flight(flight.id).queryKey })
+      }
+    />
+  ) : flight.source === 'local' ? (
+    <p className="text-xs text-ink-faint">
+      kept on this device
+      {flight.teamId ? ' · syncs to the team when online' : ' · not in a team yet'}
+    </p>
+  ) : (
+    <p className="text-xs text-ink-faint">stored by the team</p>
+  );
 
   return (
     <ReviewPage

@@ -4,7 +4,6 @@ import { useDropzone } from 'react-dropzone';
 import { useQuery } from '@tanstack/react-query';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
 import type { ColumnMap } from '../../../../shared/log/column-map';
-import { defaultQuadX } from '../../../../shared/airframe/presets';
 import { parseWorker } from '../../../lib/parse-worker';
 import { isLogFile, jobsReducer, nextQueued, type ImportJob } from '../model/import-jobs';
 import { runImport } from '../model/run-import';
@@ -78,7 +77,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
       ...(job.columnMap ? { columnMap: job.columnMap } : {}),
       ...(job.poles !== undefined ? { poles: job.poles } : {}),
       target: {
-        airframe: aircraft?.airframe ?? defaultQuadX,
+        ...(aircraft ? { airframe: aircraft.airframe } : {}),
         ...(teamId ? { teamId } : {}),
         ...(aircraft ? { aircraftId: aircraft.id } : {}),
       },

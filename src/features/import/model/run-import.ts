@@ -9,14 +9,19 @@ import { saveLocalFlight } from '../../../lib/local-db';
 import type { JobStatus } from './import-jobs';
 
 export interface ImportTarget {
-  airframe: Airframe;
+  /** The aircraft's airframe; without one the engine assumes a quad X and says so in the report. */
+  airframe?: Airframe;
   teamId?: string;
   aircraftId?: string;
 }
 
 export interface ImportRequest {
   jobId: string;
-  file: File;
+  file: Blob;
+  /** Name to keep with the flight (a Blob from storage has none of its own). */
+  fileName?: string;
+  /** Re-analyse an existing flight under its own id (e.g. once its aircraft is known). */
+  flightId?: string;
   columnMap?: ColumnMap;
   poles?: number;
   target: ImportTarget;
@@ -50,7 +55,7 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   onStatus({ kind: 'reading', bytes: 0, rows: 0 });
   const options: { columnMap?: ColumnMap; poles?: number } = {};
   if (req.columnMap) options.columnMap = req.columnMap;
-  const poles = req.poles ?? target.airframe.poles;
+  const poles = req.poles ?? target.airframe?.poles;
   if (poles !== undefined) options.poles = poles;
 
   let result;
@@ -100,12 +105,14 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
 
   const log = result.log;
   onStatus({ kind: 'analysing', rows: log.rows });
-  const flightId = crypto.randomUUID();
+  const flightId = req.flightId ?? crypto.randomUUID();
   let analysed;
   try {
-    analysed = await analysisWorker().analyze(flightId, transfer(log, columnBuffers(log)), {
-      airframe: target.airframe,
-    });
+    analysed = await analysisWorker().analyze(
+      flightId,
+      transfer(log, columnBuffers(log)),
+      target.airframe ? { airframe: target.airframe } : {},
+    );
   } catch (e) {
     return failed('analysis', e);
   }
@@ -117,7 +124,7 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   try {
     await saveLocalFlight({
       id: flightId,
-      fileName: file.name,
+      fileName: req.fileName ?? (file instanceof File ? file.name : 'flight.csv'),
       file,
       report,
       detail,
