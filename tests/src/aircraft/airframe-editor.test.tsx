@@ -74,6 +74,30 @@ describe('airframe editor', () => {
     expect(typeof value.airframe.massG).toBe('number');
   });
 
+  it('moves hover share to the motors nearer a design CG and saves the CG with the airframe', async () => {
+    const user = userEvent.setup();
+    const onSubmit = vi.fn();
+    render(<AirframeEditor initial={newAirframeForm('Heron')} onSubmit={onSubmit} />);
+    await user.type(screen.getByLabelText('Design CG x forward (mm)'), '10');
+    await user.click(screen.getByRole('button', { name: 'Save airframe' }));
+    expect(onSubmit).not.toHaveBeenCalled();
+    expect(screen.getByText(/give both CG coordinates/)).toBeTruthy();
+
+    await user.type(screen.getByLabelText('Design CG y right (mm)'), '0');
+    // Moments about the CG (lever rule): front pair at x = 77.78 mm, rear at −77.78 mm, CG 10 mm
+    // forward → front/rear = (77.78 + 10) / (77.78 − 10); each front motor carries
+    // 87.78 / (2 · 155.56) = 28.2 %, each rear one 21.8 %.
+    const rows = within(screen.getByRole('table', { name: 'Motors' }))
+      .getAllByRole('row')
+      .slice(1);
+    expect(within(rows[0]!).getByText('28.2 %')).toBeTruthy();
+    expect(within(rows[1]!).getByText('21.8 %')).toBeTruthy();
+    expect(screen.getByRole('group', { name: 'Design CG at x 10 mm, y 0 mm' })).toBeTruthy();
+
+    await user.click(screen.getByRole('button', { name: 'Save airframe' }));
+    expect(onSubmit.mock.calls[0]![0].airframe.cg).toEqual({ x: 10, y: 0 });
+  });
+
   it('warns when prop discs overlap', async () => {
     const user = userEvent.setup();
     render(<AirframeEditor initial={newAirframeForm('Kite')} onSubmit={vi.fn()} />);

@@ -61,6 +61,10 @@ export function AirframeEditor({
   const motors = useFieldArray({ control, name: 'airframe.motors' });
   const [preset, setPreset] = useState<LayoutPreset>('quad-x');
   const [armMm, setArmMm] = useState<string>(String(layoutPresets['quad-x'].defaults.armMm));
+  // The design CG is optional as a pair: both coordinates or neither (the frame centre).
+  const [cgX, setCgX] = useState(initial.airframe.cg ? String(initial.airframe.cg.x) : '');
+  const [cgY, setCgY] = useState(initial.airframe.cg ? String(initial.airframe.cg.y) : '');
+  const cg = readCg(cgX, cgY);
 
   const applyPreset = () => {
     const info = layoutPresets[preset];
@@ -85,7 +89,11 @@ export function AirframeEditor({
     <form
       noValidate
       aria-label="Airframe"
-      onSubmit={handleSubmit(onSubmit)}
+      onSubmit={handleSubmit((value) => {
+        if (typeof cg === 'string') return;
+        const { cg: _old, ...airframe } = value.airframe;
+        onSubmit({ ...value, airframe: cg ? { ...airframe, cg } : airframe });
+      })}
       className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]"
     >
       <fieldset disabled={readOnly} className="min-w-0 space-y-5">
@@ -144,6 +152,7 @@ export function AirframeEditor({
           readOnly={readOnly}
           onMove={(from, to) => motors.move(from, to)}
           onRemove={(i) => motors.remove(i)}
+          cg={typeof cg === 'string' ? undefined : cg}
         />
         {motorListError && <Alert tone="error">{motorListError}</Alert>}
         {!readOnly && (
@@ -217,6 +226,24 @@ export function AirframeEditor({
             {...register('airframe.thrustExponent', num)}
           />
         </div>
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          <TextField
+            label="Design CG x forward (mm)"
+            numeric
+            inputMode="decimal"
+            value={cgX}
+            onChange={(e) => setCgX(e.target.value)}
+            error={typeof cg === 'string' ? cg : undefined}
+            hint="Empty: the frame centre"
+          />
+          <TextField
+            label="Design CG y right (mm)"
+            numeric
+            inputMode="decimal"
+            value={cgY}
+            onChange={(e) => setCgY(e.target.value)}
+          />
+        </div>
         <Caution title="ESC and battery limits">
           Enter the ESC's continuous rating per channel, not the burst figure, and the pack's real
           cell count. Headroom findings are judged against these numbers; they do not replace the
@@ -229,7 +256,7 @@ export function AirframeEditor({
           </Button>
         )}
       </fieldset>
-      <LivePreview control={control} />
+      <LivePreview control={control} cg={typeof cg === 'string' ? undefined : cg} />
     </form>
   );
 }
@@ -242,6 +269,7 @@ function MotorTable({
   readOnly,
   onMove,
   onRemove,
+  cg,
 }: {
   control: Control<AirframeForm>;
   register: UseFormRegister<AirframeForm>;
@@ -250,9 +278,12 @@ function MotorTable({
   readOnly: boolean;
   onMove: (from: number, to: number) => void;
   onRemove: (index: number) => void;
+  cg: { x: number; y: number } | undefined;
 }) {
   const airframe = useWatch({ control, name: 'airframe' });
-  const shares = sharesOrNull(airframe);
+  // Expected shares are about the design CG: an offset CG loads the motors nearer to it.
+  const { cg: _formCg, ...rest } = airframe;
+  const shares = sharesOrNull(cg ? { ...rest, cg } : rest);
   return (
     <table className="w-full text-sm" aria-label="Motors">
       <thead>
@@ -359,7 +390,23 @@ function MotorTable({
   );
 }
 
-function LivePreview({ control }: { control: Control<AirframeForm> }) {
+/** The CG pair from its two inputs: a point, undefined for neither, or a message. */
+function readCg(x: string, y: string): { x: number; y: number } | undefined | string {
+  if (x.trim() === '' && y.trim() === '') return undefined;
+  const nx = Number(x.replace(',', '.'));
+  const ny = Number(y.replace(',', '.'));
+  if (x.trim() === '' || y.trim() === '' || !Number.isFinite(nx) || !Number.isFinite(ny))
+    return 'give both CG coordinates in mm, or neither for the frame centre';
+  return { x: nx, y: ny };
+}
+
+function LivePreview({
+  control,
+  cg,
+}: {
+  control: Control<AirframeForm>;
+  cg: { x: number; y: number } | undefined;
+}) {
   const airframe = useWatch({ control, name: 'airframe' });
   const motors = (airframe.motors ?? []).map((m) => ({
     x: Number(m?.x),
@@ -373,7 +420,7 @@ function LivePreview({ control }: { control: Control<AirframeForm> }) {
   const cw = motors.filter((m) => m.spin === 'cw').length;
   return (
     <aside className="space-y-2 lg:sticky lg:top-4 lg:self-start">
-      <AirframeTopView motors={motors} propDiameterIn={diameter} cg={airframe.cg} />
+      <AirframeTopView motors={motors} propDiameterIn={diameter} cg={cg} />
       <p className="text-xs text-ink-soft">
         <span className="num">{motors.length}</span> motors · <span className="num">{cw}</span>{' '}
         clockwise · <span className="num">{motors.length - cw}</span> counter-clockwise
