@@ -6,7 +6,9 @@ import importX from 'eslint-plugin-import-x';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', 'data', 'test-results', 'playwright-report', 'e2e/artifacts'] },
+  {
+    ignores: ['dist', 'node_modules', 'data', 'test-results', 'playwright-report', 'e2e/artifacts'],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...pluginQuery.configs['flat/recommended'],
@@ -16,7 +18,10 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks, 'import-x': importX },
     rules: {
       ...reactHooks.configs.recommended.rules,
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       '@typescript-eslint/no-explicit-any': 'error',
       // One direction for imports: shared depends on nothing of ours; src, server and workers
       // may use shared; src takes only types from workers and nothing from server.
@@ -24,8 +29,16 @@ export default tseslint.config(
         'error',
         {
           zones: [
-            { target: './shared', from: ['./src', './server', './workers'], message: 'shared/ must stay runtime-neutral.' },
-            { target: './src', from: './server', message: 'The client talks to the server over HTTP only.' },
+            {
+              target: './shared',
+              from: ['./src', './server', './workers'],
+              message: 'shared/ must stay runtime-neutral.',
+            },
+            {
+              target: './src',
+              from: './server',
+              message: 'The client talks to the server over HTTP only.',
+            },
             { target: './server', from: ['./src', './workers'] },
             { target: './workers', from: ['./src', './server'] },
           ],
@@ -38,7 +51,15 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: ['**/workers/*'], allowTypeImports: true, message: 'Import only types from workers; create workers through src/lib.' }] },
+        {
+          patterns: [
+            {
+              group: ['**/workers/*'],
+              allowTypeImports: true,
+              message: 'Import only types from workers; create workers through src/lib.',
+            },
+          ],
+        },
       ],
     },
   },

@@ -14,7 +14,9 @@ const json = args.includes('--json');
 const names = args.filter((a) => !a.startsWith('--'));
 const unknown = names.filter((n) => !(n in benches));
 if (unknown.length > 0) {
-  console.error(`Unknown benchmark: ${unknown.join(', ')}. Known: ${Object.keys(benches).join(', ') || 'none yet'}.`);
+  console.error(
+    `Unknown benchmark: ${unknown.join(', ')}. Known: ${Object.keys(benches).join(', ') || 'none yet'}.`,
+  );
   process.exit(1);
 }
 const chosen = names.length > 0 ? names : Object.keys(benches);

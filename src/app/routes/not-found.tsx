@@ -5,7 +5,10 @@ export function NotFoundRoute() {
     <div className="py-16 text-center">
       <h1 className="text-xl font-semibold text-slate-brand">Nothing here</h1>
       <p className="mt-2 text-sm text-ink-soft">
-        That page does not exist. <Link className="text-accent underline" to="/">Back to the fleet</Link>
+        That page does not exist.{' '}
+        <Link className="text-accent underline" to="/">
+          Back to the fleet
+        </Link>
       </p>
     </div>
   );
