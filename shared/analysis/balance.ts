@@ -17,6 +17,52 @@ export interface HoverMeans {
 }
 
 /**
+ * Sum, sum of output^γ and count of a column's present samples over the ranges, into `out`.
+ * A top-level function with indexed loops: V8 keeps the running sums unboxed here, where a
+ * closure with destructured range loops allocated a number per sample (measured).
+ */
+function outputSums(col: Column, ranges: Ranges, gamma: number, out: Float64Array): void {
+  let s = 0;
+  let sp = 0;
+  let n = 0;
+  for (let r = 0; r < ranges.length; r++) {
+    const a = ranges[r]![0];
+    const b = ranges[r]![1];
+    for (let k = a; k < b; k++) {
+      const v = col[k]!;
+      // Missing samples (NaN) are skipped, not averaged in.
+      if (v !== v) continue;
+      const u = v > 0 ? v : 0;
+      s += u;
+      sp += gamma === 2 ? u * u : u ** gamma;
+      n++;
+    }
+  }
+  out[0] = s;
+  out[1] = sp;
+  out[2] = n;
+}
+
+/** Sum of squares and count of a column's present samples over the ranges, into `out`. */
+function squareSums(col: Column, ranges: Ranges, out: Float64Array): void {
+  let s = 0;
+  let n = 0;
+  for (let r = 0; r < ranges.length; r++) {
+    const a = ranges[r]![0];
+    const b = ranges[r]![1];
+    for (let k = a; k < b; k++) {
+      const w = col[k]!;
+      if (w === w) {
+        s += w * w;
+        n++;
+      }
+    }
+  }
+  out[0] = s;
+  out[1] = n;
+}
+
+/**
  * Per-motor hover means (γ = the airframe's thrust exponent, default 2; `bench` adds the mean
  * thrust through a bench-run curve, g).
  */
@@ -31,49 +77,29 @@ export function hoverMeans(
   const outputPow: number[] = [];
   const rpmSq: number[] | null = rpms ? [] : null;
   const benchThrust: number[] = [];
-  motors.forEach((m, i) => {
-    let s = 0;
-    let sp = 0;
-    let sb = 0;
-    let n = 0;
-    // Separate tight loops per quantity: the common case (γ = 2, no bench run) is two adds and
-    // a multiply per sample.
-    for (const [a, b] of hover) {
-      for (let k = a; k < b; k++) {
-        const v = m[k]!;
-        // Missing samples (NaN) are skipped, not averaged in.
-        if (v !== v) continue;
-        const u = v > 0 ? v : 0;
-        s += u;
-        sp += gamma === 2 ? u * u : u ** gamma;
-        n++;
-      }
-      if (bench) {
-        for (let k = a; k < b; k++) {
+  const sums = new Float64Array(3);
+  for (let i = 0; i < motors.length; i++) {
+    const m = motors[i]!;
+    outputSums(m, hover, gamma, sums);
+    const n = sums[2]!;
+    output.push(n ? sums[0]! / n : NaN);
+    outputPow.push(n ? sums[1]! / n : NaN);
+    if (bench) {
+      let sb = 0;
+      for (let r = 0; r < hover.length; r++) {
+        for (let k = hover[r]![0]; k < hover[r]![1]; k++) {
           const v = m[k]!;
           if (v === v) sb += bench.thrust(v > 0 ? v : 0);
         }
       }
+      benchThrust.push(n ? sb / n : NaN);
     }
     const r = rpms?.[i];
-    let sr = 0;
-    let nr = 0;
-    if (r) {
-      for (const [a, b] of hover) {
-        for (let k = a; k < b; k++) {
-          const w = r[k]!;
-          if (w === w) {
-            sr += w * w;
-            nr++;
-          }
-        }
-      }
+    if (r && rpmSq) {
+      squareSums(r, hover, sums);
+      rpmSq.push(sums[1]! ? sums[0]! / sums[1]! : NaN);
     }
-    output.push(n ? s / n : NaN);
-    outputPow.push(n ? sp / n : NaN);
-    benchThrust.push(n ? sb / n : NaN);
-    rpmSq?.push(nr ? sr / nr : NaN);
-  });
+  }
   return { output, outputPow, rpmSq, ...(bench ? { benchThrust } : {}) };
 }
 

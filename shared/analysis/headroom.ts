@@ -58,7 +58,9 @@ export function analyseHeadroom(
   const floors = Float64Array.from(motors, (_, m) => floor[m] ?? 0);
   let floorTop = -Infinity;
   for (let m = 0; m < n; m++) floorTop = Math.max(floorTop, floors[m]! + 0.002);
-  for (const [a, b] of armed) {
+  for (let ri = 0; ri < armed.length; ri++) {
+    const a = armed[ri]![0];
+    const b = armed[ri]![1];
     for (let i = a; i < b; i++) {
       let any = false;
       let mean = 0;
@@ -106,7 +108,9 @@ export function analyseHeadroom(
     const block = Math.max(1, Math.round(fs * 0.1));
     const current = new Float64Array(n);
     const weight = new Float64Array(n);
-    for (const [a, b] of armed) {
+    for (let ri = 0; ri < armed.length; ri++) {
+      const a = armed[ri]![0];
+      const b = armed[ri]![1];
       for (let s = a; s + block <= b; s += block) {
         current.fill(0);
         for (let i = s; i < s + block; i++) {

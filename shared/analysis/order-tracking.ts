@@ -28,7 +28,9 @@ export function attributeOrder(
   const phase = new Float64Array(n);
   const hz = new Float64Array(n);
   let used = 0;
-  for (const [a, b] of ranges) {
+  for (let ri = 0; ri < ranges.length; ri++) {
+    const a = ranges[ri]![0];
+    const b = ranges[ri]![1];
     for (let s = a; s + len <= b; s += len) {
       let lo = Infinity;
       let hi = -Infinity;

@@ -106,7 +106,9 @@ function blockMeans(
 ): { at: number[]; mean: number[] } {
   const at: number[] = [];
   const mean: number[] = [];
-  for (const [a, b] of ranges) {
+  for (let ri = 0; ri < ranges.length; ri++) {
+    const a = ranges[ri]![0];
+    const b = ranges[ri]![1];
     for (let s = a; s + block <= b; s += block) {
       let sum = 0;
       let cnt = 0;

@@ -48,7 +48,9 @@ export function analyseTracking(log: ParsedLog, armed: Ranges): TrackingResult |
     let lagWeighted = 0;
     let lagWeight = 0;
     const maxLag = Math.round(MAX_LAG_S * rate);
-    for (const [a, b] of armed) {
+    for (let ri = 0; ri < armed.length; ri++) {
+      const a = armed[ri]![0];
+      const b = armed[ri]![1];
       const blocks = Math.floor((b - a) / decim);
       const xs = new Float64Array(blocks);
       const ys = new Float64Array(blocks);

@@ -59,7 +59,9 @@ export interface VibrationInput {
 function segmentMeans(cols: readonly ArrayLike<number>[], ranges: Ranges, n: number): Float64Array {
   const step = n >> 1;
   const out: number[] = [];
-  for (const [a, b] of ranges) {
+  for (let ri = 0; ri < ranges.length; ri++) {
+    const a = ranges[ri]![0];
+    const b = ranges[ri]![1];
     const chunks = Math.floor((b - a) / step);
     const sum = new Float64Array(chunks);
     const cnt = new Float64Array(chunks);

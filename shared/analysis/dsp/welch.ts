@@ -76,7 +76,11 @@ export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): 
   const ranges = options.ranges ?? [[0, x.length] as const];
   const onSegment = options.onSegment;
   let count = 0;
-  for (const [r0, r1] of ranges) {
+  // Indexed range loops (here and in the other per-sample passes): a destructuring for-of
+  // around a sample loop kept V8 from unboxing its doubles (measured: 2× slower, with garbage).
+  for (let ri = 0; ri < ranges.length; ri++) {
+    const r0 = ranges[ri]![0];
+    const r1 = ranges[ri]![1];
     for (let s = Math.max(0, r0); s + n <= Math.min(r1, x.length); s += step) {
       // One read of the signal: window it and sum it.
       let sum = 0;
