@@ -38,7 +38,8 @@ export function analyseTracking(log: ParsedLog, armed: Ranges): TrackingResult |
   const decim = Math.max(1, Math.floor(fs / LAG_RATE_HZ));
   const rate = fs / decim;
   const out: Partial<TrackingResult> = {};
-  for (const [axis, spName, gName] of AXES) {
+  for (let ai = 0; ai < AXES.length; ai++) {
+    const [axis, spName, gName] = AXES[ai]!;
     const sp = log.columns[spName]!;
     const g = log.columns[gName]!;
     let se = 0;

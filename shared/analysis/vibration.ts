@@ -146,7 +146,6 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
       : rowSource
         ? segmentMeans(rowSource, ranges, nperseg)
         : new Float64Array(segIndex.size).fill(NaN);
-  const segValue = (s: number) => values[segIndex.get(s) ?? -1] ?? NaN;
   // Rows span every segment's value: a short punch-out at the top speed still gets its row, so
   // a line it alone excites can be traced to the rotors.
   const lo = quantile(values, 0);
@@ -163,31 +162,29 @@ export function analyseVibration(input: VibrationInput): VibrationResult {
   const rowCount = new Float64Array(CAMPBELL_ROWS);
   const rowValueSum = new Float64Array(CAMPBELL_ROWS);
 
+  // Each segment's Campbell row, counted once (the channels share the segment grid).
+  const segRow = new Int32Array(segIndex.size).fill(-1);
+  if (rowsOk) {
+    for (const j of segIndex.values()) {
+      const v = values[j]!;
+      if (!(v >= lo && v <= hi)) continue;
+      const r = rowOf(v);
+      segRow[j] = r;
+      rowCount[r]!++;
+      rowValueSum[r]! += v;
+    }
+  }
+  const rowOfSegment = (s: number) => segRow[segIndex.get(s) ?? -1] ?? -1;
+
   for (const name of VIBRATION_CHANNELS) {
     const col = log.columns[name];
     if (!col) continue;
     const acc = rowsOk ? Array.from({ length: CAMPBELL_ROWS }, () => new Float64Array(bins)) : null;
     if (acc) rowAcc[name] = acc;
-    const countRows = Object.keys(rowAcc).length === 1;
     const spectrum = welch(col, fs, {
       nperseg,
       ranges,
-      onSegment: acc
-        ? (s, est) => {
-            if (acc) {
-              const v = segValue(s);
-              if (v >= lo && v <= hi) {
-                const r = rowOf(v);
-                const row = acc[r]!;
-                for (let k = 0; k < bins; k++) row[k]! += est[k]!;
-                if (countRows) {
-                  rowCount[r]!++;
-                  rowValueSum[r]! += v;
-                }
-              }
-            }
-          }
-        : undefined,
+      ...(acc ? { binInto: { rowOf: rowOfSegment, rows: acc } } : {}),
     });
     const raw = findPeaks(spectrum, {
       minHz: MIN_PEAK_HZ,
