@@ -1,5 +1,6 @@
 /**
- * `npm run analyze -- <log.csv[.gz]> [--airframe airframe.json] [--map columns.json] [--json]`
+ * `npm run analyze -- <log.csv[.gz]> [--airframe airframe.json] [--map columns.json]
+ * [--bench bench.json] [--json]`
  * prints a readable verdict, or with --json the flight report (PRODUCT.md §7). Exit 0 on
  * success, 2 on input it cannot read (the message names the line and column), 1 on anything
  * else. Relative paths resolve against the directory npm was started from.
@@ -15,12 +16,15 @@ import {
 import { ColumnMap } from '../../shared/log/column-map';
 import { describePlace, LogFormatError } from '../../shared/log/errors';
 import { parseLogStream } from '../../shared/log/parse';
+import { BenchRow } from '../../shared/schemas/aircraft';
 import { Airframe } from '../../shared/schemas/airframe';
 
-const USAGE = `Usage: npm run analyze -- <log.csv> [--airframe airframe.json] [--map columns.json] [--json]
+const USAGE = `Usage: npm run analyze -- <log.csv> [--airframe airframe.json] [--map columns.json] [--bench bench.json] [--json]
 
   --airframe  the aircraft's geometry (motors, spins, mass, props); without it a 5-inch quad X is assumed
   --map       how the CSV's headers map to channels, when they are not the canonical ones
+  --bench     a bench run of the motor and prop, { "rows": [{ "throttle": 0–1, "thrustG": grams }, …] },
+              used as the thrust curve for balance and CG when the log has no rpm
   --json      print the flight report as one JSON object instead of the readable summary`;
 
 /** Input the tool cannot read: exit 2. */
@@ -32,8 +36,16 @@ interface Args {
   log: string;
   airframe?: string;
   map?: string;
+  bench?: string;
   json: boolean;
 }
+
+/** A bench-run file: the bench run's readings in the `BenchRow` shape (other fields ignored). */
+const BenchFile = z.object({
+  rows: z.array(BenchRow).min(2, 'a bench run needs at least two readings'),
+});
+
+const FILE_OPTIONS = { '--airframe': 'airframe', '--map': 'map', '--bench': 'bench' } as const;
 
 function parseArgs(argv: string[]): Args {
   const rest: string[] = [];
@@ -41,10 +53,10 @@ function parseArgs(argv: string[]): Args {
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i]!;
     if (a === '--json') args.json = true;
-    else if (a === '--airframe' || a === '--map') {
+    else if (a in FILE_OPTIONS) {
       const v = argv[++i];
       if (!v || v.startsWith('--')) throw new UsageError(`${a} needs a file name.`);
-      args[a === '--airframe' ? 'airframe' : 'map'] = v;
+      args[FILE_OPTIONS[a as keyof typeof FILE_OPTIONS]] = v;
     } else if (a === '--help' || a === '-h') throw new UsageError('');
     else if (a.startsWith('--')) throw new UsageError(`Unknown option ${a}.`);
     else rest.push(a);
@@ -206,6 +218,7 @@ async function main(argv: string[]): Promise<number> {
   try {
     const airframe = args.airframe ? readJson(args.airframe, Airframe, 'airframe') : undefined;
     const columnMap = args.map ? readJson(args.map, ColumnMap, 'column map') : undefined;
+    const benchRun = args.bench ? readJson(args.bench, BenchFile, 'bench run') : undefined;
     const path = here(args.log);
     let size: number;
     try {
@@ -229,7 +242,10 @@ async function main(argv: string[]): Promise<number> {
       }
       throw err;
     }
-    const result = analyzeFlight(log, airframe ? { airframe } : {});
+    const result = analyzeFlight(log, {
+      ...(airframe ? { airframe } : {}),
+      ...(benchRun ? { benchRun } : {}),
+    });
     process.stdout.write(
       args.json ? `${JSON.stringify(result.report)}\n` : `${summary(args.log, result)}\n`,
     );

@@ -63,6 +63,15 @@ beforeAll(() => {
 
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
+/** The same flight without its rpm columns: balance then rests on the thrust curve. */
+function writeWithoutRpm() {
+  const { log } = simulate(scenarios['cg-offset']!, { seed: 3, seconds: 30 });
+  for (let m = 1; m <= 4; m++) delete log.columns[`rpm${m}`];
+  log.channels = log.channels.filter((c) => !c.startsWith('rpm'));
+  const chunks = [...writeCanonicalCsvBytes(log)];
+  writeFileSync(join(dir, 'no-rpm.csv'), Buffer.concat(chunks.map((c) => Buffer.from(c))));
+}
+
 describe('npm run analyze', () => {
   it('prints a readable verdict, says the airframe was assumed, exits 0', () => {
     const r = analyze([join(dir, 'kite.csv')]);
@@ -90,6 +99,43 @@ describe('npm run analyze', () => {
       'acc_z',
     ]);
     expect(report.power?.cells).toBe(4);
+  });
+
+  it('takes balance and CG through a --bench thrust curve when the log has no rpm', () => {
+    writeFileSync(
+      join(dir, 'bench.json'),
+      JSON.stringify({
+        date: '2026-10-01',
+        rows: [
+          { throttle: 0, thrustG: 0 },
+          { throttle: 0.5, thrustG: 500 },
+          { throttle: 1, thrustG: 1000 },
+        ],
+      }),
+    );
+    writeWithoutRpm();
+    const plain = analyze(['no-rpm.csv', '--airframe', 'kite.json', '--json'], dir);
+    const bench = analyze(
+      ['no-rpm.csv', '--airframe', 'kite.json', '--bench', 'bench.json', '--json'],
+      dir,
+    );
+    expect(bench.code).toBe(0);
+    const a = FlightReport.parse(JSON.parse(plain.stdout));
+    const b = FlightReport.parse(JSON.parse(bench.stdout));
+    // Thrust ∝ output on this bench against output² without it: to first order each motor's
+    // share moves half as far from equal, so the CG reads about half as far forward.
+    expect(b.cg!.xMm / a.cg!.xMm).toBeGreaterThan(0.4);
+    expect(b.cg!.xMm / a.cg!.xMm).toBeLessThan(0.6);
+  });
+
+  it('exits 2 naming the place of a bench file it cannot use', () => {
+    writeFileSync(
+      join(dir, 'bench-bad.json'),
+      '{\n  "rows": [\n    { "throttle": 2, "thrustG": 5 }\n  ]\n}\n',
+    );
+    const r = analyze(['kite.csv', '--bench', 'bench-bad.json'], dir);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/bench run/);
   });
 
   it('reads a foreign header through --map', () => {
