@@ -136,8 +136,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
                 <dd>
                   {Math.hypot(report.cg.xMm - design.x, report.cg.yMm - design.y).toFixed(1)} mm{' '}
                   <span className="font-sans text-xs text-ink-faint">
-                    ({report.cg.xMm - design.x >= 0 ? 'forward' : 'aft'},{' '}
-                    {report.cg.yMm - design.y >= 0 ? 'right' : 'left'})
+                    ({offsetDirection(report.cg.xMm - design.x, report.cg.yMm - design.y)})
                   </span>
                 </dd>
               </dl>
@@ -155,4 +154,12 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
       </div>
     </div>
   );
+}
+
+/** Words for a CG offset in mm; components under half a millimetre are within rounding. */
+function offsetDirection(dxMm: number, dyMm: number): string {
+  const parts: string[] = [];
+  if (Math.abs(dxMm) >= 0.5) parts.push(dxMm > 0 ? 'forward' : 'aft');
+  if (Math.abs(dyMm) >= 0.5) parts.push(dyMm > 0 ? 'right' : 'left');
+  return parts.length > 0 ? parts.join(', ') : 'on the design CG';
 }
