@@ -22,6 +22,53 @@ export interface HeadroomResult {
   currentSource: 'motor' | 'shared' | null;
 }
 
+/** Per-ESC current summed over rows [s, e) from logged per-motor current, into `current`. */
+function motorCurrentSums(
+  perMotor: readonly Column[],
+  s: number,
+  e: number,
+  current: Float64Array,
+) {
+  for (let m = 0; m < perMotor.length; m++) {
+    const c = perMotor[m]!;
+    let sum = 0;
+    for (let i = s; i < e; i++) {
+      const v = c[i]!;
+      if (v === v) sum += v;
+    }
+    current[m]! += sum;
+  }
+}
+
+/**
+ * Per-ESC current summed over rows [s, e) from the pack current split in proportion to each
+ * motor's output^γ at that instant, into `current` (`weight` is scratch, one per motor).
+ */
+function sharedCurrentSums(
+  motors: readonly Column[],
+  ibat: Column,
+  s: number,
+  e: number,
+  gamma: number,
+  current: Float64Array,
+  weight: Float64Array,
+) {
+  const n = motors.length;
+  for (let i = s; i < e; i++) {
+    let tot = 0;
+    for (let m = 0; m < n; m++) {
+      const u = motors[m]![i]!;
+      const w = u > 0 ? (gamma === 2 ? u * u : u ** gamma) : 0; // NaN > 0 is false
+      weight[m] = w;
+      tot += w;
+    }
+    if (tot <= 0) continue;
+    const share = ibat[i]! / tot;
+    if (share !== share) continue;
+    for (let m = 0; m < n; m++) current[m]! += share * weight[m]!;
+  }
+}
+
 /** Events closer than this are one event, s: a motor chattering at its limit is one push. */
 const MERGE_GAP_S = 0.05;
 const MAX_EVENTS = 200;
@@ -113,26 +160,8 @@ export function analyseHeadroom(
       const b = armed[ri]![1];
       for (let s = a; s + block <= b; s += block) {
         current.fill(0);
-        for (let i = s; i < s + block; i++) {
-          if (source === 'motor') {
-            for (let m = 0; m < n; m++) {
-              const v = perMotor[m]![i]!;
-              if (v === v) current[m]! += v;
-            }
-          } else {
-            let tot = 0;
-            for (let m = 0; m < n; m++) {
-              const u = motors[m]![i]!;
-              const w = u > 0 ? (gamma === 2 ? u * u : u ** gamma) : 0; // NaN > 0 is false
-              weight[m] = w;
-              tot += w;
-            }
-            if (tot <= 0) continue;
-            const share = ibat![i]! / tot;
-            if (share !== share) continue;
-            for (let m = 0; m < n; m++) current[m]! += share * weight[m]!;
-          }
-        }
+        if (source === 'motor') motorCurrentSums(perMotor as Column[], s, s + block, current);
+        else sharedCurrentSums(motors, ibat!, s, s + block, gamma, current, weight);
         let over = false;
         for (let m = 0; m < n; m++) {
           const c = current[m]! / block;
