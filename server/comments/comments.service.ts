@@ -14,7 +14,7 @@ import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from '.
 import type { Mailer } from '../mail/mailer';
 import { commentMail, type CommentMailKind } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
-import { can } from '../teams/permissions';
+import { can } from '../../shared/auth/permissions';
 import { iso, isoOrNull } from '../util';
 import { cachedQuery, insertSql } from '../db/sql';
 import { Comment } from './comment.entity';

@@ -15,7 +15,7 @@ import { User } from '../auth/user.entity';
 import { BadRequestError, NotFoundError } from '../http/errors';
 import { Flight } from '../flights/flight.entity';
 import { severityName } from '../flights/flight-summary';
-import type { Action } from '../teams/permissions';
+import type { Action } from '../../shared/auth/permissions';
 import type { TeamsService } from '../teams/teams.service';
 import { iso } from '../util';
 import { Aircraft } from './aircraft.entity';

@@ -28,7 +28,7 @@ import {
 import type { Mailer } from '../mail/mailer';
 import { reviewDoneMail, reviewRequestMail } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
-import { can, type Action } from '../teams/permissions';
+import { can, type Action } from '../../shared/auth/permissions';
 import type { TeamsService } from '../teams/teams.service';
 import { iso } from '../util';
 import { FlightPayload } from './flight-payload.entity';

@@ -18,7 +18,8 @@ import { iso, isoOrNull } from '../util';
 import { cachedQuery } from '../db/sql';
 import { Invite } from './invite.entity';
 import { Membership } from './membership.entity';
-import { assertCan, type Action } from './permissions';
+import type { Action } from '../../shared/auth/permissions';
+import { assertCan } from './permissions';
 import { Team } from './team.entity';
 
 const INVITE_TTL_MS = 7 * 24 * 60 * 60 * 1000;

@@ -6,7 +6,7 @@ import {
   ProfileSettings,
 } from '../../features/session/components/account-settings';
 import { RequireSession } from '../../features/session/components/require-session';
-import { roleLabels } from '../../lib/permissions';
+import { roleLabels } from '../../lib/role-labels';
 
 export function AccountRoute() {
   return (

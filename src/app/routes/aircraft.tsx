@@ -15,7 +15,7 @@ import { ServiceLogPanel } from '../../features/aircraft/components/service-log-
 import { TrendsPanel } from '../../features/aircraft/components/trends-panel';
 import { useMe } from '../../features/session/api/session-queries';
 import { RequireSession } from '../../features/session/components/require-session';
-import { can } from '../../lib/permissions';
+import { can } from '../../../shared/auth/permissions';
 import type { Aircraft } from '../../../shared/schemas/aircraft';
 import type { Role } from '../../../shared/schemas/common';
 import { NotFoundRoute } from './not-found';

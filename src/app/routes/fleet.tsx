@@ -15,7 +15,7 @@ import { useActiveTeam } from '../../features/session/active-team';
 import { RequireSession } from '../../features/session/components/require-session';
 import { useMembers } from '../../features/team/api/team-queries';
 import { LocalFlightsPanel } from '../../features/sync/components/local-flights-panel';
-import { can } from '../../lib/permissions';
+import { can } from '../../../shared/auth/permissions';
 import { NoTeam } from './no-team';
 
 const filterKeys = [

@@ -6,7 +6,7 @@ import { AirframeEditor } from '../../features/aircraft/components/airframe-edit
 import { newAirframeForm } from '../../features/aircraft/model/airframe-form';
 import { useActiveTeam } from '../../features/session/active-team';
 import { RequireSession } from '../../features/session/components/require-session';
-import { can } from '../../lib/permissions';
+import { can } from '../../../shared/auth/permissions';
 import { NoTeam } from './no-team';
 
 export function NewAircraftRoute() {

@@ -9,7 +9,8 @@ import { MembersTable } from '../../features/team/components/members-table';
 import { PresetsList } from '../../features/team/components/presets-list';
 import { TeamNameForm } from '../../features/team/components/team-name-form';
 import { ThresholdsEditor } from '../../features/team/components/thresholds-editor';
-import { can, roleLabels } from '../../lib/permissions';
+import { can } from '../../../shared/auth/permissions';
+import { roleLabels } from '../../lib/role-labels';
 import { NoTeam } from './no-team';
 
 export function TeamRoute() {

@@ -3,7 +3,7 @@ import type { Me } from '../../../../shared/schemas/auth';
 import { Alert, describeError } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Loading } from '../../../components/ui/panel';
-import { roleDescriptions, roleLabels } from '../../../lib/permissions';
+import { roleDescriptions, roleLabels } from '../../../lib/role-labels';
 import { useAcceptInvite, useInvitePreview } from '../api/auth-queries';
 import { SignUpForm } from './sign-up-form';
 

@@ -1,3 +1,4 @@
+import { can } from '../../../../shared/auth/permissions';
 import type { Role } from '../../../../shared/schemas/common';
 
 export interface CommentRights {
@@ -8,8 +9,8 @@ export interface CommentRights {
 }
 
 /**
- * What the rail shows, from the role table of the product design (the server checks it again):
- * viewers read only; coaches, tuners and owners resolve; a pilot resolves on their own flights.
+ * What the rail shows, from the shared roles table (the server checks it again): viewers read
+ * only; coaches, tuners and owners resolve; a pilot resolves on their own flights.
  */
 export function commentRights(
   role: Role | null,
@@ -17,15 +18,13 @@ export function commentRights(
   pilotId: string | null,
 ): CommentRights {
   const member = role !== null && meId !== null;
+  const ownFlight = pilotId !== null && pilotId === meId;
   return {
-    canComment: member && role !== 'viewer',
+    canComment: member && can(role, 'comments.create'),
     canResolve:
       member &&
-      (role === 'owner' ||
-        role === 'tuner' ||
-        role === 'coach' ||
-        (role === 'pilot' && pilotId !== null && pilotId === meId)),
-    canRequestReview: member && (role === 'owner' || role === 'tuner' || role === 'pilot'),
-    canDeleteAny: role === 'owner',
+      (can(role, 'comments.resolveAny') || (ownFlight && can(role, 'comments.resolveOnOwnFlight'))),
+    canRequestReview: member && can(role, 'flights.requestReview'),
+    canDeleteAny: can(role, 'comments.deleteAny'),
   };
 }

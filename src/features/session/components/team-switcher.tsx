@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { roleLabels } from '../../../lib/permissions';
+import { roleLabels } from '../../../lib/role-labels';
 import { useActiveTeam } from '../active-team';
 
 /** Which team the fleet and team pages show; a user can fly for several with different roles. */

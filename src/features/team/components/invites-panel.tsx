@@ -9,7 +9,7 @@ import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { roleLabels } from '../../../lib/permissions';
+import { roleLabels } from '../../../lib/role-labels';
 import { useCreateInvite } from '../api/team-mutations';
 import { useInvites } from '../api/team-queries';
 

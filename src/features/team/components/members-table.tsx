@@ -3,7 +3,7 @@ import { Role as RoleSchema } from '../../../../shared/schemas/common';
 import { ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Loading } from '../../../components/ui/panel';
-import { roleDescriptions, roleLabels } from '../../../lib/permissions';
+import { roleDescriptions, roleLabels } from '../../../lib/role-labels';
 import { useChangeRole, useRemoveMember } from '../api/team-mutations';
 import { useMembers } from '../api/team-queries';
 

@@ -1,0 +1,41 @@
+import type { Role } from '../schemas/common';
+
+const everyone: readonly Role[] = ['owner', 'tuner', 'pilot', 'coach', 'viewer'];
+
+/**
+ * What each role may do, from the roles table of the product design. Anything not listed is
+ * denied. Ownership rules (a pilot's own flight, one's own comment) are checked on top of these.
+ * The server enforces this table on every request; the UI reads the same table only to hide
+ * what a role cannot do.
+ */
+export const permissions = {
+  'team.read': everyone,
+  'team.update': ['owner'],
+  'members.manage': ['owner'],
+  'invites.manage': ['owner'],
+  'thresholds.update': ['owner', 'tuner'],
+  // A pilot importing an unfamiliar log layout saves its column map for the next import.
+  'presets.write': ['owner', 'tuner', 'pilot'],
+  'presets.delete': ['owner', 'tuner'],
+  'aircraft.create': ['owner', 'tuner'],
+  'aircraft.update': ['owner', 'tuner'],
+  'aircraft.delete': ['owner'],
+  'serviceLog.create': ['owner', 'tuner', 'pilot'],
+  'benchRuns.create': ['owner', 'tuner'],
+  'flights.upload': ['owner', 'tuner', 'pilot'],
+  'flights.replaceAny': ['owner'],
+  'flights.deleteAny': ['owner'],
+  'flights.requestReview': ['owner', 'tuner', 'pilot'],
+  'flights.review': ['owner', 'coach'],
+  'comments.create': ['owner', 'tuner', 'pilot', 'coach'],
+  'comments.resolveAny': ['owner', 'tuner', 'coach'],
+  'comments.resolveOnOwnFlight': ['pilot'],
+  'comments.deleteAny': ['owner'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Action = keyof typeof permissions;
+
+/** Whether the role may take the action; someone with no role in the team may do nothing. */
+export function can(role: Role | null | undefined, action: Action): boolean {
+  return role != null && (permissions[action] as readonly Role[]).includes(role);
+}
