@@ -17,6 +17,10 @@ test('the owner invites a coach, who joins through the link in the dev inbox and
   await invite.getByLabel('Role').selectOption('coach');
   await invite.getByRole('button', { name: 'Send invite' }).click();
   await expect(owner.getByText(`Invitation e-mailed to ${coachEmail}`)).toBeVisible();
+  // The owner also gets the link to pass on by hand.
+  const sent = owner.getByRole('status').filter({ hasText: 'Invitation e-mailed' });
+  await expect(sent).toContainText('You can also pass on the link:');
+  const shown = await sent.textContent();
   await expect(owner.getByRole('table', { name: 'Invitations' })).toContainText(coachEmail);
 
   // The dev inbox shows the caught message with its link.
@@ -27,6 +31,7 @@ test('the owner invites a coach, who joins through the link in the dev inbox and
   await expect(owner.getByRole('list', { name: 'Messages' })).toContainText(coachEmail);
   const mail = await mailTo(owner.request, coachEmail, /invit|join/i);
   const link = linkIn(mail, '/invite/');
+  expect(shown).toContain(link);
 
   // The coach opens the link in a browser of their own and signs up from it.
   const coachContext = await browser.newContext();

@@ -37,6 +37,9 @@ export interface Links {
   publicUrl: string;
 }
 
+/** The page where an invite is read and accepted; the token is the only key to it. */
+export const inviteUrl = (l: Links, token: string) => `${l.publicUrl}/invite/${token}`;
+
 export const inviteMail = (
   l: Links,
   a: {
@@ -55,7 +58,7 @@ export const inviteMail = (
       `${a.invitedBy} invited you to join the team "${a.teamName}" as ${a.role}.`,
       `The link works once and expires on ${a.expiresAt.toUTCString()}. If you do not have an account yet, you can create one from the link.`,
     ],
-    action: { label: 'Join the team', url: `${l.publicUrl}/invite/${a.token}` },
+    action: { label: 'Join the team', url: inviteUrl(l, a.token) },
     footer:
       'You received this because someone entered your address in a team invitation. Ignore it if you were not expecting it.',
   });

@@ -13,7 +13,7 @@ import { hashToken, newToken } from '../auth/tokens';
 import type { Config } from '../config';
 import { BadRequestError, ConflictError, NotFoundError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
-import { inviteMail } from '../mail/templates';
+import { inviteMail, inviteUrl } from '../mail/templates';
 import { iso, isoOrNull } from '../util';
 import { cachedQuery } from '../db/sql';
 import { Invite } from './invite.entity';
@@ -205,7 +205,8 @@ export class TeamsService {
         expiresAt: new Date(invite.expiresAt),
       }),
     );
-    return this.inviteDto(invite, by.name);
+    // The one moment the token is known in the clear; the owner may pass the link on by hand.
+    return { ...this.inviteDto(invite, by.name), link: inviteUrl(this.config, token) };
   }
 
   private inviteDto(i: Invite, invitedBy: string): InviteDto {

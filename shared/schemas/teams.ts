@@ -47,6 +47,11 @@ export const Invite = z.object({
   createdAt: IsoDateTime,
   invitedBy: z.string(),
   acceptedAt: IsoDateTime.nullable(),
+  /**
+   * The accept link, for the owner to pass on by hand. Only in the answer that creates the invite:
+   * the server keeps just a hash of the token, so it cannot show the link again later.
+   */
+  link: z.url().optional(),
 });
 export type Invite = z.infer<typeof Invite>;
 export const InviteList = z.object({ invites: z.array(Invite) });

@@ -1,10 +1,11 @@
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiErrorBody } from '../../shared/api/error';
 import { defaultThresholds } from '../../shared/analysis/thresholds';
 import { Aircraft, ServiceLog } from '../../shared/schemas/aircraft';
-import { MemberList, Team, TeamList } from '../../shared/schemas/teams';
+import { Invite, InviteList, MemberList, Team, TeamList } from '../../shared/schemas/teams';
 import { TeamThresholds } from '../../shared/schemas/thresholds';
-import { kite } from './helpers/fixtures';
+import { kite, sha256 } from './helpers/fixtures';
 import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
 
 describe('teams and fleet', () => {
@@ -69,6 +70,65 @@ describe('teams and fleet', () => {
       .send({ email: tuner.email, role: 'pilot' })
       .expect(409);
     expect(ApiErrorBody.parse(res.body).error.code).toBe('already_member');
+  });
+
+  it('hands the owner the accept link of a new invite, the same one the e-mail carries', async () => {
+    const invite = Invite.parse(
+      (
+        await owner.agent
+          .post(`/api/teams/${teamId}/invites`)
+          .send({ email: 'noor@crew.example', role: 'coach' })
+          .expect(201)
+      ).body,
+    );
+    const token = /^http:\/\/hoverprint\.test\/invite\/([A-Za-z0-9_-]{43})$/.exec(
+      invite.link ?? '',
+    )?.[1];
+    expect(token, `link ${invite.link}`).toBeDefined();
+    await t.mailer.idle();
+    const mail = t.mailer.inbox!.messages().find((m) => m.to.includes('noor@crew.example'));
+    expect(mail?.text).toContain(`Join the team: ${invite.link}`);
+    // The link opens the invite for whoever holds it, before signing in.
+    const preview = await request(t.app).get(`/api/invites/${token}`).expect(200);
+    expect(preview.body).toMatchObject({ email: 'noor@crew.example', role: 'coach' });
+  });
+
+  it('shows no invite link to a role that may not invite', async () => {
+    const res = await tuner.agent
+      .post(`/api/teams/${teamId}/invites`)
+      .send({ email: 'ines@crew.example', role: 'pilot' })
+      .expect(403);
+    expect(ApiErrorBody.parse(res.body).error.code).toBe('forbidden');
+    expect(JSON.stringify(res.body)).not.toContain('/invite/');
+    const list = await tuner.agent.get(`/api/teams/${teamId}/invites`).expect(403);
+    expect(JSON.stringify(list.body)).not.toContain('/invite/');
+    const stored = await t.dataSource.query('SELECT email FROM invites WHERE email = ?', [
+      'ines@crew.example',
+    ]);
+    expect(stored).toEqual([]);
+  });
+
+  it('keeps only the hash of an invite token, so the list cannot show the link again', async () => {
+    const created = Invite.parse(
+      (
+        await owner.agent
+          .post(`/api/teams/${teamId}/invites`)
+          .send({ email: 'ravi@crew.example', role: 'viewer' })
+          .expect(201)
+      ).body,
+    );
+    const token = created.link!.split('/invite/')[1]!;
+    const rows = (await t.dataSource.query('SELECT * FROM invites WHERE id = ?', [
+      created.id,
+    ])) as Record<string, unknown>[];
+    expect(rows).toHaveLength(1);
+    expect(rows[0]!.tokenHash).toBe(sha256(token));
+    expect(JSON.stringify(rows[0])).not.toContain(token);
+    const listed = InviteList.parse(
+      (await owner.agent.get(`/api/teams/${teamId}/invites`).expect(200)).body,
+    ).invites.find((i) => i.id === created.id);
+    const { link: _shownOnce, ...rest } = created;
+    expect(listed).toEqual(rest);
   });
 
   it('validates the airframe with the shared schema', async () => {

@@ -31,13 +31,9 @@ export const changeRole = (teamId: string, userId: string, input: MemberPatch) =
 export const removeMember = (teamId: string, userId: string) =>
   apiFetch(pathTo('member', { teamId, userId }), noContent, { method: 'DELETE' });
 
-/** An invite as created; `link` is there when the server hands the link back for passing on by hand. */
-export const CreatedInvite = Invite.extend({ link: z.string().optional() });
-export type CreatedInvite = z.infer<typeof CreatedInvite>;
-
 export const fetchInvites = (teamId: string) => apiFetch(pathTo('invites', { teamId }), InviteList);
 export const createInvite = (teamId: string, input: InviteInput) =>
-  apiFetch(pathTo('invites', { teamId }), CreatedInvite, { method: 'POST', json: input });
+  apiFetch(pathTo('invites', { teamId }), Invite, { method: 'POST', json: input });
 
 export const fetchPresets = (teamId: string) => apiFetch(pathTo('presets', { teamId }), PresetList);
 export const patchPreset = (id: string, input: PresetPatch) =>
