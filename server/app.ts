@@ -11,6 +11,7 @@ import { fleetRouter } from './fleet/fleet.router';
 import { flightsRouter } from './flights/flights.router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { healthRouter } from './http/health.router';
+import { clientCacheHeaders } from './http/client-cache';
 import { createLogger, requestLogger } from './http/logger';
 import { originCheck } from './http/origin-check';
 import { sessionMiddleware } from './http/session';
@@ -72,7 +73,9 @@ export function createApp(deps: AppDeps): Express {
   if (config.env === 'production') {
     const dist = deps.clientDir ?? resolve('dist');
     const index = join(dist, 'index.html');
-    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.use(
+      express.static(dist, { index: false, maxAge: '1h', setHeaders: clientCacheHeaders(dist) }),
+    );
     // Client routes (/fleet, /flights/…) all load the SPA shell.
     app.get('/{*splat}', (_req, res, next) => {
       if (!existsSync(index)) {
