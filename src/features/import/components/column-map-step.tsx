@@ -233,7 +233,7 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
         {canSavePreset && savePreset && (
           <input
             aria-label="Preset name"
-            placeholder="e.g. Kite blackbox export"
+            placeholder="e.g. Kite card export"
             className="rounded border border-line px-2 py-1 text-sm"
             value={presetName}
             onChange={(e) => setPresetName(e.target.value)}
