@@ -194,6 +194,9 @@ function guessFamily(words: string[]): Guess | null {
   if (has(words, 'rpm', 'erpm')) {
     return { family: 'rpm', slot: index, zeroBasedPossible: true, clue: clueOf('rpm', 'erpm') };
   }
+  if (has(words, 'imotor') && index !== null) {
+    return { family: 'imotor', slot: index, zeroBasedPossible: true, clue: 'imotor' };
+  }
   if (has(words, 'current', 'curr', 'amps', 'amp', 'ibat', 'ma')) {
     if (has(words, 'motor', 'esc', 'mot') && index !== null) {
       return {
@@ -245,6 +248,10 @@ function guessFamily(words: string[]): Guess | null {
   return null;
 }
 
+/** Headers of one numbered set share a family and their words, all but the number. */
+const numberedSet = (family: string, words: string[]) =>
+  `${family}:${words.map((w) => (/^[0-9]{1,2}$/.test(w) ? '#' : w)).join(' ')}`;
+
 const axisNames: Record<string, readonly string[]> = {
   gyro: ['gyro_x', 'gyro_y', 'gyro_z'],
   acc: ['acc_x', 'acc_y', 'acc_z'],
@@ -261,14 +268,16 @@ export function proposeColumnMap(
 ): ProposedColumnMap {
   const parsed = headers.map(parseWords);
   const guesses = parsed.map((p) => guessFamily(p.words));
-  // Indexed families numbered from 0 in the file (motor0…motor3) become motor1…motor4.
-  const zeroBased = new Set<string>();
-  guesses.forEach((g) => {
-    if (g && g.zeroBasedPossible && g.slot === 0) zeroBased.add(g.family);
-  });
+  // A numbered set that starts at 0 in the file (Motor0…Motor3) becomes motor1…motor4 as a
+  // whole, so its "Motor1" is not read as our own motor1.
+  const sets = guesses.map((g, i) =>
+    g && g.zeroBasedPossible && g.slot !== null ? numberedSet(g.family, parsed[i]!.words) : null,
+  );
+  const zeroBasedSets = new Set(sets.filter((k, i) => k !== null && guesses[i]!.slot === 0));
+  const shiftedByOne = (i: number) => sets[i] != null && zeroBasedSets.has(sets[i]);
   const taken = new Map<string, string>();
   const entries: ProposedColumn[] = headers.map((header, i) => {
-    const direct = canonicalReading(header);
+    const direct = shiftedByOne(i) ? null : canonicalReading(header);
     if (direct) {
       if (taken.has(direct.channel)) {
         return {
@@ -309,7 +318,7 @@ export function proposeColumnMap(
           unit: null,
           reason: `"${g.clue}" suggests ${g.family}, but no motor number was found`,
         };
-      const n = g.slot + (zeroBased.has(g.family) ? 1 : 0);
+      const n = g.slot + (shiftedByOne(i) ? 1 : 0);
       channel = `${g.family}${n}`;
     } else {
       channel = g.family;
@@ -342,7 +351,7 @@ export function proposeColumnMap(
     } else if (p.unit !== null) {
       unitReason = `"${p.unitText}" is not a unit ${channel} accepts (${family.units.join(', ')})`;
     }
-    const shifted = zeroBased.has(g.family) ? ' (numbered from 0 in the file, from 1 here)' : '';
+    const shifted = shiftedByOne(i) ? ' (numbered from 0 in the file, from 1 here)' : '';
     return {
       header,
       channel,

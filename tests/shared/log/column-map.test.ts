@@ -46,6 +46,37 @@ describe('proposeColumnMap', () => {
     expect(p.missing).toEqual([]);
   });
 
+  it.each([
+    ['Motor', 'motor'],
+    ['rpm', 'rpm'],
+    ['RPM', 'rpm'],
+    ['imotor', 'imotor'],
+  ])(
+    'shifts a whole set numbered from 0 (%s0…), even headers that read like our own names',
+    (stem, family) => {
+      const headers = [0, 1, 2, 3].map((n) => `${stem}${n}`);
+      const p = proposeColumnMap(['time', ...headers]);
+      expect(p.entries.slice(1).map((e) => [e.header, e.channel])).toEqual(
+        headers.map((h, k) => [h, `${family}${k + 1}`]),
+      );
+      for (const e of p.entries.slice(1)) expect(e.reason).toMatch(/numbered from 0/);
+    },
+  );
+
+  it('keeps our own motor numbers when an unrelated column is numbered from 0', () => {
+    const p = proposeColumnMap(['time', 'motor1', 'motor2', 'motor3', 'motor4', 'ESC0 temp']);
+    expect(p.entries.map((e) => e.channel)).toEqual([
+      'time',
+      'motor1',
+      'motor2',
+      'motor3',
+      'motor4',
+      null,
+    ]);
+    expect(p.entries[1]!.reason).toBe('our own channel name');
+    expect(p.entries[5]!.reason).toMatch(/already taken by "motor1"/);
+  });
+
   it('never proposes one channel twice and lists what is still missing', () => {
     const p = proposeColumnMap(['gyro x', 'rate x', 'voltage']);
     expect(p.entries[0]!.channel).toBe('gyro_x');
