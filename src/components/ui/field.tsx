@@ -4,6 +4,7 @@ import {
   type InputHTMLAttributes,
   type ReactNode,
   type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
 } from 'react';
 
 const control =
@@ -15,26 +16,31 @@ interface FieldProps {
   hint?: ReactNode;
 }
 
-/** A labelled input whose error is announced and tied to it with aria-describedby. */
-export const TextField = forwardRef<
-  HTMLInputElement,
-  InputHTMLAttributes<HTMLInputElement> & FieldProps & { numeric?: boolean }
->(function TextField({ label, error, hint, numeric, className = '', ...input }, ref) {
-  const id = useId();
-  const described = error ? `${id}-error` : hint ? `${id}-hint` : undefined;
+/** Props that tie a control to its label and to the error or hint shown under it. */
+function controlProps(id: string, { error, hint }: Omit<FieldProps, 'label'>, extraClass = '') {
+  return {
+    id,
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': error ? `${id}-error` : hint ? `${id}-hint` : undefined,
+    className: control + (error ? 'border-sev-act ' : 'border-line ') + extraClass,
+  };
+}
+
+/** Label above the control, then its error (announced) or else its hint. */
+function FieldFrame({
+  id,
+  label,
+  error,
+  hint,
+  className,
+  children,
+}: FieldProps & { id: string; className: string; children: ReactNode }) {
   return (
     <div className={className}>
       <label htmlFor={id} className="mb-1 block text-xs font-medium text-ink-soft">
         {label}
       </label>
-      <input
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={described}
-        className={control + (error ? 'border-sev-act ' : 'border-line ') + (numeric ? 'num' : '')}
-        {...input}
-      />
+      {children}
       {error ? (
         <p id={`${id}-error`} className="mt-1 text-xs text-sev-act">
           {error}
@@ -46,6 +52,19 @@ export const TextField = forwardRef<
       ) : null}
     </div>
   );
+}
+
+/** A labelled input whose error is announced and tied to it with aria-describedby. */
+export const TextField = forwardRef<
+  HTMLInputElement,
+  InputHTMLAttributes<HTMLInputElement> & FieldProps & { numeric?: boolean }
+>(function TextField({ label, error, hint, numeric, className = '', ...input }, ref) {
+  const id = useId();
+  return (
+    <FieldFrame id={id} label={label} error={error} hint={hint} className={className}>
+      <input ref={ref} {...controlProps(id, { error, hint }, numeric ? 'num' : '')} {...input} />
+    </FieldFrame>
+  );
 });
 
 export const SelectField = forwardRef<
@@ -54,56 +73,22 @@ export const SelectField = forwardRef<
 >(function SelectField({ label, error, hint, className = '', children, ...select }, ref) {
   const id = useId();
   return (
-    <div className={className}>
-      <label htmlFor={id} className="mb-1 block text-xs font-medium text-ink-soft">
-        {label}
-      </label>
-      <select
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={control + (error ? 'border-sev-act' : 'border-line')}
-        {...select}
-      >
+    <FieldFrame id={id} label={label} error={error} hint={hint} className={className}>
+      <select ref={ref} {...controlProps(id, { error, hint })} {...select}>
         {children}
       </select>
-      {error ? (
-        <p id={`${id}-error`} className="mt-1 text-xs text-sev-act">
-          {error}
-        </p>
-      ) : hint ? (
-        <p className="mt-1 text-xs text-ink-faint">{hint}</p>
-      ) : null}
-    </div>
+    </FieldFrame>
   );
 });
 
 export const TextAreaField = forwardRef<
   HTMLTextAreaElement,
-  React.TextareaHTMLAttributes<HTMLTextAreaElement> & FieldProps
+  TextareaHTMLAttributes<HTMLTextAreaElement> & FieldProps
 >(function TextAreaField({ label, error, hint, className = '', ...area }, ref) {
   const id = useId();
   return (
-    <div className={className}>
-      <label htmlFor={id} className="mb-1 block text-xs font-medium text-ink-soft">
-        {label}
-      </label>
-      <textarea
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={control + (error ? 'border-sev-act' : 'border-line')}
-        {...area}
-      />
-      {error ? (
-        <p id={`${id}-error`} className="mt-1 text-xs text-sev-act">
-          {error}
-        </p>
-      ) : hint ? (
-        <p className="mt-1 text-xs text-ink-faint">{hint}</p>
-      ) : null}
-    </div>
+    <FieldFrame id={id} label={label} error={error} hint={hint} className={className}>
+      <textarea ref={ref} {...controlProps(id, { error, hint })} {...area} />
+    </FieldFrame>
   );
 });
