@@ -1,8 +1,8 @@
 import { useMemo } from 'react';
 import type { Trace } from '../../../../shared/analysis/review-detail';
-import { TimeChart, type TimePin, type TimeSeries } from '../../../components/charts/time-chart';
+import { TimeChart, type TimePin } from '../../../components/charts/time-chart';
 import { inkSeries } from '../../../components/charts/palette';
-import type { TimeContext } from './sections/time-context';
+import { followReviewTime, traceSeries, type TimeContext } from './sections/time-context';
 
 /** Value of a trace at time `tS` by linear interpolation (traces are time-ordered). */
 export function valueAt(
@@ -33,19 +33,14 @@ export interface FlightStripProps {
 
 /** Throttle and collective across the whole flight: hover shaded, comments pinned, the cursor shared. */
 export function FlightStrip({ effort, time, pins, onPin }: FlightStripProps) {
-  const series = useMemo(() => {
-    const s: TimeSeries[] = [];
-    if (effort.series['throttle'])
-      s.push({ name: 'Throttle', data: effort.series['throttle'], color: inkSeries.throttle });
-    if (effort.series['collective'])
-      s.push({
-        name: 'Collective',
-        data: effort.series['collective'],
-        color: inkSeries.collective,
-        width: 1.6,
-      });
-    return s;
-  }, [effort]);
+  const series = useMemo(
+    () =>
+      traceSeries(effort, [
+        { key: 'throttle', name: 'Throttle', color: inkSeries.throttle },
+        { key: 'collective', name: 'Collective', color: inkSeries.collective, width: 1.6 },
+      ]),
+    [effort],
+  );
   const at = time.cursorT;
   const thr = at === null ? null : valueAt(effort.t, effort.series['throttle'], at);
   const col = at === null ? null : valueAt(effort.t, effort.series['collective'], at);
@@ -68,12 +63,9 @@ export function FlightStrip({ effort, time, pins, onPin }: FlightStripProps) {
       <TimeChart
         t={effort.t}
         series={series}
-        cursorT={time.cursorT}
-        onCursor={time.onCursor}
-        bands={time.hover}
+        {...followReviewTime(time)}
         pins={pins}
         onPin={onPin}
-        group={time.group}
         height={150}
         yMin={0}
         yMax={1}

@@ -1,18 +1,9 @@
 import { useMemo } from 'react';
 import type { FlightReport } from '../../../../../shared/analysis/report-schema';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
-import { TimeChart, type TimeSeries } from '../../../../components/charts/time-chart';
-import { inkSeries, motorColor } from '../../../../components/charts/palette';
-import type { TimeContext } from './time-context';
-
-export function motorSeries(trace: Trace, motorCount: number): TimeSeries[] {
-  const out: TimeSeries[] = [];
-  for (let n = 1; n <= motorCount; n++) {
-    const data = trace.series[`motor${n}`];
-    if (data) out.push({ name: `Motor ${n}`, data, color: motorColor(n) });
-  }
-  return out;
-}
+import { TimeChart } from '../../../../components/charts/time-chart';
+import { inkSeries } from '../../../../components/charts/palette';
+import { followReviewTime, motorSeries, traceSeries, type TimeContext } from './time-context';
 
 export function EffortSection({
   report,
@@ -23,18 +14,16 @@ export function EffortSection({
   effort: Trace;
   time: TimeContext;
 }) {
-  const parts = useMemo(() => {
-    const s: TimeSeries[] = [];
-    const add = (key: string, name: string, color: string, width?: number) => {
-      const data = effort.series[key];
-      if (data) s.push({ name, data, color, ...(width ? { width } : {}) });
-    };
-    add('collective', 'Collective', inkSeries.collective, 1.6);
-    add('effort_roll', 'Roll', inkSeries.roll);
-    add('effort_pitch', 'Pitch', inkSeries.pitch);
-    add('effort_yaw', 'Yaw', inkSeries.yaw);
-    return s;
-  }, [effort]);
+  const parts = useMemo(
+    () =>
+      traceSeries(effort, [
+        { key: 'collective', name: 'Collective', color: inkSeries.collective, width: 1.6 },
+        { key: 'effort_roll', name: 'Roll', color: inkSeries.roll },
+        { key: 'effort_pitch', name: 'Pitch', color: inkSeries.pitch },
+        { key: 'effort_yaw', name: 'Yaw', color: inkSeries.yaw },
+      ]),
+    [effort],
+  );
   const motors = useMemo(() => motorSeries(effort, report.motorCount), [effort, report.motorCount]);
   const gaps = report.warnings.filter((w) => /gap/i.test(w));
   return (
@@ -48,10 +37,7 @@ export function EffortSection({
         <TimeChart
           t={effort.t}
           series={parts}
-          cursorT={time.cursorT}
-          onCursor={time.onCursor}
-          bands={time.hover}
-          group={time.group}
+          {...followReviewTime(time)}
           height={220}
           yName="output"
           ariaLabel="Effort over time"
@@ -62,10 +48,7 @@ export function EffortSection({
         <TimeChart
           t={effort.t}
           series={motors}
-          cursorT={time.cursorT}
-          onCursor={time.onCursor}
-          bands={time.hover}
-          group={time.group}
+          {...followReviewTime(time)}
           height={220}
           yName="output"
           yMin={0}

@@ -5,8 +5,7 @@ import type { Trace } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { TimeChart } from '../../../../components/charts/time-chart';
 import { motorColor } from '../../../../components/charts/palette';
-import { motorSeries } from './effort-section';
-import type { TimeContext } from './time-context';
+import { motorSeries, type TimeContext } from './time-context';
 
 export function HeadroomSection({
   report,

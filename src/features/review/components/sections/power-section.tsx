@@ -1,9 +1,9 @@
 import { Caution } from '../../../../components/ui/caution';
 import type { FlightReport } from '../../../../../shared/analysis/report-schema';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
-import { TimeChart, type TimeSeries } from '../../../../components/charts/time-chart';
+import { TimeChart } from '../../../../components/charts/time-chart';
 import { inkSeries } from '../../../../components/charts/palette';
-import type { TimeContext } from './time-context';
+import { followReviewTime, traceSeries, type TimeContext } from './time-context';
 
 const f = (v: number | null | undefined, d: number, unit: string) =>
   v === null || v === undefined || !Number.isFinite(v) ? '—' : `${v.toFixed(d)} ${unit}`;
@@ -24,17 +24,10 @@ export function PowerSection({
         This log has no pack voltage (vbat), so there is nothing to say about power.
       </p>
     );
-  const volts: TimeSeries[] = [];
-  if (power.series['cell_v'])
-    volts.push({
-      name: 'Per cell',
-      data: power.series['cell_v'],
-      color: inkSeries.measured,
-      width: 1.6,
-    });
-  const amps: TimeSeries[] = [];
-  if (power.series['ibat'])
-    amps.push({ name: 'Pack current', data: power.series['ibat'], color: inkSeries.pitch });
+  const volts = traceSeries(power, [
+    { key: 'cell_v', name: 'Per cell', color: inkSeries.measured, width: 1.6 },
+  ]);
+  const amps = traceSeries(power, [{ key: 'ibat', name: 'Pack current', color: inkSeries.pitch }]);
   return (
     <div className="flex flex-col gap-4">
       <dl className="num grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-4">
@@ -63,10 +56,7 @@ export function PowerSection({
         <TimeChart
           t={power.t}
           series={volts}
-          cursorT={time.cursorT}
-          onCursor={time.onCursor}
-          bands={time.hover}
-          group={time.group}
+          {...followReviewTime(time)}
           height={200}
           yName="V/cell"
           ariaLabel="Cell voltage over time"
@@ -76,10 +66,7 @@ export function PowerSection({
         <TimeChart
           t={power.t}
           series={amps}
-          cursorT={time.cursorT}
-          onCursor={time.onCursor}
-          bands={time.hover}
-          group={time.group}
+          {...followReviewTime(time)}
           height={180}
           yName="A"
           ariaLabel="Pack current over time"

@@ -5,7 +5,7 @@ import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { expectedHoverShares } from '../../../../../shared/airframe/allocation';
 import { TimeChart } from '../../../../components/charts/time-chart';
 import { inkSeries, motorColor } from '../../../../components/charts/palette';
-import type { TimeContext } from './time-context';
+import { followReviewTime, type TimeContext } from './time-context';
 
 const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
 
@@ -108,10 +108,7 @@ export function TorqueSection({
           <TimeChart
             t={effort.t}
             series={[{ name: 'Yaw effort', data: yaw, color: inkSeries.yaw, area: true }]}
-            cursorT={time.cursorT}
-            onCursor={time.onCursor}
-            bands={time.hover}
-            group={time.group}
+            {...followReviewTime(time)}
             height={180}
             yName="output"
             legend={false}

@@ -2,7 +2,7 @@ import type { FlightReport } from '../../../../../shared/analysis/report-schema'
 import type { Trace } from '../../../../../shared/analysis/review-detail';
 import { TimeChart } from '../../../../components/charts/time-chart';
 import { inkSeries } from '../../../../components/charts/palette';
-import type { TimeContext } from './time-context';
+import { followReviewTime, type TimeContext } from './time-context';
 
 const axes = [
   { key: 'roll', gyro: 'gyro_x', sp: 'sp_roll', label: 'Roll' },
@@ -61,10 +61,7 @@ export function TrackingSection({
                 { name: 'Setpoint', data: s, color: inkSeries.setpoint, dashed: true },
                 { name: 'Gyro', data: g, color: inkSeries.measured },
               ]}
-              cursorT={time.cursorT}
-              onCursor={time.onCursor}
-              bands={time.hover}
-              group={time.group}
+              {...followReviewTime(time)}
               height={170}
               yName="deg/s"
               ariaLabel={`${a.label} setpoint and gyro over time`}
