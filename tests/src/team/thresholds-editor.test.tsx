@@ -61,6 +61,34 @@ describe('thresholds editor', () => {
     });
   });
 
+  it('offers one field for every limit the verdict judges against', async () => {
+    stubServer();
+    renderWithQuery(<ThresholdsEditor teamId={TEAM} canEdit />);
+    await screen.findByLabelText('Motor above expectation: watch (%)');
+    const fields = screen.getAllByRole('textbox') as HTMLInputElement[];
+    expect(fields.map((f) => Number(f.value)).sort((a, b) => a - b)).toEqual(
+      Object.values(defaultThresholds).sort((a, b) => a - b),
+    );
+    expect(
+      (screen.getByLabelText('Yaw lag behind setpoint: act (ms)') as HTMLInputElement).value,
+    ).toBe(String(defaultThresholds.trackingYawLagActMs));
+    expect(
+      (screen.getByLabelText('Mean hover output: watch (0–1)') as HTMLInputElement).value,
+    ).toBe(String(defaultThresholds.hoverOutputWatch));
+  });
+
+  it('checks the order of every watch and act pair, the new ones too', async () => {
+    const calls = stubServer();
+    const user = userEvent.setup();
+    renderWithQuery(<ThresholdsEditor teamId={TEAM} canEdit />);
+    const act = await screen.findByLabelText('Yaw lag behind setpoint: act (ms)');
+    await user.clear(act);
+    await user.type(act, String(defaultThresholds.trackingYawLagWatchMs));
+    await user.click(screen.getByRole('button', { name: 'Save thresholds' }));
+    expect(await screen.findByText('act must be above watch')).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'PUT')).toEqual([]);
+  });
+
   it('is read only for a role that cannot change it', async () => {
     stubServer();
     renderWithQuery(<ThresholdsEditor teamId={TEAM} canEdit={false} />);

@@ -16,7 +16,21 @@ interface Row {
   key: Key;
   label: string;
   unit: string;
+  /** For an act limit: its watch limit, and which way is worse (for cells a lower voltage). */
+  watch?: { key: Key; worse: 'higher' | 'lower' };
 }
+
+/** The two rows of a watch/act pair; the act limit must be the stricter one. */
+const watchAct = (
+  label: string,
+  unit: string,
+  watch: Key,
+  act: Key,
+  worse: 'higher' | 'lower' = 'higher',
+): Row[] => [
+  { key: watch, label: `${label}: watch`, unit },
+  { key: act, label: `${label}: act`, unit, watch: { key: watch, worse } },
+];
 
 const groups: { title: string; rows: Row[] }[] = [
   {
@@ -34,64 +48,54 @@ const groups: { title: string; rows: Row[] }[] = [
   {
     title: 'Balance, CG and torque split',
     rows: [
-      { key: 'motorWatchPct', label: 'Motor above expectation: watch', unit: '%' },
-      { key: 'motorActPct', label: 'Motor above expectation: act', unit: '%' },
-      { key: 'cgWatchPctOfArm', label: 'CG offset: watch', unit: '% of arm' },
-      { key: 'cgActPctOfArm', label: 'CG offset: act', unit: '% of arm' },
-      { key: 'torqueSplitWatchPct', label: 'Torque split asymmetry: watch', unit: '%' },
-      { key: 'torqueSplitActPct', label: 'Torque split asymmetry: act', unit: '%' },
+      ...watchAct('Motor above expectation', '%', 'motorWatchPct', 'motorActPct'),
+      ...watchAct('CG offset', '% of arm', 'cgWatchPctOfArm', 'cgActPctOfArm'),
+      ...watchAct('Torque split asymmetry', '%', 'torqueSplitWatchPct', 'torqueSplitActPct'),
     ],
   },
   {
     title: 'Vibration',
     rows: [
       { key: 'peakProminenceDb', label: 'Peak stands above its neighbours by', unit: 'dB' },
-      { key: 'gyroToneWatchDegS', label: 'Gyro tone: watch', unit: 'deg/s' },
-      { key: 'gyroToneActDegS', label: 'Gyro tone: act', unit: 'deg/s' },
-      { key: 'accToneWatchG', label: 'Accelerometer tone: watch', unit: 'g' },
-      { key: 'accToneActG', label: 'Accelerometer tone: act', unit: 'g' },
+      ...watchAct('Gyro tone', 'deg/s', 'gyroToneWatchDegS', 'gyroToneActDegS'),
+      ...watchAct('Accelerometer tone', 'g', 'accToneWatchG', 'accToneActG'),
     ],
   },
   {
     title: 'Headroom',
     rows: [
       { key: 'saturationLevel', label: 'Output counted as saturated', unit: '0–1' },
-      { key: 'saturationWatchPct', label: 'Time saturated: watch', unit: '% armed' },
-      { key: 'saturationActPct', label: 'Time saturated: act', unit: '% armed' },
+      ...watchAct('Time saturated', '% armed', 'saturationWatchPct', 'saturationActPct'),
+      ...watchAct('Mean hover output', '0–1', 'hoverOutputWatch', 'hoverOutputAct'),
       { key: 'escOverActS', label: 'Time over ESC rating: act', unit: 's' },
     ],
   },
   {
     title: 'Battery and tracking',
     rows: [
-      { key: 'cellWatchV', label: 'Lowest cell under load: watch', unit: 'V' },
-      { key: 'cellActV', label: 'Lowest cell under load: act', unit: 'V' },
-      { key: 'trackingLagWatchMs', label: 'Gyro lag behind setpoint: watch', unit: 'ms' },
-      { key: 'trackingLagActMs', label: 'Gyro lag behind setpoint: act', unit: 'ms' },
+      ...watchAct('Lowest cell under load', 'V', 'cellWatchV', 'cellActV', 'lower'),
+      ...watchAct(
+        'Roll and pitch lag behind setpoint',
+        'ms',
+        'trackingLagWatchMs',
+        'trackingLagActMs',
+      ),
+      ...watchAct('Yaw lag behind setpoint', 'ms', 'trackingYawLagWatchMs', 'trackingYawLagActMs'),
     ],
   },
 ];
 
-/** Pairs where `act` must be the stricter limit; for cells a lower voltage is worse. */
-const pairs: [Key, Key, 'higher' | 'lower'][] = [
-  ['motorWatchPct', 'motorActPct', 'higher'],
-  ['cgWatchPctOfArm', 'cgActPctOfArm', 'higher'],
-  ['torqueSplitWatchPct', 'torqueSplitActPct', 'higher'],
-  ['gyroToneWatchDegS', 'gyroToneActDegS', 'higher'],
-  ['accToneWatchG', 'accToneActG', 'higher'],
-  ['saturationWatchPct', 'saturationActPct', 'higher'],
-  ['cellWatchV', 'cellActV', 'lower'],
-  ['trackingLagWatchMs', 'trackingLagActMs', 'higher'],
-];
-
 const ThresholdsForm = Thresholds.superRefine((t, ctx) => {
-  for (const [watch, act, worse] of pairs)
-    if (worse === 'higher' ? t[act] <= t[watch] : t[act] >= t[watch])
-      ctx.addIssue({
-        code: 'custom',
-        path: [act],
-        message: worse === 'higher' ? 'act must be above watch' : 'act must be below watch',
-      });
+  for (const g of groups)
+    for (const { key: act, watch } of g.rows) {
+      if (!watch) continue;
+      if (watch.worse === 'higher' ? t[act] <= t[watch.key] : t[act] >= t[watch.key])
+        ctx.addIssue({
+          code: 'custom',
+          path: [act],
+          message: watch.worse === 'higher' ? 'act must be above watch' : 'act must be below watch',
+        });
+    }
 });
 
 const num = { setValueAs: (v: unknown) => (v === '' ? undefined : Number(v)) };
