@@ -213,8 +213,11 @@ export class CommentsService {
     return { comment: this.toDto(comment, names), created: true };
   }
 
-  async patch(userId: string, id: string, body: CommentPatch): Promise<CommentDto> {
-    const input = CommentPatch.parse(body);
+  /**
+   * A comment with its flight as the user sees it. A comment on a flight the user cannot read is
+   * "not found", so its id says nothing about other teams.
+   */
+  private async open(userId: string, id: string) {
     const comment = await this.repo.findOneBy({ id });
     if (!comment) throw new NotFoundError('Comment');
     const flight = await this.flights
@@ -222,6 +225,12 @@ export class CommentsService {
       .catch((err: unknown) => {
         throw err instanceof NotFoundError ? new NotFoundError('Comment') : err;
       });
+    return { comment, flight };
+  }
+
+  async patch(userId: string, id: string, body: CommentPatch): Promise<CommentDto> {
+    const input = CommentPatch.parse(body);
+    const { comment, flight } = await this.open(userId, id);
     if (comment.deletedAt !== null) throw new ConflictError('This comment was deleted.', 'deleted');
     const changes: Partial<Comment> = {};
     let newMentions: string[] = [];
@@ -254,13 +263,7 @@ export class CommentsService {
 
   /** Author deletes their own, the owner any. The thread keeps its place for the replies. */
   async remove(userId: string, id: string): Promise<void> {
-    const comment = await this.repo.findOneBy({ id });
-    if (!comment) throw new NotFoundError('Comment');
-    const flight = await this.flights
-      .access(userId, comment.flightId, 'team.read')
-      .catch((err: unknown) => {
-        throw err instanceof NotFoundError ? new NotFoundError('Comment') : err;
-      });
+    const { comment, flight } = await this.open(userId, id);
     if (comment.authorId !== userId && !can(flight.role, 'comments.deleteAny')) {
       throw new ForbiddenError('Only the author or the team owner can delete a comment.');
     }
