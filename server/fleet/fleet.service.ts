@@ -17,6 +17,7 @@ import { Flight } from '../flights/flight.entity';
 import { severityName } from '../flights/flight-summary';
 import type { Action } from '../../shared/auth/permissions';
 import type { TeamsService } from '../teams/teams.service';
+import { withUserNames } from '../db/with-user-names';
 import { iso } from '../util';
 import { Aircraft } from './aircraft.entity';
 import { BenchRun } from './bench-run.entity';
@@ -149,19 +150,16 @@ export class FleetService {
 
   async serviceLog(userId: string, aircraftId: string): Promise<ServiceEntryDto[]> {
     await this.access(userId, aircraftId, 'team.read');
-    const rows = await this.ds
-      .getRepository(ServiceEntry)
-      .createQueryBuilder('e')
-      .innerJoin(User, 'u', 'u.id = e.byId')
-      .select('e')
-      .addSelect('u.name', 'byName')
-      .where('e.aircraftId = :aircraftId', { aircraftId })
-      .orderBy('e.date', 'DESC')
-      .addOrderBy('e.createdAt', 'DESC')
-      .getRawAndEntities();
-    return rows.entities.map((e, k) =>
-      this.serviceDto(e, String((rows.raw[k] as { byName: string }).byName)),
+    const rows = await withUserNames(
+      this.ds
+        .getRepository(ServiceEntry)
+        .createQueryBuilder('e')
+        .where('e.aircraftId = :aircraftId', { aircraftId })
+        .orderBy('e.date', 'DESC')
+        .addOrderBy('e.createdAt', 'DESC'),
+      'e.byId',
     );
+    return rows.map(([e, byName]) => this.serviceDto(e, byName));
   }
 
   private serviceDto(e: ServiceEntry, byName: string): ServiceEntryDto {
@@ -206,19 +204,16 @@ export class FleetService {
 
   async benchRuns(userId: string, aircraftId: string): Promise<BenchRunDto[]> {
     await this.access(userId, aircraftId, 'team.read');
-    const rows = await this.ds
-      .getRepository(BenchRun)
-      .createQueryBuilder('b')
-      .innerJoin(User, 'u', 'u.id = b.byId')
-      .select('b')
-      .addSelect('u.name', 'byName')
-      .where('b.aircraftId = :aircraftId', { aircraftId })
-      .orderBy('b.date', 'DESC')
-      .addOrderBy('b.createdAt', 'DESC')
-      .getRawAndEntities();
-    return rows.entities.map((b, k) =>
-      this.benchDto(b, String((rows.raw[k] as { byName: string }).byName)),
+    const rows = await withUserNames(
+      this.ds
+        .getRepository(BenchRun)
+        .createQueryBuilder('b')
+        .where('b.aircraftId = :aircraftId', { aircraftId })
+        .orderBy('b.date', 'DESC')
+        .addOrderBy('b.createdAt', 'DESC'),
+      'b.byId',
     );
+    return rows.map(([b, byName]) => this.benchDto(b, byName));
   }
 
   private benchDto(b: BenchRun, byName: string): BenchRunDto {

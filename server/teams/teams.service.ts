@@ -16,6 +16,7 @@ import type { Mailer } from '../mail/mailer';
 import { inviteMail, inviteUrl } from '../mail/templates';
 import { iso, isoOrNull } from '../util';
 import { cachedQuery } from '../db/sql';
+import { withUserNames } from '../db/with-user-names';
 import { Invite } from './invite.entity';
 import { Membership } from './membership.entity';
 import type { Action } from '../../shared/auth/permissions';
@@ -224,18 +225,15 @@ export class TeamsService {
 
   async invites(actorId: string, teamId: string): Promise<InviteDto[]> {
     await this.authorize(actorId, teamId, 'invites.manage');
-    const rows = await this.ds
-      .getRepository(Invite)
-      .createQueryBuilder('i')
-      .innerJoin(User, 'u', 'u.id = i.invitedById')
-      .select('i')
-      .addSelect('u.name', 'invitedBy')
-      .where('i.teamId = :teamId', { teamId })
-      .orderBy('i.createdAt', 'DESC')
-      .getRawAndEntities();
-    return rows.entities.map((e, k) =>
-      this.inviteDto(e, String((rows.raw[k] as { invitedBy: string }).invitedBy)),
+    const rows = await withUserNames(
+      this.ds
+        .getRepository(Invite)
+        .createQueryBuilder('i')
+        .where('i.teamId = :teamId', { teamId })
+        .orderBy('i.createdAt', 'DESC'),
+      'i.invitedById',
     );
+    return rows.map(([invite, invitedBy]) => this.inviteDto(invite, invitedBy));
   }
 
   private async openInvite(token: string): Promise<Invite> {

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiErrorBody } from '../../shared/api/error';
 import { defaultThresholds } from '../../shared/analysis/thresholds';
-import { Aircraft, ServiceLog } from '../../shared/schemas/aircraft';
+import { Aircraft, BenchRunList, ServiceLog } from '../../shared/schemas/aircraft';
 import { Invite, InviteList, MemberList, Team, TeamList } from '../../shared/schemas/teams';
 import { TeamThresholds } from '../../shared/schemas/thresholds';
 import { kite, sha256 } from './helpers/fixtures';
@@ -191,6 +191,36 @@ describe('teams and fleet', () => {
         ],
       })
       .expect(400);
+  });
+
+  it('lists bench runs newest first, each with who ran it', async () => {
+    const a = Aircraft.parse(
+      (
+        await tuner.agent
+          .post(`/api/teams/${teamId}/aircraft`)
+          .send({ ...kite, name: 'Heron' })
+          .expect(201)
+      ).body,
+    );
+    const rows = [
+      { throttle: 0.5, thrustG: 410 },
+      { throttle: 1, thrustG: 1180 },
+    ];
+    for (const [who, date] of [
+      [tuner, '2026-05-01'],
+      [owner, '2026-05-03'],
+    ] as const)
+      await who.agent
+        .post(`/api/aircraft/${a.id}/bench-runs`)
+        .send({ date, motor: '2306 1750 kV', prop: '5x4.3x3', rows })
+        .expect(201);
+    const list = BenchRunList.parse(
+      (await owner.agent.get(`/api/aircraft/${a.id}/bench-runs`).expect(200)).body,
+    );
+    expect(list.runs.map((r) => [r.date, r.by])).toEqual([
+      ['2026-05-03', { id: owner.id, name: 'Mara' }],
+      ['2026-05-01', { id: tuner.id, name: 'Bo' }],
+    ]);
   });
 
   it('stores team thresholds as validated JSON and falls back to defaults', async () => {
