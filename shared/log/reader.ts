@@ -478,19 +478,7 @@ export class LogReader {
     let textEnd: number;
     let p: number;
     if (buf[s] === QUOTE) {
-      p = s + 1;
-      for (;;) {
-        const b = buf[p]!;
-        if (b === LF || b === CR) throw this.quoteError(line, c);
-        if (b === QUOTE) {
-          if (buf[p + 1] === QUOTE) {
-            p += 2;
-            continue;
-          }
-          break;
-        }
-        p++;
-      }
+      p = this.closingQuote(buf, s + 1, line, c);
       textStart = s + 1;
       textEnd = p;
       p++;
@@ -526,27 +514,29 @@ export class LogReader {
     return p;
   }
 
+  /**
+   * Index of the quote that closes a quoted field whose text starts at `p`; a doubled quote
+   * inside is an escaped one. A quoted field never spans lines.
+   */
+  private closingQuote(buf: Uint8Array, p: number, line: number, c: number): number {
+    for (;;) {
+      const b = buf[p]!;
+      if (b === LF || b === CR) throw this.quoteError(line, c);
+      if (b === QUOTE) {
+        if (buf[p + 1] !== QUOTE) return p;
+        p += 2;
+        continue;
+      }
+      p++;
+    }
+  }
+
   /** Skips a field we do not import, honouring quotes; returns its terminator's index. */
   private skipCell(buf: Uint8Array, start: number, line: number, c: number): number {
     const delim = this.delim;
     let p = start;
     while (buf[p] === 32) p++;
-    if (buf[p] === QUOTE) {
-      p++;
-      for (;;) {
-        const b = buf[p]!;
-        if (b === LF || b === CR) throw this.quoteError(line, c);
-        if (b === QUOTE) {
-          if (buf[p + 1] === QUOTE) {
-            p += 2;
-            continue;
-          }
-          p++;
-          break;
-        }
-        p++;
-      }
-    }
+    if (buf[p] === QUOTE) p = this.closingQuote(buf, p + 1, line, c) + 1;
     for (;;) {
       const b = buf[p]!;
       if (b === delim || b === LF || b === CR) return p;

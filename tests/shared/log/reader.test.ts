@@ -291,6 +291,17 @@ describe('column maps', () => {
     expect(log.warnings.find((w) => w.code === 'skipped-columns')?.message).toMatch(/Flight Mode/);
   });
 
+  it('skips quoted text in unmapped columns, escaped quotes and delimiters included', () => {
+    const map = { columns: { t: { channel: 'time' }, m: { channel: 'motor1' } } };
+    const log = parse('t,note,m\n0,"gusty, ""left"" side",0.5\n1, "calm" ,0.25\n', {
+      columnMap: map,
+    });
+    expect(values(log.columns.motor1)).toEqual([0.5, 0.25]);
+    const err = formatError(() => parse('t,note,m\n0,"gusty,0.5\n1,x,0.5\n', { columnMap: map }));
+    expect(err.code).toBe('stray-quote');
+    expect([err.line, err.column]).toEqual([2, 2]);
+  });
+
   it('rejects a column map that does not fit the registry', () => {
     const err = formatError(() =>
       parse(foreign, {
