@@ -1,7 +1,5 @@
 import { useMemo } from 'react';
-import ReactEChartsCore from 'echarts-for-react/esm/core';
-import { echarts } from './echarts';
-import { useAfterPaint } from './use-after-paint';
+import { PaintedChart } from './painted-chart';
 import { inkSeries, motorColor } from './palette';
 
 export interface HeatmapLine {
@@ -43,7 +41,6 @@ function edges(centres: number[]): number[] {
  * the Campbell diagram.
  */
 export function HeatmapChart(props: HeatmapChartProps) {
-  const ready = useAfterPaint();
   const { x, y, z, xName, yName, zName, lines, height = 300, ariaLabel } = props;
   const option = useMemo(() => {
     const xe = edges(x);
@@ -159,19 +156,5 @@ export function HeatmapChart(props: HeatmapChartProps) {
       ],
     };
   }, [x, y, z, xName, yName, zName, lines]);
-  return (
-    <div role="img" aria-label={ariaLabel}>
-      {ready ? (
-        <ReactEChartsCore
-          echarts={echarts}
-          option={option}
-          notMerge
-          lazyUpdate
-          style={{ height, width: '100%' }}
-        />
-      ) : (
-        <div style={{ height, width: '100%' }} />
-      )}
-    </div>
-  );
+  return <PaintedChart option={option} height={height} ariaLabel={ariaLabel} />;
 }

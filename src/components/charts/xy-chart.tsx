@@ -1,7 +1,5 @@
 import { useMemo } from 'react';
-import ReactEChartsCore from 'echarts-for-react/esm/core';
-import { echarts } from './echarts';
-import { useAfterPaint } from './use-after-paint';
+import { PaintedChart } from './painted-chart';
 import { inkSeries } from './palette';
 
 export interface XySeries {
@@ -48,7 +46,6 @@ function points(s: XySeries, xLog: boolean): [number, number | null][] {
 
 /** A plain x–y line chart: spectra, filter responses, voltage against current. */
 export function XyChart(props: XyChartProps) {
-  const ready = useAfterPaint();
   const {
     series,
     xName,
@@ -130,19 +127,5 @@ export function XyChart(props: XyChartProps) {
     }),
     [series, xName, yName, xLog, xMin, xMax, yMin, yMax, markers],
   );
-  return (
-    <div role="img" aria-label={ariaLabel}>
-      {ready ? (
-        <ReactEChartsCore
-          echarts={echarts}
-          option={option}
-          notMerge
-          lazyUpdate
-          style={{ height, width: '100%' }}
-        />
-      ) : (
-        <div style={{ height, width: '100%' }} />
-      )}
-    </div>
-  );
+  return <PaintedChart option={option} height={height} ariaLabel={ariaLabel} />;
 }

@@ -1,7 +1,6 @@
-import ReactEChartsCore from 'echarts-for-react/esm/core';
 import { useMemo } from 'react';
-import { echarts } from '../../../components/charts/echarts';
 import { inkSeries } from '../../../components/charts/palette';
+import { PaintedChart } from '../../../components/charts/painted-chart';
 
 export interface TrendSeries {
   name: string;
@@ -107,15 +106,5 @@ export function TrendChart({
     }),
     [series, yName, events, band],
   );
-  return (
-    <div role="img" aria-label={ariaLabel}>
-      <ReactEChartsCore
-        echarts={echarts}
-        option={option}
-        notMerge
-        lazyUpdate
-        style={{ height, width: '100%' }}
-      />
-    </div>
-  );
+  return <PaintedChart option={option} height={height} ariaLabel={ariaLabel} />;
 }
