@@ -6,9 +6,11 @@ import {
 } from '../shared/analysis/analyze-flight';
 import { benchFilters, type FilterBenchResult } from '../shared/analysis/filters/filter-bench';
 import type { FilterSpec } from '../shared/analysis/filters/filter-spec';
+import { stripTrace, type Trace } from '../shared/analysis/review-detail';
 import { findSegments } from '../shared/analysis/segments';
 import { resolveThresholds } from '../shared/analysis/thresholds';
 import type { ParsedLog } from '../shared/log/types';
+import type { LogDelivery } from './parse.worker';
 
 /** Logs kept so the filter bench can rerun without the page resending columns (a 300 s, 4 kHz log is ~100 MB). */
 const CACHE_SIZE = 3;
@@ -24,12 +26,58 @@ class FlightNotLoadedError extends Error {
   override name = 'FlightNotLoadedError';
 }
 
+/** The parse worker said no log is coming on the port (the read failed or was cancelled). */
+class LogNotDeliveredError extends Error {
+  override name = 'LogNotDeliveredError';
+}
+
+/** The one message the parse worker posts on a handoff port. */
+function receiveLog(port: MessagePort): Promise<ParsedLog> {
+  return new Promise((resolve, reject) => {
+    port.onmessage = (e: MessageEvent<LogDelivery>) => {
+      port.close();
+      if (e.data.ok) resolve(e.data.log);
+      else reject(new LogNotDeliveredError('No log arrived from the reader.'));
+    };
+    port.start();
+  });
+}
+
+function analyse(flightId: string, log: ParsedLog, options: AnalyzeOptions): FlightAnalysis {
+  const result = analyzeFlight(log, options);
+  // The strip is thinned here, off the page's thread, so its first paint stays short.
+  result.detail.strip = stripTrace(result.detail.effort);
+  remember(flightId, log, options);
+  return result;
+}
+
 const api = {
   /** Full report and chart detail for a flight; keeps the log for the filter bench. */
   analyze(flightId: string, log: ParsedLog, options: AnalyzeOptions = {}): FlightAnalysis {
-    const result = analyzeFlight(log, options);
-    remember(flightId, log, options);
-    return result;
+    return analyse(flightId, log, options);
+  },
+
+  /**
+   * As `analyze`, for a log the parse worker posts on `port` (parse worker `parseInto`), so
+   * the columns never pass through the page. Rejects with LogNotDeliveredError when the read
+   * did not produce a log.
+   */
+  async analyzeDelivered(
+    flightId: string,
+    port: MessagePort,
+    options: AnalyzeOptions = {},
+  ): Promise<FlightAnalysis> {
+    return analyse(flightId, await receiveLog(port), options);
+  },
+
+  /** Keeps a log delivered on `port` for the filter bench without analysing it again. */
+  async loadDelivered(flightId: string, port: MessagePort, options: AnalyzeOptions = {}) {
+    remember(flightId, await receiveLog(port), options);
+  },
+
+  /** The strip for a flight stored before the detail carried one. */
+  strip(effort: Trace): Trace {
+    return stripTrace(effort);
   },
 
   /** Filter preview on one channel of a flight analysed earlier in this worker. */

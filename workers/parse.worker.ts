@@ -19,6 +19,13 @@ export interface ParseFailure {
 }
 
 export type ParseResult = { ok: true; log: ParsedLog } | { ok: false; error: ParseFailure };
+
+/** A parsed log without its columns: what the page needs once the columns went elsewhere. */
+export type LogSummary = Omit<ParsedLog, 'columns'>;
+export type HandoffResult = { ok: true; summary: LogSummary } | { ok: false; error: ParseFailure };
+
+/** The one message `parseInto` posts on its port: the log, or word that none is coming. */
+export type LogDelivery = { ok: true; log: ParsedLog } | { ok: false };
 export type InspectResult =
   { ok: true; preview: HeaderPreview } | { ok: false; error: ParseFailure };
 
@@ -45,41 +52,86 @@ function failure(err: unknown): ParseFailure {
   return { code: 'internal', message: `The import stopped on an internal error: ${message}` };
 }
 
+type OnProgress = (p: { bytes: number; totalBytes: number; rows: number }) => void;
+
+async function parseJob(
+  jobId: string,
+  file: Blob,
+  options: ReadOptions,
+  onProgress?: OnProgress,
+): Promise<ParsedLog> {
+  const totalBytes = file.size;
+  let lastReport = -Infinity;
+  try {
+    const log = await parseLogStream(withBreaks(file.stream()), {
+      ...options,
+      expectedBytes: totalBytes,
+      signal: {
+        get aborted() {
+          return cancelled.has(jobId);
+        },
+      },
+      onProgress: onProgress
+        ? ({ bytes, rows }) => {
+            const now = performance.now();
+            if (now - lastReport < PROGRESS_INTERVAL_MS) return;
+            lastReport = now;
+            onProgress({ bytes, totalBytes, rows });
+          }
+        : undefined,
+    });
+    onProgress?.({ bytes: totalBytes, totalBytes, rows: log.rows });
+    return log;
+  } finally {
+    cancelled.delete(jobId);
+  }
+}
+
+/** Every buffer behind the log's columns (a buffer may back more than one column). */
+function columnBuffers(log: ParsedLog): ArrayBuffer[] {
+  return [...new Set(Object.values(log.columns).map((c) => c.buffer as ArrayBuffer))];
+}
+
 const api = {
   /** Parses a dropped file (CSV or .csv.gz) into typed columns, handed back as transferables. */
   async parseFile(
     jobId: string,
     file: Blob,
     options: ReadOptions,
-    onProgress?: (p: { bytes: number; totalBytes: number; rows: number }) => void,
+    onProgress?: OnProgress,
   ): Promise<ParseResult> {
-    const totalBytes = file.size;
-    let lastReport = -Infinity;
     try {
-      const log = await parseLogStream(withBreaks(file.stream()), {
-        ...options,
-        expectedBytes: totalBytes,
-        signal: {
-          get aborted() {
-            return cancelled.has(jobId);
-          },
-        },
-        onProgress: onProgress
-          ? ({ bytes, rows }) => {
-              const now = performance.now();
-              if (now - lastReport < PROGRESS_INTERVAL_MS) return;
-              lastReport = now;
-              onProgress({ bytes, totalBytes, rows });
-            }
-          : undefined,
-      });
-      onProgress?.({ bytes: totalBytes, totalBytes, rows: log.rows });
-      const buffers = Object.values(log.columns).map((c) => c.buffer as ArrayBuffer);
-      return transfer({ ok: true as const, log }, buffers);
+      const log = await parseJob(jobId, file, options, onProgress);
+      return transfer({ ok: true as const, log }, columnBuffers(log));
     } catch (err) {
       return { ok: false, error: failure(err) };
-    } finally {
-      cancelled.delete(jobId);
+    }
+  },
+
+  /**
+   * Like parseFile, but the columns go straight to `port` (the analysis worker listens on the
+   * other end) and the page gets only the summary: a 100 MB log never lands on the main
+   * thread, where its buffers would cost a long garbage collection. Exactly one LogDelivery
+   * is posted on the port, also when the read fails, so the listener never waits forever;
+   * the listener closes the port once it has it.
+   */
+  async parseInto(
+    jobId: string,
+    file: Blob,
+    options: ReadOptions,
+    port: MessagePort,
+    onProgress?: OnProgress,
+  ): Promise<HandoffResult> {
+    try {
+      const log = await parseJob(jobId, file, options, onProgress);
+      const delivery: LogDelivery = { ok: true, log };
+      port.postMessage(delivery, columnBuffers(log));
+      const { columns: _sent, ...summary } = log;
+      return { ok: true, summary };
+    } catch (err) {
+      const none: LogDelivery = { ok: false };
+      port.postMessage(none);
+      return { ok: false, error: failure(err) };
     }
   },
 

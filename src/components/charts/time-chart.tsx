@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import ReactEChartsCore from 'echarts-for-react/esm/core';
 import type { EChartsType } from 'echarts/core';
 import { echarts } from './echarts';
@@ -42,19 +42,29 @@ export interface TimeChartProps {
   yMax?: number;
   /** Show the zoom slider under the chart (the flight strip has it; others follow it). */
   slider?: boolean;
+  /**
+   * Let echarts thin the series to the plot's width (LTTB) on every draw. Off for traces the
+   * worker has already thinned, which then cost the page no sampling work at all.
+   */
+  sampling?: boolean;
   legend?: boolean;
   ariaLabel: string;
 }
 
 const CURSOR_ID = 'cursor';
 
-function pairs(t: ArrayLike<number>, y: ArrayLike<number>): [number, number | null][] {
+/**
+ * Time and value interleaved in one typed array (echarts reads it with two dimensions): one
+ * allocation per series instead of a small array per point, so a chart's first build makes
+ * little garbage. Non-finite values stay NaN, which echarts draws as a gap in the line.
+ */
+function interleave(t: ArrayLike<number>, y: ArrayLike<number>): Float64Array {
   const n = Math.min(t.length, y.length);
-  const out = new Array<[number, number | null]>(n);
+  const out = new Float64Array(2 * n);
   for (let i = 0; i < n; i++) {
     const v = y[i]!;
-    // NaN would break the line silently; null leaves a visible gap instead.
-    out[i] = [t[i]!, Number.isFinite(v) ? v : null];
+    out[2 * i] = t[i]!;
+    out[2 * i + 1] = Number.isFinite(v) ? v : NaN;
   }
   return out;
 }
@@ -62,7 +72,7 @@ function pairs(t: ArrayLike<number>, y: ArrayLike<number>): [number, number | nu
 /**
  * A line chart over flight time that shares the review's cursor: clicking the plot moves the
  * cursor, the cursor is drawn as a vertical line, and charts in one group zoom together.
- * Series use LTTB sampling so long traces stay light when zoomed out.
+ * Series use LTTB sampling (unless already thinned) so long traces stay light when zoomed out.
  */
 export function TimeChart(props: TimeChartProps) {
   const ready = useAfterPaint();
@@ -81,10 +91,15 @@ export function TimeChart(props: TimeChartProps) {
     yMin,
     yMax,
     slider = false,
+    sampling = true,
     legend = true,
     ariaLabel,
   } = props;
   const chartRef = useRef<EChartsType | null>(null);
+  // Built in two steps, a frame apart: axes and lines first, then legend, tooltip, zoom and
+  // marks. A chart's first build runs much of echarts' code for the first time, and in one
+  // step it is the longest task of the review's first paint (PRODUCT.md §10: none over 100 ms).
+  const [complete, setComplete] = useState(false);
   const onCursorRef = useRef(onCursor);
   const onPinRef = useRef(onPin);
   useEffect(() => {
@@ -97,64 +112,72 @@ export function TimeChart(props: TimeChartProps) {
 
   const option = useMemo(() => {
     const marks: unknown[] = [];
-    if (bands && bands.length > 0)
-      marks.push({
-        type: 'line',
-        id: 'bands',
-        data: [],
-        silent: true,
-        markArea: {
+    if (complete) {
+      if (bands && bands.length > 0)
+        marks.push({
+          type: 'line',
+          id: 'bands',
+          data: [],
           silent: true,
-          itemStyle: { color: inkSeries.band },
-          data: bands.map(([a, b]) => [{ xAxis: a }, { xAxis: b }]),
-        },
-      });
-    if (events && events.length > 0)
-      marks.push({
-        type: 'line',
-        id: 'events',
-        data: [],
-        silent: true,
-        markArea: {
+          markArea: {
+            silent: true,
+            itemStyle: { color: inkSeries.band },
+            data: bands.map(([a, b]) => [{ xAxis: a }, { xAxis: b }]),
+          },
+        });
+      if (events && events.length > 0)
+        marks.push({
+          type: 'line',
+          id: 'events',
+          data: [],
           silent: true,
-          itemStyle: { color: 'rgba(180,68,60,0.16)' },
-          data: events.map(([a, b]) => [{ xAxis: a }, { xAxis: Math.max(b, a + (t1 - t0) / 400) }]),
-        },
-      });
-    if (pins && pins.length > 0)
-      marks.push({
-        type: 'scatter',
-        id: 'pins',
-        name: 'Comments',
-        symbol: 'pin',
-        symbolSize: 18,
-        itemStyle: { color: '#c7771a' },
-        data: pins.map((p) => ({
-          value: [p.tS, yMax ?? 1],
-          id: p.id,
-          itemStyle: p.resolved ? { color: '#9aa3ad' } : undefined,
-        })),
-        z: 10,
-        tooltip: { show: false },
-      });
+          markArea: {
+            silent: true,
+            itemStyle: { color: 'rgba(180,68,60,0.16)' },
+            data: events.map(([a, b]) => [
+              { xAxis: a },
+              { xAxis: Math.max(b, a + (t1 - t0) / 400) },
+            ]),
+          },
+        });
+      if (pins && pins.length > 0)
+        marks.push({
+          type: 'scatter',
+          id: 'pins',
+          name: 'Comments',
+          symbol: 'pin',
+          symbolSize: 18,
+          itemStyle: { color: '#c7771a' },
+          data: pins.map((p) => ({
+            value: [p.tS, yMax ?? 1],
+            id: p.id,
+            itemStyle: p.resolved ? { color: '#9aa3ad' } : undefined,
+          })),
+          z: 10,
+          tooltip: { show: false },
+        });
+    }
     return {
       animation: false,
       grid: { left: 56, right: 16, top: legend ? 28 : 10, bottom: slider ? 52 : 24 },
-      legend: legend
+      legend:
+        complete && legend
+          ? {
+              top: 0,
+              right: 16,
+              itemWidth: 14,
+              itemHeight: 3,
+              textStyle: { fontSize: 11, color: inkSeries.axis },
+            }
+          : undefined,
+      tooltip: complete
         ? {
-            top: 0,
-            right: 16,
-            itemWidth: 14,
-            itemHeight: 3,
-            textStyle: { fontSize: 11, color: inkSeries.axis },
+            trigger: 'axis',
+            axisPointer: { type: 'line', lineStyle: { color: inkSeries.axis, width: 0.5 } },
+            valueFormatter: (v: unknown) => (typeof v === 'number' ? v.toFixed(3) : String(v)),
+            textStyle: { fontSize: 11 },
           }
         : undefined,
-      tooltip: {
-        trigger: 'axis',
-        axisPointer: { type: 'line', lineStyle: { color: inkSeries.axis, width: 0.5 } },
-        valueFormatter: (v: unknown) => (typeof v === 'number' ? v.toFixed(3) : String(v)),
-        textStyle: { fontSize: 11 },
-      },
       xAxis: {
         type: 'value',
         min: t0,
@@ -178,28 +201,31 @@ export function TimeChart(props: TimeChartProps) {
         axisLabel: { color: inkSeries.axis, fontSize: 10 },
         splitLine: { lineStyle: { color: inkSeries.grid } },
       },
-      dataZoom: [
-        { type: 'inside', xAxisIndex: 0, filterMode: 'none' },
-        ...(slider
-          ? [
-              {
-                type: 'slider',
-                xAxisIndex: 0,
-                height: 18,
-                bottom: 6,
-                filterMode: 'none',
-                showDataShadow: false,
-              },
-            ]
-          : []),
-      ],
+      dataZoom: !complete
+        ? []
+        : [
+            { type: 'inside', xAxisIndex: 0, filterMode: 'none' },
+            ...(slider
+              ? [
+                  {
+                    type: 'slider',
+                    xAxisIndex: 0,
+                    height: 18,
+                    bottom: 6,
+                    filterMode: 'none',
+                    showDataShadow: false,
+                  },
+                ]
+              : []),
+          ],
       series: [
         ...series.map((s) => ({
           type: 'line',
           name: s.name,
-          data: pairs(t, s.data),
+          data: interleave(t, s.data),
+          dimensions: ['x', 'y'],
           showSymbol: false,
-          sampling: 'lttb',
+          sampling: sampling ? 'lttb' : undefined,
           color: s.color,
           lineStyle: { width: s.width ?? 1.2, type: s.dashed ? 'dashed' : 'solid' },
           areaStyle: s.area ? { opacity: 0.12 } : undefined,
@@ -215,31 +241,53 @@ export function TimeChart(props: TimeChartProps) {
         },
       ],
     };
-  }, [t, series, bands, events, pins, yName, yMin, yMax, slider, legend, t0, t1]);
+  }, [
+    t,
+    series,
+    bands,
+    events,
+    pins,
+    yName,
+    yMin,
+    yMax,
+    slider,
+    sampling,
+    legend,
+    t0,
+    t1,
+    complete,
+  ]);
 
   // The cursor moves often; update only its mark instead of re-setting every series.
   useEffect(() => {
     const chart = chartRef.current;
     if (!chart) return;
-    chart.setOption({
-      series: [
-        {
-          id: CURSOR_ID,
-          markLine: {
-            symbol: 'none',
-            silent: true,
-            animation: false,
-            lineStyle: { color: inkSeries.cursor, width: 1.5, type: 'solid' },
-            label: { show: false },
-            data: cursorT === null ? [] : [{ xAxis: cursorT }],
+    chart.setOption(
+      {
+        series: [
+          {
+            id: CURSOR_ID,
+            markLine: {
+              symbol: 'none',
+              silent: true,
+              animation: false,
+              lineStyle: { color: inkSeries.cursor, width: 1.5, type: 'solid' },
+              label: { show: false },
+              data: cursorT === null ? [] : [{ xAxis: cursorT }],
+            },
           },
-        },
-      ],
-    });
+        ],
+      },
+      // Drawn with the next frame: a synchronous update here would rebuild the whole chart in
+      // the caller's task (the first build of a chart is the page's longest).
+      { lazyUpdate: true },
+    );
   }, [cursorT, option]);
 
   const onReady = (chart: EChartsType) => {
     chartRef.current = chart;
+    // The second step waits until the first has been drawn (its draw runs in the next frame).
+    requestAnimationFrame(() => setTimeout(() => setComplete(true), 0));
     if (group) {
       chart.group = group;
       echarts.connect(group);
@@ -255,9 +303,14 @@ export function TimeChart(props: TimeChartProps) {
         return;
       onCursorRef.current?.(Math.min(t1, Math.max(t0, p[0])));
     });
-    chart.setOption({
-      series: [{ id: CURSOR_ID, markLine: { data: cursorT === null ? [] : [{ xAxis: cursorT }] } }],
-    });
+    chart.setOption(
+      {
+        series: [
+          { id: CURSOR_ID, markLine: { data: cursorT === null ? [] : [{ xAxis: cursorT }] } },
+        ],
+      },
+      { lazyUpdate: true },
+    );
   };
 
   const onEvents = useMemo(

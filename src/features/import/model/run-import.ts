@@ -1,7 +1,6 @@
 import { proxy, transfer } from 'comlink';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { ColumnMap } from '../../../../shared/log/column-map';
-import type { ParsedLog } from '../../../../shared/log/types';
 import type { Severity } from '../../../../shared/analysis/report-schema';
 import { parseWorker } from '../../../lib/parse-worker';
 import { analysisWorker } from '../../../lib/analysis-worker';
@@ -38,13 +37,6 @@ export interface ParseProgress {
 
 const severityRank: Record<Severity, number> = { note: 0, watch: 1, act: 2 };
 
-/** Every buffer behind the log's columns, so they move to the analysis worker without a copy. */
-function columnBuffers(log: ParsedLog): ArrayBuffer[] {
-  const seen = new Set<ArrayBuffer>();
-  for (const c of Object.values(log.columns)) seen.add(c.buffer as ArrayBuffer);
-  return [...seen];
-}
-
 /**
  * One file through the same path every import takes: read in the parse worker, analysed in the
  * analysis worker, kept on this device (IndexedDB) for the sync to send later. The review can
@@ -58,12 +50,25 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   const poles = req.poles ?? target.airframe?.poles;
   if (poles !== undefined) options.poles = poles;
 
+  const flightId = req.flightId ?? crypto.randomUUID();
+  // The parse worker hands the columns straight to the analysis worker over this channel; the
+  // page only ever sees the summary and the (small) analysis.
+  const channel = new MessageChannel();
+  const analysing = analysisWorker().analyzeDelivered(
+    flightId,
+    transfer(channel.port2, [channel.port2]),
+    target.airframe ? { airframe: target.airframe } : {},
+  );
+  // Handled below once the read is known to have worked; a failed read rejects this on purpose.
+  analysing.catch(() => undefined);
+
   let result;
   try {
-    result = await parseWorker().parseFile(
+    result = await parseWorker().parseInto(
       jobId,
       file,
       options,
+      transfer(channel.port1, [channel.port1]),
       proxy((p: ParseProgress) => {
         if (!isCancelled()) onStatus({ kind: 'reading', bytes: p.bytes, rows: p.rows });
       }),
@@ -72,10 +77,9 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
     if (isCancelled()) return { kind: 'cancelled' };
     return failed('worker', e);
   }
-  if (isCancelled()) return { kind: 'cancelled' };
   if (!result.ok) {
     const { error } = result;
-    if (error.code === 'cancelled') return { kind: 'cancelled' };
+    if (error.code === 'cancelled' || isCancelled()) return { kind: 'cancelled' };
     if (error.code === 'needs-column-map') {
       const answer = await parseWorker()
         .inspectHeader(file)
@@ -103,16 +107,11 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
     };
   }
 
-  const log = result.log;
-  onStatus({ kind: 'analysing', rows: log.rows });
-  const flightId = req.flightId ?? crypto.randomUUID();
+  const summary = result.summary;
+  onStatus({ kind: 'analysing', rows: summary.rows });
   let analysed;
   try {
-    analysed = await analysisWorker().analyze(
-      flightId,
-      transfer(log, columnBuffers(log)),
-      target.airframe ? { airframe: target.airframe } : {},
-    );
+    analysed = await analysing;
   } catch (e) {
     return failed('analysis', e);
   }
@@ -130,7 +129,7 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
       detail,
       ...(target.teamId ? { teamId: target.teamId } : {}),
       ...(target.aircraftId ? { aircraftId: target.aircraftId } : {}),
-      ...(log.metadata['recorded'] ? { recordedAt: log.metadata['recorded'] } : {}),
+      ...(summary.metadata['recorded'] ? { recordedAt: summary.metadata['recorded'] } : {}),
     });
   } catch (e) {
     return failed('storage', e);

@@ -24,22 +24,29 @@ export function valueAt(
   return y[lo]! + w * (y[hi]! - y[lo]!);
 }
 
+const STRIP_HEIGHT = 150;
+
 export interface FlightStripProps {
+  /** The full effort trace, for the cursor readout. */
   effort: Trace;
+  /** Throttle and collective already thinned for drawing; undefined while the worker thins them. */
+  strip: Trace | undefined;
   time: TimeContext;
   pins: TimePin[];
   onPin: (id: string) => void;
 }
 
 /** Throttle and collective across the whole flight: hover shaded, comments pinned, the cursor shared. */
-export function FlightStrip({ effort, time, pins, onPin }: FlightStripProps) {
+export function FlightStrip({ effort, strip, time, pins, onPin }: FlightStripProps) {
   const series = useMemo(
     () =>
-      traceSeries(effort, [
-        { key: 'throttle', name: 'Throttle', color: inkSeries.throttle },
-        { key: 'collective', name: 'Collective', color: inkSeries.collective, width: 1.6 },
-      ]),
-    [effort],
+      strip
+        ? traceSeries(strip, [
+            { key: 'throttle', name: 'Throttle', color: inkSeries.throttle },
+            { key: 'collective', name: 'Collective', color: inkSeries.collective, width: 1.6 },
+          ])
+        : [],
+    [strip],
   );
   const at = time.cursorT;
   const thr = at === null ? null : valueAt(effort.t, effort.series['throttle'], at);
@@ -60,18 +67,23 @@ export function FlightStrip({ effort, time, pins, onPin }: FlightStripProps) {
           shaded: hover · pins: comments · ← → move · c: comment here
         </span>
       </div>
-      <TimeChart
-        t={effort.t}
-        series={series}
-        {...followReviewTime(time)}
-        pins={pins}
-        onPin={onPin}
-        height={150}
-        yMin={0}
-        yMax={1}
-        slider
-        ariaLabel="Throttle and collective over the flight"
-      />
+      {strip ? (
+        <TimeChart
+          t={strip.t}
+          series={series}
+          {...followReviewTime(time)}
+          pins={pins}
+          onPin={onPin}
+          height={STRIP_HEIGHT}
+          yMin={0}
+          yMax={1}
+          slider
+          sampling={false}
+          ariaLabel="Throttle and collective over the flight"
+        />
+      ) : (
+        <div style={{ height: STRIP_HEIGHT }} aria-busy="true" />
+      )}
     </section>
   );
 }

@@ -4,6 +4,7 @@ import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { TimePin } from '../../../components/charts/time-chart';
 import type { ReviewFlight } from '../api/flight-api';
 import { cursorStep } from '../model/use-cursor';
+import { useStripTrace } from '../model/use-strip';
 import { sections, type SectionId } from '../model/sections';
 import { FlightStrip } from './flight-strip';
 import { SectionNav } from './section-nav';
@@ -58,6 +59,7 @@ export function ReviewPage(props: ReviewPageProps) {
     status,
   } = props;
   const { report, detail } = flight;
+  const strip = useStripTrace(flight.id, detail);
   const durationS = report.durationS;
   const time: TimeContext = useMemo(
     () => ({ cursorT, onCursor, group: `flight-${flight.id}`, hover: report.segments.hover }),
@@ -126,7 +128,7 @@ export function ReviewPage(props: ReviewPageProps) {
           hoverS={report.segments.hoverS}
           onSelect={selectFinding}
         />
-        <FlightStrip effort={detail.effort} time={time} pins={pins} onPin={onPin} />
+        <FlightStrip effort={detail.effort} strip={strip} time={time} pins={pins} onPin={onPin} />
         <SectionNav flightId={flight.id} current={section} />
         <section aria-labelledby="section-title" className="flex flex-col gap-3">
           <div>

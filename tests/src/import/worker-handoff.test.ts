@@ -1,0 +1,93 @@
+import { transfer, wrap, type Remote } from 'comlink';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { AnalysisApi } from '../../../workers/analysis.worker';
+import type { LogDelivery } from '../../../workers/parse.worker';
+import { STRIP_POINTS } from '../../../shared/analysis/review-detail';
+import { scenarios } from '../../../shared/sim/scenarios';
+import { simulate } from '../../../shared/sim/simulate';
+
+/**
+ * The analysis worker's side of the handoff over real MessageChannels: the test plays the
+ * parse worker, posting one LogDelivery on the port the analysis worker listens on. The worker
+ * module's `expose()` listens on the global scope, so the global is pointed at a channel first.
+ */
+let analysis: Remote<AnalysisApi>;
+let close: () => void;
+
+beforeAll(async () => {
+  const { port1, port2 } = new MessageChannel();
+  const scope = globalThis as unknown as Record<string, unknown>;
+  scope.addEventListener = port1.addEventListener.bind(port1);
+  scope.postMessage = port1.postMessage.bind(port1);
+  port1.start();
+  await import('../../../workers/analysis.worker');
+  analysis = wrap<AnalysisApi>(port2 as unknown as Parameters<typeof wrap>[0]);
+  close = () => {
+    port1.close();
+    port2.close();
+  };
+});
+
+afterAll(() => close());
+
+/** A port pair: one end for the analysis worker, the other to post the delivery on. */
+function handoff(delivery: LogDelivery) {
+  const { port1, port2 } = new MessageChannel();
+  const send = () => {
+    const buffers = delivery.ok
+      ? [...new Set(Object.values(delivery.log.columns).map((c) => c.buffer as ArrayBuffer))]
+      : [];
+    port1.postMessage(delivery, buffers);
+  };
+  return { port: transfer(port2, [port2]), send };
+}
+
+const kite = (seconds: number) =>
+  simulate(scenarios['weak-motor']!, { seconds, rateHz: 1000, seed: 3 }).log;
+
+describe('analysis worker handoff', () => {
+  it('analyses a delivered log and thins the strip in the worker', async () => {
+    const log = kite(20);
+    const rows = log.rows;
+    const { port, send } = handoff({ ok: true, log });
+    const analysed = analysis.analyzeDelivered('flight-a', port);
+    send();
+    const { report, detail } = await analysed;
+    expect(report.rows).toBe(rows);
+    expect(detail.strip).toBeDefined();
+    expect(detail.strip!.t.length).toBe(STRIP_POINTS);
+    expect(Object.keys(detail.strip!.series).sort()).toEqual(['collective', 'throttle']);
+    // The log stayed in the worker: the filter bench runs on it without a resend.
+    const bench = await analysis.filterBench('flight-a', 'gyro_x', [{ kind: 'lowpass1', hz: 100 }]);
+    expect(bench.after.hz.length).toBeGreaterThan(0);
+  });
+
+  it('rejects with a named error when word comes that no log is coming', async () => {
+    const { port, send } = handoff({ ok: false });
+    const analysed = analysis.analyzeDelivered('flight-b', port);
+    send();
+    await expect(analysed).rejects.toMatchObject({ name: 'LogNotDeliveredError' });
+  });
+
+  it('keeps a re-read log for the filter bench without analysing it again', async () => {
+    await expect(
+      analysis.filterBench('flight-c', 'gyro_y', [{ kind: 'notch', hz: 200 }]),
+    ).rejects.toMatchObject({ name: 'FlightNotLoadedError' });
+    const { port, send } = handoff({ ok: true, log: kite(10) });
+    const loaded = analysis.loadDelivered('flight-c', port);
+    send();
+    await loaded;
+    const bench = await analysis.filterBench('flight-c', 'gyro_y', [{ kind: 'notch', hz: 200 }]);
+    expect(bench.response.hz.length).toBeGreaterThan(0);
+  });
+
+  it('thins an older flight’s effort trace for the strip on request', async () => {
+    const t = Array.from({ length: 4000 }, (_, i) => i / 20);
+    const strip = await analysis.strip({
+      t,
+      series: { throttle: t.map((v) => Math.abs(Math.sin(v))) },
+    });
+    expect(strip.t.length).toBe(STRIP_POINTS);
+    expect(strip.series.throttle!.length).toBe(STRIP_POINTS);
+  });
+});
