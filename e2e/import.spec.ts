@@ -123,5 +123,19 @@ test('a flight imported as an unknown quad is filed under its aircraft later, re
       timeout: 60_000,
     })
     .toBe(200);
+  // The stored detail carries the geometry the analysis used.
+  const stored = (await (await context.request.get(`/api/flights/${flightId}`)).json()) as {
+    detail: { airframe?: { name: string } };
+  };
+  expect(stored.detail.airframe?.name).toBe('Heron wide-front');
+
+  // With the aircraft out of reach, the top view still draws the flight's own geometry.
+  await page.route('**/api/aircraft/**', (route) => route.abort());
+  await page.reload();
+  await page
+    .getByRole('navigation', { name: 'Evidence' })
+    .getByRole('link', { name: 'Balance' })
+    .click();
+  await expect(page.getByRole('img', { name: /Top view of Heron wide-front/ })).toBeVisible();
   await context.close();
 });

@@ -287,6 +287,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     ),
     campbell: vibration.campbell,
     diagnosis,
+    airframe,
   };
   return { report, detail };
 }

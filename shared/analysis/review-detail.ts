@@ -1,3 +1,5 @@
+import type { Airframe } from '../schemas/airframe';
+
 /**
  * What the review screens draw beyond the flight report: downsampled traces, spectra and the
  * Campbell matrix. Produced by the analysis engine in the worker (or on the server for stored
@@ -40,6 +42,11 @@ export interface ReviewDetail {
    * stored by earlier versions.
    */
   strip?: Trace;
+  /**
+   * The geometry the analysis judged the flight against: the aircraft's own, or the preset it
+   * assumed (then `report.airframe.assumed`). Absent in flights stored by earlier versions.
+   */
+  airframe?: Airframe;
   /** gyro_x/y/z and sp_roll/pitch/yaw when logged. */
   tracking: Trace | null;
   /** vbat, cell_v, ibat when logged. */

@@ -1,4 +1,10 @@
 import { describe, expect, it } from 'vitest';
+import { defaultQuadX, presetAirframe } from '../../../shared/airframe/presets';
+import { analyzeFlight } from '../../../shared/analysis/analyze-flight';
+import { Airframe } from '../../../shared/schemas/airframe';
+import { ReviewDetailLoose } from '../../../shared/schemas/flights';
+import { scenarios } from '../../../shared/sim/scenarios';
+import { simulate } from '../../../shared/sim/simulate';
 import {
   lttbIndices,
   STRIP_POINTS,
@@ -78,5 +84,35 @@ describe('stripTrace', () => {
     const s = stripTrace(e, 100);
     expect(Object.keys(s.series)).toEqual(['collective']);
     expect(JSON.parse(JSON.stringify(s))).toEqual(s);
+  });
+});
+
+describe('the airframe in the detail', () => {
+  const flight = () => simulate(scenarios['clean-quad-x']!, { seed: 4, seconds: 15 });
+
+  it('carries the airframe the analysis was given', () => {
+    const { log } = flight();
+    const heron = presetAirframe('wide-front-x', { name: 'Heron' });
+    const { report, detail } = analyzeFlight(log, { airframe: heron });
+    expect(detail.airframe).toEqual(heron);
+    expect(report.airframe).toEqual({ name: 'Heron', assumed: false });
+  });
+
+  it('carries the preset it assumed when none was given, as the report says', () => {
+    const { log } = flight();
+    const { report, detail } = analyzeFlight(log);
+    expect(report.airframe.assumed).toBe(true);
+    expect(detail.airframe).toEqual(defaultQuadX);
+    expect(Airframe.safeParse(detail.airframe).success).toBe(true);
+  });
+
+  it('passes the server’s loose detail check and keeps the airframe through JSON', () => {
+    const { log } = flight();
+    const { detail } = analyzeFlight(log, { airframe: scenarios['clean-quad-x']!.airframe });
+    const stored = ReviewDetailLoose.parse(JSON.parse(JSON.stringify(detail)));
+    expect(stored.airframe).toEqual(scenarios['clean-quad-x']!.airframe);
+    // A detail stored by an earlier version, without one, is still accepted.
+    const { airframe: _none, ...older } = detail;
+    expect(ReviewDetailLoose.safeParse(JSON.parse(JSON.stringify(older))).success).toBe(true);
   });
 });

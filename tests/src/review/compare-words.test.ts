@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { describeDifferences } from '../../../src/features/compare/model/compare-words';
+import { defaultQuadX, presetAirframe } from '../../../shared/airframe/presets';
+import {
+  describeDifferences,
+  describeGeometryChange,
+} from '../../../src/features/compare/model/compare-words';
 import { sampleReport } from '../helpers/flight-fixture';
 
 const quiet = { findings: [] };
@@ -78,5 +82,61 @@ describe('compare in words', () => {
     expect(describeDifferences(a, sampleReport(quiet))).toEqual([
       'No difference above flight-to-flight noise in balance, torque split, CG, vibration or sag.',
     ]);
+  });
+});
+
+describe('compare: the geometry each flight was judged against', () => {
+  const kite = presetAirframe('quad-x', { name: 'Kite' });
+  const heron = presetAirframe('wide-front-x', { name: 'Heron' });
+
+  it('says so when the balance was judged against different geometry, naming both', () => {
+    const line = describeGeometryChange(
+      { airframe: defaultQuadX, assumed: true },
+      { airframe: heron, assumed: false },
+    );
+    expect(line).toMatch(/different geometry/);
+    expect(line).toContain(`${defaultQuadX.name} (assumed) before`);
+    expect(line).toContain('Heron now');
+  });
+
+  it('stays quiet for the same geometry under another name, or when one is not known', () => {
+    expect(
+      describeGeometryChange(
+        { airframe: kite, assumed: false },
+        {
+          airframe: { ...kite, name: 'Kite after repair', massG: kite.massG + 30 },
+          assumed: false,
+        },
+      ),
+    ).toBeNull();
+    expect(
+      describeGeometryChange(
+        { airframe: null, assumed: false },
+        { airframe: kite, assumed: false },
+      ),
+    ).toBeNull();
+  });
+
+  it('counts a moved design CG or a swapped spin as different geometry', () => {
+    const movedCg = { ...kite, cg: { x: 4, y: 0 } };
+    expect(
+      describeGeometryChange(
+        { airframe: kite, assumed: false },
+        { airframe: movedCg, assumed: false },
+      ),
+    ).not.toBeNull();
+    const swapped = {
+      ...kite,
+      motors: kite.motors.map((m) => ({
+        ...m,
+        spin: m.spin === 'cw' ? ('ccw' as const) : ('cw' as const),
+      })),
+    };
+    expect(
+      describeGeometryChange(
+        { airframe: kite, assumed: false },
+        { airframe: swapped, assumed: false },
+      ),
+    ).not.toBeNull();
   });
 });

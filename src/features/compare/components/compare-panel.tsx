@@ -3,12 +3,24 @@ import type { FlightReport } from '../../../../shared/analysis/report-schema';
 import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import { XyChart } from '../../../components/charts/xy-chart';
 import { inkSeries, motorColor } from '../../../components/charts/palette';
-import { describeDifferences } from '../model/compare-words';
+import type { Airframe } from '../../../../shared/schemas/airframe';
+import { describeDifferences, describeGeometryChange } from '../model/compare-words';
 
 export interface CompareFlight {
   label: string;
   report: FlightReport;
   detail: ReviewDetail;
+  /** The aircraft's airframe, for a flight whose detail predates carrying its own. */
+  airframe?: Airframe;
+}
+
+/** The geometry the flight was judged against: its detail's first, else the aircraft's. */
+function judged(f: CompareFlight) {
+  const own = f.detail.airframe;
+  return {
+    airframe: own ?? f.airframe ?? null,
+    assumed: own ? f.report.airframe.assumed : false,
+  };
 }
 
 export interface CompareCandidate {
@@ -29,6 +41,7 @@ export interface ComparePanelProps {
 }
 
 function Deviations({ f }: { f: CompareFlight }) {
+  const { airframe } = judged(f);
   return (
     <ul className="flex flex-col gap-1">
       {f.report.balance.deviationPct.map((d, i) => {
@@ -41,6 +54,9 @@ function Deviations({ f }: { f: CompareFlight }) {
               style={{ background: motorColor(i + 1) }}
             />
             <span className="w-14">Motor {i + 1}</span>
+            <span className="num w-8 text-xs text-ink-faint">
+              {airframe?.motors[i]?.spin ?? ''}
+            </span>
             <span className="num w-16 text-right">
               {d >= 0 ? '+' : '−'}
               {Math.abs(d).toFixed(1)} %
@@ -65,11 +81,24 @@ function Deviations({ f }: { f: CompareFlight }) {
 
 function Column({ f, title }: { f: CompareFlight; title: string }) {
   const t = f.report.torqueSplit;
+  const { airframe, assumed } = judged(f);
   return (
     <div className="flex min-w-0 flex-col gap-3 rounded border border-line bg-paper-raised p-3">
       <h3 className="text-sm font-semibold text-ink">
         {title} <span className="num font-normal text-ink-faint">{f.label}</span>
       </h3>
+      <p className="text-xs text-ink-soft">
+        Judged against{' '}
+        {airframe ? (
+          <>
+            <span className="font-medium text-ink">{airframe.name}</span>
+            {assumed && ' (assumed)'} · {airframe.motors.length} motors, {airframe.prop.diameterIn}″
+            props
+          </>
+        ) : (
+          'an airframe this flight does not record'
+        )}
+      </p>
       <Deviations f={f} />
       <p className="num text-sm">
         <span className="font-sans text-ink-soft">Torque split </span>cw{' '}
@@ -98,10 +127,12 @@ export function ComparePanel({
 }: ComparePanelProps) {
   const channels = Object.keys(current.detail.spectra);
   const [channel, setChannel] = useState(channels[0] ?? 'gyro_x');
-  const sentences = useMemo(
-    () => (other ? describeDifferences(other.report, current.report) : []),
-    [other, current.report],
-  );
+  const sentences = useMemo(() => {
+    if (!other) return [];
+    const geometry = describeGeometryChange(judged(other), judged(current));
+    const lines = describeDifferences(other.report, current.report);
+    return geometry ? [geometry, ...lines] : lines;
+  }, [other, current]);
   const spectra = useMemo(() => {
     const s = [];
     const a = current.detail.spectra[channel];

@@ -1,4 +1,5 @@
 import type { FlightReport } from '../../../../shared/analysis/report-schema';
+import type { Airframe } from '../../../../shared/schemas/airframe';
 
 const signedPct = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(Math.round(v))} %`;
 
@@ -88,4 +89,46 @@ export function describeDifferences(before: FlightReport, after: FlightReport): 
       'No difference above flight-to-flight noise in balance, torque split, CG, vibration or sag.',
     );
   return out;
+}
+
+/** Positions closer than this are the same motor mount, mm (below any frame's build tolerance). */
+const SAME_PLACE_MM = 0.5;
+
+function sameGeometry(a: Airframe, b: Airframe): boolean {
+  if (a.motors.length !== b.motors.length) return false;
+  const near = (p: { x: number; y: number }, q: { x: number; y: number }) =>
+    Math.hypot(p.x - q.x, p.y - q.y) < SAME_PLACE_MM;
+  const cgA = a.cg ?? { x: 0, y: 0 };
+  const cgB = b.cg ?? { x: 0, y: 0 };
+  return (
+    a.motors.every((m, i) => {
+      const o = b.motors[i]!;
+      return m.spin === o.spin && near(m, o);
+    }) &&
+    near(cgA, cgB) &&
+    (a.thrustExponent ?? 2) === (b.thrustExponent ?? 2)
+  );
+}
+
+/** The geometry a flight was judged against, as its detail (or the aircraft) says. */
+export interface JudgedAirframe {
+  airframe: Airframe | null;
+  assumed: boolean;
+}
+
+const judgedName = (j: JudgedAirframe) => `${j.airframe!.name}${j.assumed ? ' (assumed)' : ''}`;
+
+/**
+ * A sentence when the two flights' balance was judged against different geometry (motor
+ * places, spins, design CG or thrust exponent), so their deviations measure against different
+ * expected shares; null when the geometry matches or is not known for both.
+ */
+export function describeGeometryChange(
+  before: JudgedAirframe,
+  after: JudgedAirframe,
+): string | null {
+  if (!before.airframe || !after.airframe) return null;
+  if (before.airframe.motors.length !== after.airframe.motors.length) return null;
+  if (sameGeometry(before.airframe, after.airframe)) return null;
+  return `The flights were judged against different geometry (${judgedName(before)} before, ${judgedName(after)} now), so each motor's deviation is measured against a different expected share.`;
 }

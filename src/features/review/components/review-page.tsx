@@ -4,6 +4,7 @@ import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { TimePin } from '../../../components/charts/time-chart';
 import type { ReviewFlight } from '../api/flight-api';
 import { cursorStep } from '../model/use-cursor';
+import { drawnAirframe } from '../model/drawn-airframe';
 import { useStripTrace } from '../model/use-strip';
 import { sections, type SectionId } from '../model/sections';
 import { FlightStrip } from './flight-strip';
@@ -21,6 +22,10 @@ import type { TimeContext } from './sections/time-context';
 
 export interface ReviewPageProps {
   flight: ReviewFlight;
+  /**
+   * Geometry to draw when the flight's detail carries none (flights stored by earlier
+   * versions): the aircraft's from the server, or an assumed preset offline.
+   */
   airframe: Airframe;
   airframeAssumed: boolean;
   section: SectionId;
@@ -46,8 +51,8 @@ function isTyping(target: EventTarget | null): boolean {
 export function ReviewPage(props: ReviewPageProps) {
   const {
     flight,
-    airframe,
-    airframeAssumed,
+    airframe: fallbackAirframe,
+    airframeAssumed: fallbackAssumed,
     section,
     cursorT,
     onCursor,
@@ -59,6 +64,10 @@ export function ReviewPage(props: ReviewPageProps) {
     status,
   } = props;
   const { report, detail } = flight;
+  const { airframe, assumed: airframeAssumed } = drawnAirframe(flight, {
+    airframe: fallbackAirframe,
+    assumed: fallbackAssumed,
+  });
   const strip = useStripTrace(flight.id, detail);
   const durationS = report.durationS;
   const time: TimeContext = useMemo(
