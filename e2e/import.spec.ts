@@ -61,6 +61,18 @@ test('an unknown header opens the column map; confirming it reads the flight', a
   await step.getByRole('button', { name: 'Read with this map' }).click();
   await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
   await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
+
+  // After a reload the filter bench reads the kept raw log again, with the map kept beside it.
+  await page
+    .getByRole('navigation', { name: 'Evidence' })
+    .getByRole('link', { name: 'Filter bench', exact: true })
+    .click();
+  await page.reload();
+  await page.getByRole('button', { name: 'Apply to this flight' }).click();
+  await expect(
+    page.getByRole('img', { name: /spectrum before and after the filters/ }),
+  ).toBeVisible({ timeout: 60_000 });
+  await expect(page.getByText(/filter bench could not run|needs a column map/)).toHaveCount(0);
 });
 
 test('a first-time pilot tries a sample flight and lands on its review', async ({ page }) => {
@@ -138,4 +150,65 @@ test('a flight imported as an unknown quad is filed under its aircraft later, re
     .click();
   await expect(page.getByRole('img', { name: /Top view of Heron wide-front/ })).toBeVisible();
   await context.close();
+});
+
+test('a team flight whose headers need a map offers the column-map step to the filter bench', async ({
+  browser,
+}) => {
+  test.setTimeout(240_000);
+  const pilot = await browser.newContext();
+  const email = uniqueEmail('mapper');
+  expect(
+    (
+      await pilot.request.post('/api/auth/sign-up', {
+        data: { name: 'Ivo Kite', email, password: PASSWORD },
+      })
+    ).ok(),
+  ).toBe(true);
+  const team = (await (
+    await pilot.request.post('/api/teams', { data: { name: 'Kite crew' } })
+  ).json()) as { id: string };
+  const res = await pilot.request.post(`/api/teams/${team.id}/aircraft`, {
+    data: { name: 'Kite', airframe: presetAirframe('quad-x', { name: 'Kite 5-inch' }) },
+  });
+  expect(res.ok(), await res.text()).toBe(true);
+
+  // Imported with a map (not saved as a preset) and synced with its raw log.
+  const page = await pilot.newPage();
+  await page.goto('/import');
+  await page.getByLabel('Aircraft').selectOption({ label: 'Kite · 4 motors' });
+  await page.getByLabel('Flight logs').setInputFiles(writeForeignHeaderCsv());
+  const step = page.getByRole('region', { name: /Column map for kite-export\.csv/ });
+  for (const h of ['Out0', 'Out1', 'Out2', 'Out3'])
+    await step.getByLabel(`Unit for ${h}`).selectOption('frac');
+  await step.getByRole('button', { name: 'Read with this map' }).click();
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  const flightId = new URL(page.url()).pathname.split('/')[2]!;
+  await expect
+    .poll(async () => (await pilot.request.get(`/api/flights/${flightId}/raw`)).status(), {
+      timeout: 90_000,
+    })
+    .toBe(200);
+  const session = await pilot.storageState();
+  await pilot.close();
+
+  // On another device there is no copy and the team has no preset for these headers: the bench asks.
+  const other = await browser.newContext({ storageState: session });
+  const review = await other.newPage();
+  await review.goto(`/flights/${flightId}/filters`);
+  const ask = review.getByRole('alert').filter({ hasText: 'needs a column map' });
+  await expect(ask).toBeVisible({ timeout: 60_000 });
+  await ask.getByRole('link', { name: 'Map the columns…' }).click();
+  const remap = review.getByRole('region', { name: /Column map for the stored log/ });
+  await expect(remap).toBeVisible({ timeout: 30_000 });
+  for (const h of ['Out0', 'Out1', 'Out2', 'Out3'])
+    await remap.getByLabel(`Unit for ${h}`).selectOption('frac');
+  await remap.getByRole('button', { name: 'Read with this map' }).click();
+
+  // Back on the bench, which reads the stored log with that map.
+  await expect(review).toHaveURL(new RegExp(`/flights/${flightId}/filters`));
+  await expect(
+    review.getByRole('img', { name: /spectrum before and after the filters/ }),
+  ).toBeVisible({ timeout: 60_000 });
+  await other.close();
 });

@@ -1,6 +1,7 @@
 import Dexie, { type EntityTable } from 'dexie';
 import type { FlightReport } from '../../shared/analysis/report-schema';
 import type { ReviewDetail } from '../../shared/analysis/review-detail';
+import type { ColumnMap } from '../../shared/log/column-map';
 
 /**
  * The device's own store: every log read on this device is kept here before any network is
@@ -16,6 +17,10 @@ export interface LocalFlight {
   fileName: string;
   /** The raw log exactly as dropped (CSV or gzip). */
   file: Blob;
+  /** The column map the log was read with, when its headers needed one (to read it again). */
+  columnMap?: ColumnMap;
+  /** Motor pole count the log's eRPM columns were read with. */
+  poles?: number;
   report: FlightReport;
   detail: ReviewDetail;
   teamId?: string;
@@ -56,15 +61,35 @@ export interface OutboxEntry {
   lastError?: string;
 }
 
+/**
+ * A column map confirmed on this device for a flight stored by the team, so its raw log can be
+ * read again (the filter bench) when no team preset covers its headers.
+ */
+export interface RereadMap {
+  flightId: string;
+  columnMap: ColumnMap;
+  /** ms since epoch. */
+  savedAt: number;
+}
+
 export class LocalDatabase extends Dexie {
   flights!: EntityTable<LocalFlight, 'id'>;
   outbox!: EntityTable<OutboxEntry, 'seq'>;
+  rereadMaps!: EntityTable<RereadMap, 'flightId'>;
 
   constructor(name = 'hoverprint') {
     super(name);
     this.version(1).stores({
       flights: 'id, savedAt, syncState, teamId, aircraftId',
       outbox: '++seq, id, state',
+    });
+    // v2: flights keep the column map and pole count they were read with (plain fields, not
+    // indexed; a flight from v1 has none, as it was read without), and maps confirmed for
+    // team flights get their own table.
+    this.version(2).stores({
+      flights: 'id, savedAt, syncState, teamId, aircraftId',
+      outbox: '++seq, id, state',
+      rereadMaps: 'flightId',
     });
   }
 }
@@ -86,6 +111,8 @@ export interface SaveLocalFlightInput {
   id: string;
   fileName: string;
   file: Blob;
+  columnMap?: ColumnMap;
+  poles?: number;
   report: FlightReport;
   detail: ReviewDetail;
   teamId?: string;
@@ -179,6 +206,15 @@ export async function markFlightAttemptFailed(
     syncState: retryAt === null ? 'failed' : 'pending',
     nextAttemptAt: retryAt ?? 0,
   });
+}
+
+/** Keep the column map confirmed for a team flight's raw log, replacing an earlier one. */
+export async function saveRereadMap(flightId: string, columnMap: ColumnMap): Promise<void> {
+  await localDb().rereadMaps.put({ flightId, columnMap, savedAt: Date.now() });
+}
+
+export async function getRereadMap(flightId: string): Promise<ColumnMap | undefined> {
+  return (await localDb().rereadMaps.get(flightId))?.columnMap;
 }
 
 /** Remove a flight from this device; the caller decides whether that is safe. */

@@ -1,9 +1,12 @@
 import 'fake-indexeddb/auto';
+import Dexie from 'dexie';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import type { ColumnMap } from '../../../shared/log/column-map';
 import {
   closeLocalDb,
   enqueue,
   getLocalFlight,
+  getRereadMap,
   listLocalFlights,
   listOutbox,
   listUnsyncedFlights,
@@ -12,6 +15,7 @@ import {
   markSynced,
   retryFailed,
   saveLocalFlight,
+  saveRereadMap,
 } from '../../../src/lib/local-db';
 import { sampleDetail, sampleFile, sampleReport } from '../helpers/flight-fixture';
 
@@ -93,5 +97,79 @@ describe('outbox', () => {
     await enqueue({ id: id(6), method: 'DELETE', path: '/api/comments/6' });
     await closeLocalDb();
     expect((await listOutbox()).map((e) => e.path)).toEqual(['/api/comments/6']);
+  });
+});
+
+describe('reading a kept log again', () => {
+  const kiteMap: ColumnMap = {
+    columns: {
+      'Timestamp (s)': { channel: 'time', unit: 's' },
+      Out0: { channel: 'motor1', unit: 'frac' },
+    },
+  };
+
+  it('keeps the column map and pole count a flight was read with', async () => {
+    await saveLocalFlight({
+      id: id(7),
+      fileName: 'kite-export.csv',
+      file: sampleFile('Timestamp (s),Out0\n0,0.5\n'),
+      columnMap: kiteMap,
+      poles: 14,
+      report: sampleReport(),
+      detail: sampleDetail(),
+    });
+    const flight = await getLocalFlight(id(7));
+    expect(flight?.columnMap).toEqual(kiteMap);
+    expect(flight?.poles).toBe(14);
+  });
+
+  it('keeps a map confirmed for a team flight, the latest one winning', async () => {
+    expect(await getRereadMap(id(8))).toBeUndefined();
+    await saveRereadMap(id(8), kiteMap);
+    const other: ColumnMap = {
+      columns: { ...kiteMap.columns, Out1: { channel: 'motor2', unit: 'frac' } },
+    };
+    await saveRereadMap(id(8), other);
+    await closeLocalDb();
+    expect(await getRereadMap(id(8))).toEqual(other);
+  });
+
+  it('opens a database written by the first version with its flights and outbox intact', async () => {
+    await localDb().delete();
+    await closeLocalDb();
+    const v1 = new Dexie('hoverprint');
+    v1.version(1).stores({
+      flights: 'id, savedAt, syncState, teamId, aircraftId',
+      outbox: '++seq, id, state',
+    });
+    await v1.table('flights').put({
+      id: id(9),
+      fileName: 'old.csv',
+      file: sampleFile(),
+      report: sampleReport(),
+      detail: sampleDetail(),
+      savedAt: 1,
+      syncState: 'pending',
+      attempts: 0,
+      nextAttemptAt: 0,
+    });
+    await v1.table('outbox').add({
+      id: id(9),
+      method: 'DELETE',
+      path: '/api/comments/9',
+      createdAt: 1,
+      state: 'pending',
+      attempts: 0,
+      nextAttemptAt: 0,
+    });
+    v1.close();
+
+    expect(localDb().verno).toBe(2);
+    const old = await getLocalFlight(id(9));
+    expect(old?.fileName).toBe('old.csv');
+    expect(old?.columnMap).toBeUndefined();
+    expect((await listOutbox()).map((e) => e.path)).toEqual(['/api/comments/9']);
+    await saveRereadMap(id(9), kiteMap);
+    expect(await getRereadMap(id(9))).toEqual(kiteMap);
   });
 });

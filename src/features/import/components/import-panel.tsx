@@ -1,12 +1,15 @@
 import { Caution } from '../../../components/ui/caution';
 import { useCallback, useEffect, useReducer, useRef, useState } from 'react';
 import { useDropzone } from 'react-dropzone';
+import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
 import type { ColumnMap } from '../../../../shared/log/column-map';
+import { saveRereadMap } from '../../../lib/local-db';
 import { parseWorker } from '../../../lib/parse-worker';
 import { isLogFile, jobsReducer, nextQueued, type ImportJob } from '../model/import-jobs';
 import { runImport } from '../model/run-import';
+import { loadRemapSource } from '../model/remap-source';
 import { synthesiseSampleFile } from '../model/sample-flight';
 import { presetQueries, useSavePreset } from '../api/preset-api';
 import { AircraftPicker, UNKNOWN_AIRCRAFT } from './aircraft-picker';
@@ -42,6 +45,29 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
   const single = useRef<string | null>(null);
   const presets = useQuery({ ...presetQueries.team(teamId ?? ''), enabled: teamId !== null });
   const savePreset = useSavePreset(teamId ?? '');
+
+  // `?remap=<flight id>`: the review's filter bench could not read a kept flight's raw log
+  // again without a column map; the map confirmed here is kept on this device for that flight.
+  const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
+  const remapId = params.get('remap');
+  const remap = useQuery({
+    queryKey: ['import', 'remap', remapId],
+    queryFn: () => loadRemapSource(remapId!),
+    enabled: remapId !== null,
+    staleTime: Infinity,
+    retry: false,
+  });
+  const [remapError, setRemapError] = useState<string | null>(null);
+  const endRemap = () =>
+    setParams(
+      (old) => {
+        const next = new URLSearchParams(old);
+        next.delete('remap');
+        return next;
+      },
+      { replace: true },
+    );
 
   const addFiles = useCallback((files: File[]) => {
     const items = files.map((file) => ({ id: crypto.randomUUID(), file }));
@@ -191,6 +217,49 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
           <p role="alert" className="text-sm text-sev-act">
             Not a log we read (.csv or .csv.gz): <span className="num">{rejected.join(', ')}</span>
           </p>
+        )}
+        {remapId !== null && (
+          <section
+            aria-label="Column map for a kept flight"
+            className="flex flex-col gap-2 rounded border border-line bg-paper-raised p-3"
+          >
+            <p className="text-sm text-ink-soft">
+              Map the columns of a flight already kept, so its review can read the raw log again
+              (filter bench). Nothing is imported again.
+            </p>
+            {remap.isPending && <p className="text-sm text-ink-soft">Reading its header…</p>}
+            {remap.isError && (
+              <p role="alert" className="text-sm text-sev-act">
+                {remap.error.message}
+              </p>
+            )}
+            {remapError && (
+              <p role="alert" className="text-sm text-sev-act">
+                The map was not kept: {remapError}
+              </p>
+            )}
+            {remap.data && (
+              <ColumnMapStep
+                fileName={remap.data.fileName}
+                proposal={remap.data.preview.proposal}
+                sampleRows={remap.data.preview.sampleRows}
+                {...(() => {
+                  const p = matchingPreset(presets.data?.presets, remap.data.preview.headers);
+                  return p ? { preset: p } : {};
+                })()}
+                canSavePreset={teamId !== null && canSavePreset}
+                onCancel={endRemap}
+                onConfirm={(columnMap, presetName) => {
+                  const flightId = remap.data.flightId;
+                  if (presetName && teamId) savePreset.mutate({ name: presetName, columnMap });
+                  saveRereadMap(flightId, columnMap).then(
+                    () => navigate(`/flights/${encodeURIComponent(flightId)}/filters`),
+                    (e: unknown) => setRemapError(e instanceof Error ? e.message : String(e)),
+                  );
+                }}
+              />
+            )}
+          </section>
         )}
         {mapping && mapping.status.kind === 'needs-map' && (
           <ColumnMapStep

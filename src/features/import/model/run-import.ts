@@ -125,6 +125,9 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
       id: flightId,
       fileName: req.fileName ?? (file instanceof File ? file.name : 'flight.csv'),
       file,
+      // Kept so the log can be read again the same way (filter bench after a reload).
+      ...(options.columnMap ? { columnMap: options.columnMap } : {}),
+      ...(options.poles !== undefined ? { poles: options.poles } : {}),
       report,
       detail,
       ...(target.teamId ? { teamId: target.teamId } : {}),

@@ -5,6 +5,8 @@ import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import { Aircraft } from '../../../../shared/schemas/aircraft';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import { FlightDetail, FlightPage } from '../../../../shared/schemas/flights';
+import type { ColumnMap } from '../../../../shared/log/column-map';
+import { PresetList } from '../../../../shared/schemas/presets';
 import { ReviewDetailLoose } from '../../../../shared/schemas/flights';
 import { pathTo } from '../../../../shared/api/paths';
 import { apiFetch, ApiError } from '../../../lib/api-fetch';
@@ -25,6 +27,8 @@ export interface ReviewFlight {
   recordedAt: string | null;
   /** Raw log kept on this device, to re-read for the filter bench after a reload. */
   file: Blob | null;
+  /** How the log was read on this device (column map, pole count), to read it again alike. */
+  readOptions: { columnMap?: ColumnMap; poles?: number };
   /** The team server has the flight (comments live there). */
   syncedToTeam: boolean;
 }
@@ -60,6 +64,10 @@ export async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
       pilotId: null,
       recordedAt: local.recordedAt ?? null,
       file: local.file,
+      readOptions: {
+        ...(local.columnMap ? { columnMap: local.columnMap } : {}),
+        ...(local.poles !== undefined ? { poles: local.poles } : {}),
+      },
       syncedToTeam: local.syncState === 'synced' || local.summarySynced === true,
     };
   }
@@ -81,6 +89,7 @@ export async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
       pilotId: stored.pilot.id,
       recordedAt: stored.recordedAt,
       file: null,
+      readOptions: {},
       syncedToTeam: true,
     };
   } catch (e) {
@@ -117,6 +126,10 @@ export async function fetchRawLog(id: string): Promise<Blob> {
     );
   return res.blob();
 }
+
+/** The team's import presets, to read a stored flight's raw log whose headers need a map. */
+export const fetchTeamPresets = (teamId: string) =>
+  apiFetch(pathTo('presets', { teamId }), PresetList);
 
 export const reviewKeys = {
   all: ['review'] as const,

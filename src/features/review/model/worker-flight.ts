@@ -1,23 +1,82 @@
+import { transfer } from 'comlink';
 import type { FilterSpec } from '../../../../shared/analysis/filters/filter-spec';
+import type { ColumnMap } from '../../../../shared/log/column-map';
+import type { ReadOptions } from '../../../../shared/log/parse';
 import type { Airframe } from '../../../../shared/schemas/airframe';
+import type { ParseFailure } from '../../../../workers/parse.worker';
 import { analysisWorker } from '../../../lib/analysis-worker';
+import { getRereadMap } from '../../../lib/local-db';
 import { parseWorker } from '../../../lib/parse-worker';
-import { fetchRawLog, type ReviewFlight } from '../api/flight-api';
+import { fetchRawLog, fetchTeamPresets, type ReviewFlight } from '../api/flight-api';
+
+/** The raw log's headers need a column map that neither this device nor the team has. */
+export class NeedsColumnMapError extends Error {
+  override name = 'NeedsColumnMapError';
+}
 
 const loading = new Map<string, Promise<void>>();
 
+/** A team preset that maps every one of these headers (the rule the import uses too). */
+function coveringPreset(presets: { columnMap: ColumnMap }[], headers: string[]) {
+  if (headers.length === 0) return undefined;
+  return presets.find((p) => headers.every((h) => h in p.columnMap.columns))?.columnMap;
+}
+
+/** Reads the file in the parse worker straight into the analysis worker's cache; null when kept. */
+async function readInto(
+  flight: ReviewFlight,
+  file: Blob,
+  options: ReadOptions,
+  airframe: Airframe,
+): Promise<ParseFailure | null> {
+  const channel = new MessageChannel();
+  const kept = analysisWorker().loadDelivered(flight.id, transfer(channel.port2, [channel.port2]), {
+    airframe,
+  });
+  kept.catch(() => undefined); // a failed read says why through its own result
+  const read = await parseWorker().parseInto(
+    `bench-${flight.id}`,
+    file,
+    options,
+    transfer(channel.port1, [channel.port1]),
+  );
+  if (!read.ok) return read.error;
+  await kept;
+  return null;
+}
+
 /**
  * The analysis worker keeps a log only for the tab that imported it. After a reload, or for a
- * flight stored by the team, the raw log is read again (from this device, else the server) so
- * the filter bench can run on the flight's own gyro.
+ * flight stored by the team, the raw log is read again (from this device, else the server) the
+ * way it was read at import: with the column map kept with the flight, or one confirmed on this
+ * device for it, or else the team's import preset that covers its headers.
  */
 async function loadIntoWorker(flight: ReviewFlight, airframe: Airframe): Promise<void> {
   const file = flight.file ?? (await fetchRawLog(flight.id));
-  const parsed = await parseWorker().parseFile(`bench-${flight.id}`, file, {
-    ...(airframe.poles ? { poles: airframe.poles } : {}),
-  });
-  if (!parsed.ok) throw new Error(`The raw log could not be read again: ${parsed.error.message}`);
-  await analysisWorker().analyze(flight.id, parsed.log, { airframe });
+  const poles = flight.readOptions.poles ?? airframe.poles;
+  const base: ReadOptions = poles !== undefined ? { poles } : {};
+  const kept =
+    flight.readOptions.columnMap ?? (await getRereadMap(flight.id).catch(() => undefined));
+  let failure = await readInto(flight, file, kept ? { ...base, columnMap: kept } : base, airframe);
+  if (!failure) return;
+  if (failure.code === 'needs-column-map' && !kept) {
+    const presets =
+      flight.teamId === null
+        ? []
+        : await fetchTeamPresets(flight.teamId).then(
+            (r) => r.presets,
+            () => [], // offline or signed out: no presets to try
+          );
+    const preset = coveringPreset(presets, failure.headers ?? []);
+    if (!preset) {
+      throw new NeedsColumnMapError(
+        'The raw log’s columns need a column map to be read again, and none is kept for this flight or among the team’s import presets.',
+      );
+    }
+    failure = await readInto(flight, file, { ...base, columnMap: preset }, airframe);
+    if (!failure) return;
+  }
+  throw new Error(`The raw log could not be read again: ${failure.message}`);
 }
 
 /** Filter response and before/after spectra for one channel; reloads the log once if needed. */
@@ -29,20 +88,14 @@ export async function runFilterBench(
 ) {
   try {
     return await analysisWorker().filterBench(flight.id, channel, specs);
-  } catch (first) {
+  } catch {
+    // Not loaded in this tab's worker (a reload, or a team flight): read the raw log again.
     let pending = loading.get(flight.id);
     if (!pending) {
       pending = loadIntoWorker(flight, airframe).finally(() => loading.delete(flight.id));
       loading.set(flight.id, pending);
     }
-    try {
-      await pending;
-    } catch (e) {
-      throw new Error(
-        `${e instanceof Error ? e.message : String(e)} (first attempt: ${first instanceof Error ? first.message : String(first)})`,
-        { cause: e },
-      );
-    }
+    await pending;
     return analysisWorker().filterBench(flight.id, channel, specs);
   }
 }

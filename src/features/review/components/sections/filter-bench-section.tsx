@@ -1,5 +1,6 @@
 import { Caution } from '../../../../components/ui/caution';
 import { useState } from 'react';
+import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import {
   DEFAULT_LOWPASS_Q,
@@ -198,11 +199,32 @@ export function FilterBenchSection({
       {bench.isPending && applied !== null && (
         <p className="text-sm text-ink-soft">Filtering the gyro in the worker…</p>
       )}
-      {bench.isError && (
-        <p role="alert" className="text-sm text-sev-act">
-          The filter bench could not run: {bench.error.message}
-        </p>
-      )}
+      {bench.isError &&
+        (bench.error.name === 'NeedsColumnMapError' ? (
+          <div
+            role="alert"
+            className="rounded border-l-4 border-sev-watch bg-paper-raised px-4 py-3"
+          >
+            <p className="text-sm font-semibold text-ink">
+              This log needs a column map to be read again
+            </p>
+            <p className="mt-1 text-sm text-ink-soft">
+              Its headers are not ours, and no map is kept for this flight nor among the team&apos;s
+              import presets. Map its columns once and the filter bench reads it with that map from
+              then on.
+            </p>
+            <Link
+              to={`/import?remap=${encodeURIComponent(flight.id)}`}
+              className="mt-2 inline-block rounded bg-slate-brand px-3 py-1 text-xs font-medium text-paper"
+            >
+              Map the columns…
+            </Link>
+          </div>
+        ) : (
+          <p role="alert" className="text-sm text-sev-act">
+            The filter bench could not run: {bench.error.message}
+          </p>
+        ))}
       {r && (
         <div className="grid gap-4 lg:grid-cols-2">
           <XyChart
