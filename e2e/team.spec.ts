@@ -65,3 +65,40 @@ test('the owner invites a coach, who joins through the link in the dev inbox and
   await owner.screenshot({ path: `${artifacts}team-desktop.png`, fullPage: true });
   await coachContext.close();
 });
+
+test('the owner withdraws an invitation, and its link then says so and lets nobody in', async ({
+  browser,
+}) => {
+  const owner = await browser.newPage();
+  const guestEmail = uniqueEmail('guest');
+  await signUp(owner, { name: 'Tamsin Reed', email: uniqueEmail('owner') });
+  await createTeam(owner, 'Heron filming');
+  await owner.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();
+  const invite = owner.getByRole('form', { name: 'Invite' });
+  await invite.getByLabel('E-mail').fill(guestEmail);
+  await invite.getByRole('button', { name: 'Send invite' }).click();
+  const invitations = owner.getByRole('table', { name: 'Invitations' });
+  const row = invitations.getByRole('row').filter({ hasText: guestEmail });
+  await expect(row).toContainText('open until');
+  const mail = await mailTo(owner.request, guestEmail, /invit|join/i);
+  const link = linkIn(mail, '/invite/');
+
+  // Declining the confirmation leaves it open; accepting it withdraws.
+  owner.once('dialog', (d) => void d.dismiss());
+  await row.getByRole('button', { name: /^Withdraw/ }).click();
+  await expect(row).toContainText('open until');
+  owner.once('dialog', (d) => {
+    expect(d.message()).toContain(guestEmail);
+    void d.accept();
+  });
+  await row.getByRole('button', { name: /^Withdraw/ }).click();
+  await expect(row).toContainText('withdrawn');
+  await expect(row.getByRole('button', { name: /^Withdraw/ })).toHaveCount(0);
+
+  const guestContext = await browser.newContext();
+  const guest = await guestContext.newPage();
+  await guest.goto(link);
+  await expect(guest.getByText('This invitation was withdrawn by the team owner.')).toBeVisible();
+  await expect(guest.getByRole('button', { name: 'Create account' })).toHaveCount(0);
+  await guestContext.close();
+});

@@ -21,5 +21,8 @@ export class Invite {
   @Column('integer') expiresAt!: number;
   @Column('integer', { nullable: true }) acceptedAt!: number | null;
   @Column('text', { nullable: true }) acceptedById!: string | null;
+  /** Unix ms; set when the owner withdraws the invitation before anyone accepts it. */
+  @Column('integer', { nullable: true }) withdrawnAt!: number | null;
+  @Column('text', { nullable: true }) withdrawnById!: string | null;
   @Column('integer') createdAt!: number;
 }

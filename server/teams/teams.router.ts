@@ -1,6 +1,12 @@
 import { Router } from 'express';
 import { paths } from '../../shared/api/paths';
-import { MemberParam, TeamIdParam, TokenParam, IdParam } from '../../shared/schemas/common';
+import {
+  IdParam,
+  InviteParam,
+  MemberParam,
+  TeamIdParam,
+  TokenParam,
+} from '../../shared/schemas/common';
 import {
   PresetInput,
   PresetPatch,
@@ -84,6 +90,12 @@ export function teamsRouter({ teams, thresholds, presets }: Services) {
     res
       .status(201)
       .json((await teams.invite(user.id, teamId, InviteInput.parse(req.body))) satisfies Invite);
+  });
+  router.delete(paths.teamInvite, async (req, res) => {
+    const user = requireUser(req);
+    const { teamId, inviteId } = InviteParam.parse(req.params);
+    await teams.withdrawInvite(user.id, teamId, inviteId);
+    res.status(204).end();
   });
   /** Shown on the invite page before signing in. */
   router.get(paths.invite, async (req, res) => {

@@ -5,13 +5,14 @@ import type {
   Invite as InviteDto,
   InviteInput,
   InvitePreview,
+  InviteState,
   Member,
   Team as TeamDto,
 } from '../../shared/schemas/teams';
 import { User } from '../auth/user.entity';
 import { hashToken, newToken } from '../auth/tokens';
 import type { Config } from '../config';
-import { BadRequestError, ConflictError, NotFoundError } from '../http/errors';
+import { AppError, BadRequestError, ConflictError, NotFoundError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { inviteMail, inviteUrl } from '../mail/templates';
 import { iso, isoOrNull } from '../util';
@@ -24,6 +25,13 @@ import { assertCan } from './permissions';
 import { Team } from './team.entity';
 
 const INVITE_TTL_MS = 7 * 24 * 60 * 60 * 1000;
+
+/** Accepted and withdrawn are final; an invite nobody used runs out after its week. */
+export function inviteState(i: Invite, now = Date.now()): InviteState {
+  if (i.acceptedAt !== null) return 'accepted';
+  if (i.withdrawnAt !== null) return 'withdrawn';
+  return i.expiresAt <= now ? 'expired' : 'open';
+}
 
 export class TeamsService {
   constructor(
@@ -191,6 +199,8 @@ export class TeamsService {
       expiresAt: now + INVITE_TTL_MS,
       acceptedAt: null,
       acceptedById: null,
+      withdrawnAt: null,
+      withdrawnById: null,
       createdAt: now,
     };
     await this.ds.getRepository(Invite).insert(invite);
@@ -210,16 +220,18 @@ export class TeamsService {
     return { ...this.inviteDto(invite, by.name), link: inviteUrl(this.config, token) };
   }
 
-  private inviteDto(i: Invite, invitedBy: string): InviteDto {
+  private inviteDto(i: Invite, invitedBy: string, now = Date.now()): InviteDto {
     return {
       id: i.id,
       teamId: i.teamId,
       email: i.email,
       role: i.role as Role,
+      state: inviteState(i, now),
       expiresAt: iso(i.expiresAt),
       createdAt: iso(i.createdAt),
       invitedBy,
       acceptedAt: isoOrNull(i.acceptedAt),
+      withdrawnAt: isoOrNull(i.withdrawnAt),
     };
   }
 
@@ -233,18 +245,51 @@ export class TeamsService {
         .orderBy('i.createdAt', 'DESC'),
       'i.invitedById',
     );
-    return rows.map(([invite, invitedBy]) => this.inviteDto(invite, invitedBy));
+    const now = Date.now();
+    return rows.map(([invite, invitedBy]) => this.inviteDto(invite, invitedBy, now));
   }
 
-  private async openInvite(token: string): Promise<Invite> {
-    const invite = await this.ds.getRepository(Invite).findOneBy({ tokenHash: hashToken(token) });
-    if (!invite || invite.acceptedAt !== null || invite.expiresAt <= Date.now()) {
-      throw new BadRequestError(
-        'This invitation is invalid, already used or expired. Ask for a new one.',
-        'invalid_token',
+  /**
+   * The owner takes back an invitation nobody has used: its link stops working at once and
+   * says it was withdrawn. Withdrawing twice is harmless; an accepted one is a member to remove.
+   */
+  async withdrawInvite(actorId: string, teamId: string, inviteId: string): Promise<void> {
+    await this.authorize(actorId, teamId, 'invites.manage');
+    const repo = this.ds.getRepository(Invite);
+    const invite = await repo.findOneBy({ id: inviteId, teamId });
+    if (!invite) throw new NotFoundError('Invitation');
+    if (invite.withdrawnAt !== null) return;
+    const done = await repo.update(
+      { id: inviteId, acceptedAt: IsNull(), withdrawnAt: IsNull() },
+      { withdrawnAt: Date.now(), withdrawnById: actorId },
+    );
+    if (!done.affected) {
+      throw new ConflictError(
+        `${invite.email} has already joined with this invitation; remove them from the members instead.`,
+        'invite_accepted',
       );
     }
-    return invite;
+  }
+
+  /** The invite behind a link, if it still lets someone in; otherwise says plainly why not. */
+  private async openInvite(token: string): Promise<Invite> {
+    const invite = await this.ds.getRepository(Invite).findOneBy({ tokenHash: hashToken(token) });
+    const state = invite ? inviteState(invite) : null;
+    if (invite && state === 'open') return invite;
+    if (state === 'withdrawn')
+      throw new AppError(
+        410,
+        'invite_withdrawn',
+        'This invitation was withdrawn by the team owner.',
+      );
+    throw new BadRequestError(
+      state === 'accepted'
+        ? 'This invitation has already been used.'
+        : state === 'expired'
+          ? 'This invitation has expired.'
+          : 'This invitation link is not valid.',
+      'invalid_token',
+    );
   }
 
   async previewInvite(token: string): Promise<InvitePreview> {
@@ -267,14 +312,17 @@ export class TeamsService {
       .getRepository(Membership)
       .findOneBy({ teamId: invite.teamId, userId });
     if (already) throw new ConflictError('You are already in this team.', 'already_member');
+    // Spent only if still open: a withdrawal or another acceptance in between wins.
     const spent = await this.ds
       .getRepository(Invite)
       .update(
-        { id: invite.id, acceptedAt: IsNull() },
+        { id: invite.id, acceptedAt: IsNull(), withdrawnAt: IsNull() },
         { acceptedAt: Date.now(), acceptedById: userId },
       );
-    if (!spent.affected)
+    if (!spent.affected) {
+      await this.openInvite(token); // throws why it is no longer open
       throw new BadRequestError('This invitation was just used.', 'invalid_token');
+    }
     await this.ds
       .getRepository(Membership)
       .insert({ teamId: invite.teamId, userId, role: invite.role, joinedAt: Date.now() });

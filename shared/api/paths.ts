@@ -18,6 +18,7 @@ export const paths = {
   members: '/api/teams/:teamId/members',
   member: '/api/teams/:teamId/members/:userId',
   invites: '/api/teams/:teamId/invites',
+  teamInvite: '/api/teams/:teamId/invites/:inviteId',
   invite: '/api/invites/:token',
   acceptInvite: '/api/invites/:token/accept',
   thresholds: '/api/teams/:teamId/thresholds',

@@ -7,6 +7,7 @@ export type Id = z.infer<typeof Id>;
 export const IdParam = z.object({ id: Id });
 export const TeamIdParam = z.object({ teamId: Id });
 export const MemberParam = z.object({ teamId: Id, userId: Id });
+export const InviteParam = z.object({ teamId: Id, inviteId: Id });
 export const TokenParam = z.object({
   token: z.string().regex(/^[A-Za-z0-9_-]{20,128}$/, 'malformed token'),
 });

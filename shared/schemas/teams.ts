@@ -38,15 +38,25 @@ export type MemberPatch = z.infer<typeof MemberPatch>;
 export const InviteInput = z.object({ email: Email, role: Role });
 export type InviteInput = z.infer<typeof InviteInput>;
 
+/**
+ * Where an invitation stands: `open` until someone joins with it (`accepted`), the owner takes it
+ * back (`withdrawn`) or its week runs out (`expired`). Only an open link lets anyone in.
+ */
+export const InviteState = z.enum(['open', 'accepted', 'withdrawn', 'expired']);
+export type InviteState = z.infer<typeof InviteState>;
+
 export const Invite = z.object({
   id: Id,
   teamId: Id,
   email: z.string(),
   role: Role,
+  state: InviteState,
   expiresAt: IsoDateTime,
+  /** When it was sent. */
   createdAt: IsoDateTime,
   invitedBy: z.string(),
   acceptedAt: IsoDateTime.nullable(),
+  withdrawnAt: IsoDateTime.nullable(),
   /**
    * The accept link, for the owner to pass on by hand. Only in the answer that creates the invite:
    * the server keeps just a hash of the token, so it cannot show the link again later.

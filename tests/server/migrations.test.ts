@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import { parseConfig } from '../../server/config';
 import { openDatabase } from '../../server/db/data-source';
+import { migrations } from '../../server/db/migrations';
 import { tempDir } from './helpers/temp-dir';
 
 describe('migrations', () => {
@@ -17,7 +18,7 @@ describe('migrations', () => {
   });
 
   it('create the schema the entities describe, leaving nothing for synchronize to do', async () => {
-    expect(applied).toEqual(['Initial1764633600000']);
+    expect(applied).toEqual(['Initial1764633600000', 'InviteWithdrawal1764720000000']);
     const pending = await ds.driver.createSchemaBuilder().log();
     expect(pending.upQueries.map((q) => q.query)).toEqual([]);
   });
@@ -48,8 +49,8 @@ describe('migrations', () => {
     expect(plan.map((p) => p.detail).join(' ')).not.toContain('TEMP B-TREE');
   });
 
-  it('roll back cleanly', async () => {
-    await ds.undoLastMigration();
+  it('roll back cleanly, newest first', async () => {
+    for (let i = 0; i < migrations.length; i++) await ds.undoLastMigration();
     const tables = (await ds.query(
       "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'",
     )) as { name: string }[];

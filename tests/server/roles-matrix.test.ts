@@ -174,6 +174,18 @@ const cases: Case[] = [
     allowed: (r) => has(r, 'manage team'),
   },
   {
+    name: 'withdraw an invite',
+    method: 'delete',
+    setup: async (c) => {
+      const invite = await c.t.services.teams.invite(c.ids.owner, c.teamId, {
+        email: `${randomUUID()}@crew.example`,
+        role: 'pilot',
+      });
+      return { path: `/api/teams/${c.teamId}/invites/${invite.id}` };
+    },
+    allowed: (r) => has(r, 'manage team'),
+  },
+  {
     name: 'list invites',
     method: 'get',
     setup: async (c) => ({ path: `/api/teams/${c.teamId}/invites` }),

@@ -34,6 +34,8 @@ export const removeMember = (teamId: string, userId: string) =>
 export const fetchInvites = (teamId: string) => apiFetch(pathTo('invites', { teamId }), InviteList);
 export const createInvite = (teamId: string, input: InviteInput) =>
   apiFetch(pathTo('invites', { teamId }), Invite, { method: 'POST', json: input });
+export const withdrawInvite = (teamId: string, inviteId: string) =>
+  apiFetch(pathTo('teamInvite', { teamId, inviteId }), noContent, { method: 'DELETE' });
 
 export const fetchPresets = (teamId: string) => apiFetch(pathTo('presets', { teamId }), PresetList);
 export const patchPreset = (id: string, input: PresetPatch) =>

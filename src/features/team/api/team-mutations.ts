@@ -16,6 +16,7 @@ import {
   removeMember,
   renameTeam,
   saveThresholds,
+  withdrawInvite,
 } from './team-api';
 import { teamKeys } from './team-queries';
 
@@ -59,6 +60,15 @@ export function useCreateInvite(teamId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: InviteInput) => createInvite(teamId, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.invites(teamId) }),
+  });
+}
+
+/** The link stops working at once; the list then shows the invitation as withdrawn. */
+export function useWithdrawInvite(teamId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (inviteId: string) => withdrawInvite(teamId, inviteId),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.invites(teamId) }),
   });
 }

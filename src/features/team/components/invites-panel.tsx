@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { InviteInput } from '../../../../shared/schemas/teams';
+import { InviteInput, type Invite } from '../../../../shared/schemas/teams';
 import { Role } from '../../../../shared/schemas/common';
 import { Alert, ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -10,16 +10,15 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
 import { roleLabels } from '../../../lib/role-labels';
-import { useCreateInvite } from '../api/team-mutations';
+import { useCreateInvite, useWithdrawInvite } from '../api/team-mutations';
 import { useInvites } from '../api/team-queries';
 
 /** Invite by e-mail with a role; the link in the message works once and expires. */
 export function InvitesPanel({ teamId }: { teamId: string }) {
   const invites = useInvites(teamId);
   const create = useCreateInvite(teamId);
+  const withdraw = useWithdrawInvite(teamId);
   const [formError, setFormError] = useState<string | null>(null);
-  // Expiry is judged against when the page was opened; the list refreshes with the query.
-  const [now] = useState(Date.now);
   const [sent, setSent] = useState<{ email: string; link?: string | undefined } | null>(null);
   const {
     register,
@@ -86,6 +85,7 @@ export function InvitesPanel({ teamId }: { teamId: string }) {
           )}
         </Alert>
       )}
+      {withdraw.isError && <ErrorNote error={withdraw.error} />}
       {invites.isPending ? (
         <Loading what="invitations" />
       ) : invites.isError ? (
@@ -96,37 +96,65 @@ export function InvitesPanel({ teamId }: { teamId: string }) {
             <tr className="border-b border-line text-left text-xs text-ink-soft">
               <th className="py-1 pr-2 font-medium">E-mail</th>
               <th className="py-1 pr-2 font-medium">Role</th>
-              <th className="py-1 pr-2 font-medium">By</th>
+              <th className="py-1 pr-2 font-medium">Sent</th>
               <th className="py-1 pr-2 font-medium">State</th>
+              <th />
             </tr>
           </thead>
           <tbody>
-            {invites.data.invites.map((i) => {
-              const expired = !i.acceptedAt && new Date(i.expiresAt).getTime() < now;
-              return (
-                <tr key={i.id} className="border-b border-line/60">
-                  <td className="py-1.5 pr-2 font-mono text-xs">{i.email}</td>
-                  <td className="py-1.5 pr-2">{roleLabels[i.role]}</td>
-                  <td className="py-1.5 pr-2 text-ink-soft">{i.invitedBy}</td>
-                  <td className="py-1.5 pr-2 text-xs">
-                    {i.acceptedAt ? (
-                      <span className="text-ok">
-                        joined {new Date(i.acceptedAt).toLocaleDateString()}
-                      </span>
-                    ) : expired ? (
-                      <span className="text-ink-faint">expired</span>
-                    ) : (
-                      <span className="text-accent">
-                        open until {new Date(i.expiresAt).toLocaleDateString()}
-                      </span>
-                    )}
-                  </td>
-                </tr>
-              );
-            })}
+            {invites.data.invites.map((i) => (
+              <tr key={i.id} className="border-b border-line/60">
+                <td className="py-1.5 pr-2 font-mono text-xs">{i.email}</td>
+                <td className="py-1.5 pr-2">{roleLabels[i.role]}</td>
+                <td className="py-1.5 pr-2 text-ink-soft">
+                  <span className="num">{day(i.createdAt)}</span> by {i.invitedBy}
+                </td>
+                <td className="py-1.5 pr-2 text-xs">
+                  <InviteStateNote invite={i} />
+                </td>
+                <td className="py-1.5 text-right">
+                  {i.state === 'open' && (
+                    <Button
+                      size="sm"
+                      tone="danger"
+                      disabled={withdraw.isPending}
+                      aria-label={`Withdraw the invitation to ${i.email}`}
+                      onClick={() => {
+                        if (
+                          window.confirm(
+                            `Withdraw the invitation to ${i.email}? The link they were sent stops working.`,
+                          )
+                        )
+                          withdraw.mutate(i.id);
+                      }}
+                    >
+                      Withdraw
+                    </Button>
+                  )}
+                </td>
+              </tr>
+            ))}
           </tbody>
         </table>
       ) : null}
     </div>
   );
+}
+
+const day = (at: string) => new Date(at).toLocaleDateString();
+
+/** The server's word on each invitation, with the date that goes with it. */
+function InviteStateNote({ invite: i }: { invite: Invite }) {
+  switch (i.state) {
+    case 'accepted':
+      return <span className="text-ok">joined {i.acceptedAt && day(i.acceptedAt)}</span>;
+    case 'withdrawn':
+      return (
+        <span className="text-ink-faint">withdrawn {i.withdrawnAt && day(i.withdrawnAt)}</span>
+      );
+    case 'expired':
+      return <span className="text-ink-faint">expired {day(i.expiresAt)}</span>;
+    case 'open':
+      return <span className="text-accent">open until {day(i.expiresAt)}</span>;
+  }
 }
