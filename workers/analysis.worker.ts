@@ -6,7 +6,14 @@ import {
 } from '../shared/analysis/analyze-flight';
 import { benchFilters, type FilterBenchResult } from '../shared/analysis/filters/filter-bench';
 import type { FilterSpec } from '../shared/analysis/filters/filter-spec';
-import { stripTrace, type Trace } from '../shared/analysis/review-detail';
+import type { FlightReport } from '../shared/analysis/report-schema';
+import {
+  stripTrace,
+  type DetailHead,
+  type DetailPart,
+  type DetailParts,
+  type Trace,
+} from '../shared/analysis/review-detail';
 import { findSegments } from '../shared/analysis/segments';
 import { resolveThresholds } from '../shared/analysis/thresholds';
 import type { ParsedLog } from '../shared/log/types';
@@ -51,12 +58,10 @@ function analyse(flightId: string, log: ParsedLog, options: AnalyzeOptions): Fli
   return result;
 }
 
-const api = {
-  /** Full report and chart detail for a flight; keeps the log for the filter bench. */
-  analyze(flightId: string, log: ParsedLog, options: AnalyzeOptions = {}): FlightAnalysis {
-    return analyse(flightId, log, options);
-  },
+/** Bulky detail parts `analyzeDelivered` held back, until `detailPart` hands each over. */
+const heldParts = new Map<string, Partial<DetailParts>>();
 
+const api = {
   /**
    * As `analyze`, for a log the parse worker posts on `port` (parse worker `parseInto`), so
    * the columns never pass through the page. Rejects with LogNotDeliveredError when the read
@@ -66,8 +71,26 @@ const api = {
     flightId: string,
     port: MessagePort,
     options: AnalyzeOptions = {},
-  ): Promise<FlightAnalysis> {
-    return analyse(flightId, await receiveLog(port), options);
+  ): Promise<{ report: FlightReport; head: DetailHead }> {
+    const { report, detail } = analyse(flightId, await receiveLog(port), options);
+    const { effort, tracking, power, campbell, spectra, ...head } = detail;
+    heldParts.set(flightId, { effort, tracking, power, campbell, spectra });
+    return { report, head };
+  },
+
+  /**
+   * One bulky part of the detail `analyzeDelivered` held back (DETAIL_PARTS), as `{ [key]: part }`;
+   * each part is handed over once.
+   */
+  detailPart(flightId: string, key: DetailPart): Partial<DetailParts> {
+    const held = heldParts.get(flightId);
+    if (!held || !(key in held)) {
+      throw new FlightNotLoadedError(`No ${key} is waiting for flight ${flightId}.`);
+    }
+    const part = { [key]: held[key] };
+    delete held[key];
+    if (Object.keys(held).length === 0) heldParts.delete(flightId);
+    return part;
   },
 
   /** Keeps a log delivered on `port` for the filter bench without analysing it again. */
@@ -92,8 +115,9 @@ const api = {
     return benchFilters(entry.log, channel, specs, seg.armed.length ? seg.armed : undefined);
   },
 
-  /** Drops a flight's log from the cache. */
+  /** Drops a flight's log (and any detail still held) from the worker. */
   forget(flightId: string): boolean {
+    heldParts.delete(flightId);
     return cache.delete(flightId);
   },
 };

@@ -63,6 +63,17 @@ export interface ReviewDetail {
   };
 }
 
+/**
+ * The detail's bulky parts (~100 000 numbers for a long flight). The analysis worker hands them
+ * to the page one message each: the page reads a message in one task, and all of them in one
+ * message made one of its longest tasks.
+ */
+export const DETAIL_PARTS = ['effort', 'tracking', 'power', 'campbell', 'spectra'] as const;
+export type DetailPart = (typeof DETAIL_PARTS)[number];
+/** The detail without its bulky parts. */
+export type DetailHead = Omit<ReviewDetail, DetailPart>;
+export type DetailParts = Pick<ReviewDetail, DetailPart>;
+
 /** Points per series the flight strip draws: about two per pixel of a wide screen. */
 export const STRIP_POINTS = 2000;
 

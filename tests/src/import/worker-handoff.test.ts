@@ -2,7 +2,11 @@ import { transfer, wrap, type Remote } from 'comlink';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AnalysisApi } from '../../../workers/analysis.worker';
 import type { LogDelivery } from '../../../workers/parse.worker';
-import { STRIP_POINTS } from '../../../shared/analysis/review-detail';
+import {
+  DETAIL_PARTS,
+  STRIP_POINTS,
+  type DetailParts,
+} from '../../../shared/analysis/review-detail';
 import { scenarios } from '../../../shared/sim/scenarios';
 import { simulate } from '../../../shared/sim/simulate';
 
@@ -46,17 +50,33 @@ const kite = (seconds: number) =>
   simulate(scenarios['weak-motor']!, { seconds, rateHz: 1000, seed: 3 }).log;
 
 describe('analysis worker handoff', () => {
-  it('analyses a delivered log and thins the strip in the worker', async () => {
+  it('analyses a delivered log, thins the strip in the worker and hands the bulk over part by part', async () => {
     const log = kite(20);
     const rows = log.rows;
     const { port, send } = handoff({ ok: true, log });
     const analysed = analysis.analyzeDelivered('flight-a', port);
     send();
-    const { report, detail } = await analysed;
+    const { report, head } = await analysed;
     expect(report.rows).toBe(rows);
-    expect(detail.strip).toBeDefined();
-    expect(detail.strip!.t.length).toBe(STRIP_POINTS);
-    expect(Object.keys(detail.strip!.series).sort()).toEqual(['collective', 'throttle']);
+    expect(head.strip).toBeDefined();
+    expect(head.strip!.t.length).toBe(STRIP_POINTS);
+    expect(Object.keys(head.strip!.series).sort()).toEqual(['collective', 'throttle']);
+    for (const key of DETAIL_PARTS) expect(key in head).toBe(false);
+
+    const parts = {};
+    for (const key of DETAIL_PARTS) {
+      const part = await analysis.detailPart('flight-a', key);
+      expect(Object.keys(part)).toEqual([key]);
+      Object.assign(parts, part);
+    }
+    const detail = { ...head, ...(parts as DetailParts) };
+    expect(detail.effort.t.length).toBeGreaterThan(STRIP_POINTS);
+    expect(Object.keys(detail.spectra)).toContain('gyro_x');
+    // Each part is handed over once.
+    await expect(analysis.detailPart('flight-a', 'effort')).rejects.toMatchObject({
+      name: 'FlightNotLoadedError',
+    });
+
     // The log stayed in the worker: the filter bench runs on it without a resend.
     const bench = await analysis.filterBench('flight-a', 'gyro_x', [{ kind: 'lowpass1', hz: 100 }]);
     expect(bench.after.hz.length).toBeGreaterThan(0);

@@ -97,6 +97,9 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
     if (!next) return;
     const job: ImportJob = next;
     cancelled.current.delete(job.id);
+    // The review's charts come next: load their code while the workers read the log, when
+    // this thread is idle, rather than in the review's first paint.
+    void import('../../../components/charts/echarts');
     void runImport({
       jobId: job.id,
       file: job.file,

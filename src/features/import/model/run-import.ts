@@ -2,6 +2,11 @@ import { proxy, transfer } from 'comlink';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { ColumnMap } from '../../../../shared/log/column-map';
 import type { Severity } from '../../../../shared/analysis/report-schema';
+import {
+  DETAIL_PARTS,
+  type DetailParts,
+  type ReviewDetail,
+} from '../../../../shared/analysis/review-detail';
 import { parseWorker } from '../../../lib/parse-worker';
 import { analysisWorker } from '../../../lib/analysis-worker';
 import { saveLocalFlight } from '../../../lib/local-db';
@@ -119,7 +124,17 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
     void analysisWorker().forget(flightId);
     return { kind: 'cancelled' };
   }
-  const { report, detail } = analysed;
+  const { report, head } = analysed;
+  let detail: ReviewDetail;
+  try {
+    // One part per message, so no single task on this thread reads the whole detail.
+    const parts: Partial<DetailParts> = {};
+    for (const key of DETAIL_PARTS)
+      Object.assign(parts, await analysisWorker().detailPart(flightId, key));
+    detail = { ...head, ...completeParts(parts) };
+  } catch (e) {
+    return failed('analysis', e);
+  }
   try {
     await saveLocalFlight({
       id: flightId,
@@ -141,6 +156,12 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   for (const f of report.findings)
     if (worst === null || severityRank[f.severity] > severityRank[worst]) worst = f.severity;
   return { kind: 'done', flightId, findings: report.findings.length, worst };
+}
+
+function completeParts(parts: Partial<DetailParts>): DetailParts {
+  const missing = DETAIL_PARTS.filter((k) => !(k in parts));
+  if (missing.length > 0) throw new Error(`the analysis sent no ${missing.join(', ')}`);
+  return parts as DetailParts;
 }
 
 function failed(stage: 'worker' | 'analysis' | 'storage', e: unknown): JobStatus {

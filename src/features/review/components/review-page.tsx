@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, type ReactNode } from 'react';
+import { startTransition, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { Finding } from '../../../../shared/analysis/report-schema';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { TimePin } from '../../../components/charts/time-chart';
@@ -69,6 +69,10 @@ export function ReviewPage(props: ReviewPageProps) {
     assumed: fallbackAssumed,
   });
   const strip = useStripTrace(flight.id, detail);
+  // The verdict paints in the first commit; the section's evidence follows as a transition,
+  // which React renders in slices between frames instead of in the verdict's task.
+  const [evidenceShown, setEvidenceShown] = useState(false);
+  useEffect(() => startTransition(() => setEvidenceShown(true)), []);
   const durationS = report.durationS;
   const time: TimeContext = useMemo(
     () => ({ cursorT, onCursor, group: `flight-${flight.id}`, hover: report.segments.hover }),
@@ -146,7 +150,8 @@ export function ReviewPage(props: ReviewPageProps) {
             </h2>
             <p className="text-sm text-ink-soft">{info.question}</p>
           </div>
-          {section === 'balance' && (
+          {!evidenceShown && <div className="h-64" aria-busy="true" />}
+          {evidenceShown && section === 'balance' && (
             <BalanceSection
               report={report}
               diagnosis={detail.diagnosis}
@@ -154,16 +159,22 @@ export function ReviewPage(props: ReviewPageProps) {
               assumed={airframeAssumed}
             />
           )}
-          {section === 'torque' && (
+          {evidenceShown && section === 'torque' && (
             <TorqueSection report={report} effort={detail.effort} airframe={airframe} time={time} />
           )}
-          {section === 'effort' && (
+          {evidenceShown && section === 'effort' && (
             <EffortSection report={report} effort={detail.effort} time={time} />
           )}
-          {section === 'vibration' && <VibrationSection report={report} detail={detail} />}
-          {section === 'filters' && <FilterBenchSection flight={flight} airframe={airframe} />}
-          {section === 'power' && <PowerSection report={report} power={detail.power} time={time} />}
-          {section === 'headroom' && (
+          {evidenceShown && section === 'vibration' && (
+            <VibrationSection report={report} detail={detail} />
+          )}
+          {evidenceShown && section === 'filters' && (
+            <FilterBenchSection flight={flight} airframe={airframe} />
+          )}
+          {evidenceShown && section === 'power' && (
+            <PowerSection report={report} power={detail.power} time={time} />
+          )}
+          {evidenceShown && section === 'headroom' && (
             <HeadroomSection
               report={report}
               effort={detail.effort}
@@ -171,10 +182,10 @@ export function ReviewPage(props: ReviewPageProps) {
               time={time}
             />
           )}
-          {section === 'tracking' && (
+          {evidenceShown && section === 'tracking' && (
             <TrackingSection report={report} tracking={detail.tracking} time={time} />
           )}
-          {section === 'compare' && compare}
+          {evidenceShown && section === 'compare' && compare}
         </section>
       </div>
       {rail && <aside className="flex min-w-0 flex-col gap-4">{rail}</aside>}
