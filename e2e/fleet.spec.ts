@@ -112,3 +112,49 @@ test('a tuner edits an airframe, logs a repair and a bench run, and finds a sync
     .click();
   await page.screenshot({ path: `${artifacts}aircraft-airframe-desktop.png`, fullPage: true });
 });
+
+test('an entry logged by mistake leaves the service log and the bench runs after a confirmation', async ({
+  page,
+}) => {
+  await signUp(page, { name: 'Rook Tallis', email: uniqueEmail('owner') });
+  await createTeam(page, 'Survey rigs');
+  await addAircraftFromPreset(page, { name: 'Osprey', preset: 'hex-x', armMm: 300 });
+  const sections = page.getByRole('navigation', { name: 'Aircraft sections' });
+
+  await sections.getByRole('link', { name: 'Service log' }).click();
+  const form = page.getByRole('form', { name: 'Add service entry' });
+  for (const note of ['Replaced motor 4 bearing', 'Wrong aircraft: Heron gimbal damper']) {
+    await form.getByLabel('What was done').fill(note);
+    await form.getByRole('button', { name: 'Add entry' }).click();
+    await expect(page.getByRole('table', { name: 'Service log' })).toContainText(note);
+  }
+  const log = page.getByRole('table', { name: 'Service log' });
+  const mistake = log.getByRole('row').filter({ hasText: 'Heron gimbal damper' });
+  page.once('dialog', (d) => void d.dismiss());
+  await mistake.getByRole('button', { name: /^Delete/ }).click();
+  await expect(log).toContainText('Heron gimbal damper');
+  page.once('dialog', (d) => {
+    expect(d.message()).toContain('Heron gimbal damper');
+    void d.accept();
+  });
+  await mistake.getByRole('button', { name: /^Delete/ }).click();
+  await expect(log).not.toContainText('Heron gimbal damper');
+  await expect(log).toContainText('Replaced motor 4 bearing');
+  await page.reload();
+  await expect(page.getByRole('table', { name: 'Service log' })).not.toContainText(
+    'Heron gimbal damper',
+  );
+
+  await sections.getByRole('link', { name: 'Bench runs' }).click();
+  await page.getByText('Add a bench run').click();
+  const bench = page.getByRole('form', { name: 'Add bench run' });
+  await bench.getByLabel('Motor', { exact: true }).fill('4114 400kV');
+  await bench.getByLabel('Prop', { exact: true }).fill('15×5.5×2');
+  await bench.getByLabel(/Paste readings/).fill('25\t420\n50\t1180\n');
+  await bench.getByRole('button', { name: 'Fill table from pasted lines' }).click();
+  await bench.getByRole('button', { name: 'Save bench run' }).click();
+  await expect(page.getByRole('table', { name: /Bench run .* 4114 400kV/ })).toBeVisible();
+  page.once('dialog', (d) => void d.accept());
+  await page.getByRole('button', { name: /^Delete the bench run of .*4114 400kV/ }).click();
+  await expect(page.getByText('No bench runs yet.')).toBeVisible();
+});

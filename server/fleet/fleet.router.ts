@@ -13,7 +13,12 @@ import {
   type ServiceLog,
   type Trends,
 } from '../../shared/schemas/aircraft';
-import { IdParam, TeamIdParam } from '../../shared/schemas/common';
+import {
+  BenchRunParam,
+  IdParam,
+  ServiceEntryParam,
+  TeamIdParam,
+} from '../../shared/schemas/common';
 import { requireUser } from '../http/session';
 import type { Services } from '../services';
 
@@ -70,6 +75,13 @@ export function fleetRouter({ fleet }: Services) {
       );
   });
 
+  router.delete(paths.serviceEntry, async (req, res) => {
+    const user = requireUser(req);
+    const { id, entryId } = ServiceEntryParam.parse(req.params);
+    await fleet.removeServiceEntry(user.id, id, entryId);
+    res.status(204).end();
+  });
+
   router.get(paths.benchRuns, async (req, res) => {
     const user = requireUser(req);
     res.json({
@@ -84,6 +96,13 @@ export function fleetRouter({ fleet }: Services) {
       .json(
         (await fleet.addBenchRun(user.id, id, BenchRunInput.parse(req.body))) satisfies BenchRun,
       );
+  });
+
+  router.delete(paths.benchRun, async (req, res) => {
+    const user = requireUser(req);
+    const { id, runId } = BenchRunParam.parse(req.params);
+    await fleet.removeBenchRun(user.id, id, runId);
+    res.status(204).end();
   });
 
   router.get(paths.trends, async (req, res) => {

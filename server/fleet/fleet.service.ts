@@ -12,10 +12,10 @@ import type {
 import { AircraftInput, BenchRunInput, ServiceEntryInput } from '../../shared/schemas/aircraft';
 import type { Role } from '../../shared/schemas/common';
 import { User } from '../auth/user.entity';
-import { BadRequestError, NotFoundError } from '../http/errors';
+import { BadRequestError, ForbiddenError, NotFoundError } from '../http/errors';
 import { Flight } from '../flights/flight.entity';
 import { severityName } from '../flights/flight-summary';
-import type { Action } from '../../shared/auth/permissions';
+import { can, canDeleteServiceEntry, type Action } from '../../shared/auth/permissions';
 import type { TeamsService } from '../teams/teams.service';
 import { withUserNames } from '../db/with-user-names';
 import { iso } from '../util';
@@ -149,7 +149,7 @@ export class FleetService {
   }
 
   async serviceLog(userId: string, aircraftId: string): Promise<ServiceEntryDto[]> {
-    await this.access(userId, aircraftId, 'team.read');
+    const { role } = await this.access(userId, aircraftId, 'team.read');
     const rows = await withUserNames(
       this.ds
         .getRepository(ServiceEntry)
@@ -159,10 +159,12 @@ export class FleetService {
         .addOrderBy('e.createdAt', 'DESC'),
       'e.byId',
     );
-    return rows.map(([e, byName]) => this.serviceDto(e, byName));
+    return rows.map(([e, byName]) =>
+      this.serviceDto(e, byName, canDeleteServiceEntry(role, userId, e.byId)),
+    );
   }
 
-  private serviceDto(e: ServiceEntry, byName: string): ServiceEntryDto {
+  private serviceDto(e: ServiceEntry, byName: string, canDelete: boolean): ServiceEntryDto {
     return {
       id: e.id,
       aircraftId: e.aircraftId,
@@ -172,6 +174,7 @@ export class FleetService {
       note: e.note,
       by: { id: e.byId, name: byName },
       createdAt: iso(e.createdAt),
+      canDelete,
     };
   }
 
@@ -180,7 +183,7 @@ export class FleetService {
     aircraftId: string,
     body: ServiceEntryInput,
   ): Promise<ServiceEntryDto> {
-    const { aircraft } = await this.access(userId, aircraftId, 'serviceLog.create');
+    const { aircraft, role } = await this.access(userId, aircraftId, 'serviceLog.create');
     const input = ServiceEntryInput.parse(body);
     if (input.motor !== undefined && input.motor > aircraft.airframe.motors.length) {
       throw new BadRequestError(
@@ -199,11 +202,27 @@ export class FleetService {
     };
     await this.ds.getRepository(ServiceEntry).insert(entry);
     const by = await this.ds.getRepository(User).findOneByOrFail({ id: userId });
-    return this.serviceDto(entry, by.name);
+    return this.serviceDto(entry, by.name, canDeleteServiceEntry(role, userId, userId));
+  }
+
+  /** Corrects the log: the owner and tuners delete any entry, a pilot only one they added. */
+  async removeServiceEntry(userId: string, aircraftId: string, entryId: string): Promise<void> {
+    const { role } = await this.access(userId, aircraftId, 'team.read');
+    const repo = this.ds.getRepository(ServiceEntry);
+    const entry = await repo.findOneBy({ id: entryId, aircraftId });
+    if (!entry) throw new NotFoundError('Service entry');
+    if (!canDeleteServiceEntry(role, userId, entry.byId)) {
+      throw new ForbiddenError(
+        role === 'pilot'
+          ? 'Pilots delete only the service entries they added.'
+          : 'Your role in this team does not allow deleting service entries.',
+      );
+    }
+    await repo.delete({ id: entryId });
   }
 
   async benchRuns(userId: string, aircraftId: string): Promise<BenchRunDto[]> {
-    await this.access(userId, aircraftId, 'team.read');
+    const { role } = await this.access(userId, aircraftId, 'team.read');
     const rows = await withUserNames(
       this.ds
         .getRepository(BenchRun)
@@ -213,10 +232,11 @@ export class FleetService {
         .addOrderBy('b.createdAt', 'DESC'),
       'b.byId',
     );
-    return rows.map(([b, byName]) => this.benchDto(b, byName));
+    const canDelete = can(role, 'benchRuns.delete');
+    return rows.map(([b, byName]) => this.benchDto(b, byName, canDelete));
   }
 
-  private benchDto(b: BenchRun, byName: string): BenchRunDto {
+  private benchDto(b: BenchRun, byName: string, canDelete: boolean): BenchRunDto {
     return {
       id: b.id,
       aircraftId: b.aircraftId,
@@ -227,11 +247,12 @@ export class FleetService {
       rows: b.rows,
       by: { id: b.byId, name: byName },
       createdAt: iso(b.createdAt),
+      canDelete,
     };
   }
 
   async addBenchRun(userId: string, aircraftId: string, body: BenchRunInput): Promise<BenchRunDto> {
-    await this.access(userId, aircraftId, 'benchRuns.create');
+    const { role } = await this.access(userId, aircraftId, 'benchRuns.create');
     const input = BenchRunInput.parse(body);
     const run: BenchRun = {
       id: randomUUID(),
@@ -246,7 +267,14 @@ export class FleetService {
     };
     await this.ds.getRepository(BenchRun).insert(run);
     const by = await this.ds.getRepository(User).findOneByOrFail({ id: userId });
-    return this.benchDto(run, by.name);
+    return this.benchDto(run, by.name, can(role, 'benchRuns.delete'));
+  }
+
+  /** Removes a bench run entered by mistake; the owner and tuners, who keep bench runs. */
+  async removeBenchRun(userId: string, aircraftId: string, runId: string): Promise<void> {
+    await this.access(userId, aircraftId, 'benchRuns.delete');
+    const done = await this.ds.getRepository(BenchRun).delete({ id: runId, aircraftId });
+    if (!done.affected) throw new NotFoundError('Bench run');
   }
 
   /** Per-flight trend points, oldest first, read from the small trend JSON stored with each flight. */

@@ -28,7 +28,9 @@ export const paths = {
   teamAircraft: '/api/teams/:teamId/aircraft',
   aircraft: '/api/aircraft/:id',
   serviceLog: '/api/aircraft/:id/service-log',
+  serviceEntry: '/api/aircraft/:id/service-log/:entryId',
   benchRuns: '/api/aircraft/:id/bench-runs',
+  benchRun: '/api/aircraft/:id/bench-runs/:runId',
   trends: '/api/aircraft/:id/trends',
 
   teamFlights: '/api/teams/:teamId/flights',

@@ -21,7 +21,11 @@ export const permissions = {
   'aircraft.update': ['owner', 'tuner'],
   'aircraft.delete': ['owner'],
   'serviceLog.create': ['owner', 'tuner', 'pilot'],
+  // Correcting the record: whoever edits aircraft removes any service event; a pilot only their own.
+  'serviceLog.deleteAny': ['owner', 'tuner'],
+  'serviceLog.deleteOwn': ['pilot'],
   'benchRuns.create': ['owner', 'tuner'],
+  'benchRuns.delete': ['owner', 'tuner'],
   'flights.upload': ['owner', 'tuner', 'pilot'],
   'flights.replaceAny': ['owner'],
   'flights.deleteAny': ['owner'],
@@ -38,4 +42,15 @@ export type Action = keyof typeof permissions;
 /** Whether the role may take the action; someone with no role in the team may do nothing. */
 export function can(role: Role | null | undefined, action: Action): boolean {
   return role != null && (permissions[action] as readonly Role[]).includes(role);
+}
+
+/** Whether `userId`, with `role` in the team, may delete a service event `addedById` logged. */
+export function canDeleteServiceEntry(
+  role: Role | null | undefined,
+  userId: string,
+  addedById: string,
+): boolean {
+  return (
+    can(role, 'serviceLog.deleteAny') || (can(role, 'serviceLog.deleteOwn') && userId === addedById)
+  );
 }

@@ -93,6 +93,8 @@ export const ServiceEntry = ServiceEntryInput.extend({
   motor: z.number().int().nullable(),
   by: UserRef,
   createdAt: IsoDateTime,
+  /** Whether the caller may delete it: their role, and for a pilot whether they added it. */
+  canDelete: z.boolean(),
 });
 export type ServiceEntry = z.infer<typeof ServiceEntry>;
 export const ServiceLog = z.object({ entries: z.array(ServiceEntry) });
@@ -135,6 +137,8 @@ export const BenchRun = z.object({
   rows: z.array(BenchRow),
   by: UserRef,
   createdAt: IsoDateTime,
+  /** Whether the caller's role may delete it. */
+  canDelete: z.boolean(),
 });
 export type BenchRun = z.infer<typeof BenchRun>;
 export const BenchRunList = z.object({ runs: z.array(BenchRun) });

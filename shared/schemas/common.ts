@@ -8,6 +8,8 @@ export const IdParam = z.object({ id: Id });
 export const TeamIdParam = z.object({ teamId: Id });
 export const MemberParam = z.object({ teamId: Id, userId: Id });
 export const InviteParam = z.object({ teamId: Id, inviteId: Id });
+export const ServiceEntryParam = z.object({ id: Id, entryId: Id });
+export const BenchRunParam = z.object({ id: Id, runId: Id });
 export const TokenParam = z.object({
   token: z.string().regex(/^[A-Za-z0-9_-]{20,128}$/, 'malformed token'),
 });

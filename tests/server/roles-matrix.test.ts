@@ -21,7 +21,8 @@ import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
  * Two readings the table leaves open, decided here and in the server alike: whoever uploaded a
  * flight may delete it (the team-server issue: "by owner or by the pilot who uploaded it"), and
  * a tuner, who edits aircraft, may add service events too. Import presets are saved by anyone
- * who imports flights.
+ * who imports flights. Correcting the aircraft record: whoever edits aircraft (owner, tuner)
+ * deletes any service event or bench run; a pilot deletes only the service events they added.
  */
 type Capability =
   | 'view'
@@ -127,6 +128,21 @@ async function extraMember(c: Ctx, role: Role) {
   return id;
 }
 const uploaderFor = (c: Ctx) => (canUpload(c) ? c.callerId : c.ids.owner);
+const serviceEvent = {
+  date: '2026-05-03',
+  kind: 'prop-change' as const,
+  motor: 2,
+  note: 'New props after a tree strike',
+};
+const benchRun = {
+  date: '2026-05-03',
+  motor: '2207 1950 kV',
+  prop: '5.1x3.6x3',
+  rows: [
+    { throttle: 0.5, thrustG: 600, currentA: 12 },
+    { throttle: 1, thrustG: 1650, currentA: 42 },
+  ],
+};
 
 const cases: Case[] = [
   {
@@ -290,6 +306,30 @@ const cases: Case[] = [
     allowed: (r) => has(r, 'service events'),
   },
   {
+    name: "delete someone else's service event",
+    method: 'delete',
+    setup: async (c) => {
+      const a = await aircraft(c);
+      const by = c.callerId === c.ids.owner ? c.ids.tuner : c.ids.owner;
+      const e = await c.t.services.fleet.addServiceEntry(by, a.id, serviceEvent);
+      return { path: `/api/aircraft/${a.id}/service-log/${e.id}` };
+    },
+    allowed: (r) => has(r, 'edit aircraft'),
+  },
+  {
+    name: 'delete a service event they added',
+    method: 'delete',
+    setup: async (c) => {
+      const a = await aircraft(c);
+      const mayAdd =
+        c.caller !== 'outsider' && c.caller !== 'anonymous' && has(c.caller, 'service events');
+      const by = mayAdd ? c.callerId : c.ids.owner;
+      const e = await c.t.services.fleet.addServiceEntry(by, a.id, serviceEvent);
+      return { path: `/api/aircraft/${a.id}/service-log/${e.id}` };
+    },
+    allowed: (r) => has(r, 'service events'),
+  },
+  {
     name: 'read bench runs',
     method: 'get',
     setup: async (c) => ({ path: `/api/aircraft/${(await aircraft(c)).id}/bench-runs` }),
@@ -310,6 +350,16 @@ const cases: Case[] = [
         ],
       },
     }),
+    allowed: (r) => has(r, 'bench runs'),
+  },
+  {
+    name: 'delete a bench run',
+    method: 'delete',
+    setup: async (c) => {
+      const a = await aircraft(c);
+      const run = await c.t.services.fleet.addBenchRun(c.ids.owner, a.id, benchRun);
+      return { path: `/api/aircraft/${a.id}/bench-runs/${run.id}` };
+    },
     allowed: (r) => has(r, 'bench runs'),
   },
   {

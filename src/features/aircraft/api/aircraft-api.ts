@@ -28,9 +28,13 @@ export const deleteAircraft = (id: string) =>
 export const fetchServiceLog = (id: string) => apiFetch(pathTo('serviceLog', { id }), ServiceLog);
 export const addServiceEntry = (id: string, input: ServiceEntryInput) =>
   apiFetch(pathTo('serviceLog', { id }), ServiceEntry, { method: 'POST', json: input });
+export const deleteServiceEntry = (id: string, entryId: string) =>
+  apiFetch(pathTo('serviceEntry', { id, entryId }), z.unknown(), { method: 'DELETE' });
 
 export const fetchBenchRuns = (id: string) => apiFetch(pathTo('benchRuns', { id }), BenchRunList);
 export const addBenchRun = (id: string, input: BenchRunInput) =>
   apiFetch(pathTo('benchRuns', { id }), BenchRun, { method: 'POST', json: input });
+export const deleteBenchRun = (id: string, runId: string) =>
+  apiFetch(pathTo('benchRun', { id, runId }), z.unknown(), { method: 'DELETE' });
 
 export const fetchTrends = (id: string) => apiFetch(pathTo('trends', { id }), Trends);

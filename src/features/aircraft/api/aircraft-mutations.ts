@@ -10,6 +10,8 @@ import {
   addServiceEntry,
   createAircraft,
   deleteAircraft,
+  deleteBenchRun,
+  deleteServiceEntry,
   patchAircraft,
 } from './aircraft-api';
 import { aircraftKeys } from './aircraft-queries';
@@ -56,10 +58,26 @@ export function useAddServiceEntry(id: string) {
   });
 }
 
+export function useDeleteServiceEntry(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (entryId: string) => deleteServiceEntry(id, entryId),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: aircraftKeys.serviceLog(id) }),
+  });
+}
+
 export function useAddBenchRun(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: BenchRunInput) => addBenchRun(id, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: aircraftKeys.benchRuns(id) }),
+  });
+}
+
+export function useDeleteBenchRun(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (runId: string) => deleteBenchRun(id, runId),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: aircraftKeys.benchRuns(id) }),
   });
 }

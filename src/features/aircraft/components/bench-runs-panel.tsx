@@ -10,7 +10,7 @@ import { Caution } from '../../../components/ui/caution';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { Empty, Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { useAddBenchRun } from '../api/aircraft-mutations';
+import { useAddBenchRun, useDeleteBenchRun } from '../api/aircraft-mutations';
 import { useBenchRuns } from '../api/aircraft-queries';
 import { optionalNumber } from '../model/airframe-form';
 import { parseBenchPaste } from '../model/bench-paste';
@@ -60,6 +60,7 @@ function RunTable({ run }: { run: BenchRun }) {
 /** Thrust-stand tests of a motor and prop: the table, the curve, and a form to add one. */
 export function BenchRunsPanel({ aircraftId, canAdd }: { aircraftId: string; canAdd: boolean }) {
   const runs = useBenchRuns(aircraftId);
+  const remove = useDeleteBenchRun(aircraftId);
   return (
     <div className="space-y-5">
       <Caution title="Bench work">
@@ -69,6 +70,7 @@ export function BenchRunsPanel({ aircraftId, canAdd }: { aircraftId: string; can
         motors and ESCs heat up without airflow.
       </Caution>
       {canAdd && <BenchRunForm aircraftId={aircraftId} />}
+      {remove.isError && <ErrorNote error={remove.error} />}
       {runs.isPending ? (
         <Loading what="bench runs" />
       ) : runs.isError ? (
@@ -93,11 +95,31 @@ export function BenchRunsPanel({ aircraftId, canAdd }: { aircraftId: string; can
           <ul className="space-y-4">
             {runs.data.runs.map((run) => (
               <li key={run.id} className="rounded border border-line p-3">
-                <p className="mb-2 text-sm">
-                  <span className="num">{run.date}</span> · <strong>{run.motor}</strong> with{' '}
-                  {run.prop}
-                  <span className="text-xs text-ink-faint"> · by {run.by.name}</span>
-                </p>
+                <div className="mb-2 flex items-start justify-between gap-3">
+                  <p className="text-sm">
+                    <span className="num">{run.date}</span> · <strong>{run.motor}</strong> with{' '}
+                    {run.prop}
+                    <span className="text-xs text-ink-faint"> · by {run.by.name}</span>
+                  </p>
+                  {run.canDelete && (
+                    <Button
+                      size="sm"
+                      tone="danger"
+                      disabled={remove.isPending}
+                      aria-label={`Delete the bench run of ${run.date} (${run.motor} with ${run.prop})`}
+                      onClick={() => {
+                        if (
+                          window.confirm(
+                            `Delete the bench run of ${run.date} (${run.motor} with ${run.prop}) and its ${run.rows.length} readings? It cannot be brought back.`,
+                          )
+                        )
+                          remove.mutate(run.id);
+                      }}
+                    >
+                      Delete
+                    </Button>
+                  )}
+                </div>
                 {run.note && <p className="mb-2 text-xs text-ink-soft">{run.note}</p>}
                 <RunTable run={run} />
               </li>

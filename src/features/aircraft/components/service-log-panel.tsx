@@ -8,7 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { Empty, Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { useAddServiceEntry } from '../api/aircraft-mutations';
+import { useAddServiceEntry, useDeleteServiceEntry } from '../api/aircraft-mutations';
 import { useServiceLog } from '../api/aircraft-queries';
 import { optionalNumber } from '../model/airframe-form';
 
@@ -36,6 +36,7 @@ export function ServiceLogPanel({
 }) {
   const log = useServiceLog(aircraftId);
   const add = useAddServiceEntry(aircraftId);
+  const remove = useDeleteServiceEntry(aircraftId);
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
@@ -101,6 +102,7 @@ export function ServiceLogPanel({
           )}
         </form>
       )}
+      {remove.isError && <ErrorNote error={remove.error} />}
       {log.isPending ? (
         <Loading what="the service log" />
       ) : log.isError ? (
@@ -116,6 +118,7 @@ export function ServiceLogPanel({
               <th className="py-1 pr-2 font-medium">Motor</th>
               <th className="py-1 pr-2 font-medium">Note</th>
               <th className="py-1 pr-2 font-medium">By</th>
+              <th />
             </tr>
           </thead>
           <tbody>
@@ -126,6 +129,26 @@ export function ServiceLogPanel({
                 <td className="num py-1.5 pr-2">{e.motor ?? '–'}</td>
                 <td className="py-1.5 pr-2 whitespace-pre-wrap">{e.note}</td>
                 <td className="py-1.5 pr-2 text-ink-soft">{e.by.name}</td>
+                <td className="py-1.5 text-right">
+                  {e.canDelete && (
+                    <Button
+                      size="sm"
+                      tone="danger"
+                      disabled={remove.isPending}
+                      aria-label={`Delete the ${kindLabels[e.kind].toLowerCase()} entry of ${e.date}`}
+                      onClick={() => {
+                        if (
+                          window.confirm(
+                            `Delete the ${kindLabels[e.kind].toLowerCase()} entry of ${e.date} (“${e.note}”)? It leaves the service log for good.`,
+                          )
+                        )
+                          remove.mutate(e.id);
+                      }}
+                    >
+                      Delete
+                    </Button>
+                  )}
+                </td>
               </tr>
             ))}
           </tbody>
