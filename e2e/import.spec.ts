@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
@@ -7,6 +7,8 @@ import { expect, test } from '@playwright/test';
 import { presetAirframe } from '../shared/airframe/presets';
 import { PASSWORD, uniqueEmail } from './helpers/accounts';
 import { writeScenarioCsv } from './fixtures/synth-log';
+
+const artifacts = new URL('./artifacts/', import.meta.url).pathname;
 
 /** The same flight written with headers of another layout: the column-map step must open. */
 function writeForeignHeaderCsv(): string {
@@ -58,6 +60,11 @@ test('an unknown header opens the column map; confirming it reads the flight', a
   // Motor outputs in this file are 0–1 fractions.
   for (const h of ['Out0', 'Out1', 'Out2', 'Out3'])
     await step.getByLabel(`Unit for ${h}`).selectOption('frac');
+  mkdirSync(artifacts, { recursive: true });
+  await page.setViewportSize({ width: 1440, height: 1000 });
+  await page.screenshot({ path: `${artifacts}import-column-map-desktop.png`, fullPage: true });
+  await page.setViewportSize({ width: 820, height: 1180 });
+  await page.screenshot({ path: `${artifacts}import-column-map-tablet.png`, fullPage: true });
   await step.getByRole('button', { name: 'Read with this map' }).click();
   await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
   await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();

@@ -137,4 +137,9 @@ test('compare states what changed against another flight of the same aircraft', 
   // Both flights say which geometry they were judged against (here the assumed quad X).
   await expect(page.getByText(/Judged against Unknown quad X .*\(assumed\)/)).toHaveCount(2);
   await expect(page.getByRole('img', { name: /spectra of both flights/ })).toBeVisible();
+  mkdirSync(artifacts, { recursive: true });
+  await page.setViewportSize({ width: 1440, height: 1000 });
+  await page.screenshot({ path: `${artifacts}compare-desktop.png`, fullPage: true });
+  await page.setViewportSize({ width: 820, height: 1180 });
+  await page.screenshot({ path: `${artifacts}compare-tablet.png`, fullPage: true });
 });

@@ -84,7 +84,14 @@ export function XyChart(props: XyChartProps) {
         // A log axis otherwise widens to whole decades (1 Hz … 10 kHz) and wastes half the width.
         min: xMin ?? (xLog ? 'dataMin' : undefined),
         max: xMax ?? (xLog ? 'dataMax' : undefined),
-        axisLabel: { color: inkSeries.axis, fontSize: 10, hideOverlap: true },
+        // The data-bound ends of a log axis fall between ticks (3.90625 Hz …); three
+        // significant figures keep every label short.
+        axisLabel: {
+          color: inkSeries.axis,
+          fontSize: 10,
+          hideOverlap: true,
+          formatter: (v: number) => String(Number(v.toPrecision(3))),
+        },
         splitLine: { lineStyle: { color: inkSeries.grid } },
       },
       yAxis: {

@@ -40,6 +40,13 @@ export interface ComparePanelProps {
   emptyReason?: string;
 }
 
+/** Signed to one decimal; a value that rounds to zero reads 0.0, never −0.0. */
+function signedPct(v: number): string {
+  const r = Math.round(v * 10) / 10;
+  if (r === 0) return '0.0 %';
+  return `${r > 0 ? '+' : '−'}${Math.abs(r).toFixed(1)} %`;
+}
+
 function Deviations({ f }: { f: CompareFlight }) {
   const { airframe } = judged(f);
   return (
@@ -57,10 +64,7 @@ function Deviations({ f }: { f: CompareFlight }) {
             <span className="num w-8 text-xs text-ink-faint">
               {airframe?.motors[i]?.spin ?? ''}
             </span>
-            <span className="num w-16 text-right">
-              {d >= 0 ? '+' : '−'}
-              {Math.abs(d).toFixed(1)} %
-            </span>
+            <span className="num w-16 text-right">{signedPct(d)}</span>
             <span className="relative h-2 w-24 bg-paper-sunk" aria-hidden>
               <span className="absolute inset-y-0 left-1/2 w-px bg-ink-faint" />
               <span
@@ -85,7 +89,10 @@ function Column({ f, title }: { f: CompareFlight; title: string }) {
   return (
     <div className="flex min-w-0 flex-col gap-3 rounded border border-line bg-paper-raised p-3">
       <h3 className="text-sm font-semibold text-ink">
-        {title} <span className="num font-normal text-ink-faint">{f.label}</span>
+        {title}{' '}
+        {f.label.toLowerCase() !== title.toLowerCase() && (
+          <span className="num font-normal text-ink-faint">{f.label}</span>
+        )}
       </h3>
       <p className="text-xs text-ink-soft">
         Judged against{' '}

@@ -49,12 +49,14 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
       helper.display({
         id: 'sample',
         header: 'First values',
+        // One value a line: a list wrapped mid-way reads as one odd number.
         cell: (c) => (
-          <span className="num text-ink-faint">
-            {sampleRows
-              .slice(0, 3)
-              .map((r) => r[c.row.original.index] ?? '')
-              .join(' · ')}
+          <span className="num flex flex-col text-xs leading-tight text-ink-faint">
+            {sampleRows.slice(0, 3).map((r, i) => (
+              <span key={i} className="whitespace-nowrap">
+                {r[c.row.original.index] ?? ''}
+              </span>
+            ))}
           </span>
         ),
       }),

@@ -177,7 +177,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
   const mapping = jobs.find((j) => j.status.kind === 'needs-map');
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[1fr_18rem]">
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="flex flex-col gap-4">
         <div
           {...getRootProps({
@@ -305,7 +305,8 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
           </ul>
         )}
       </div>
-      <aside className="flex flex-col gap-4">
+      {/* On narrow screens the aircraft comes first: it is picked before the logs are dropped. */}
+      <aside className="order-first flex flex-col gap-4 lg:order-none">
         <AircraftPicker
           teamId={teamId}
           value={aircraftId}

@@ -129,7 +129,7 @@ export function JobRow({ job, onCancel, onRetry, onRemove, onOpenMap }: JobRowPr
       )}
       {status.kind === 'needs-map' && (
         <p className="mt-1 text-sm text-accent">
-          The header is not ours; confirm the column map below.
+          The header is not ours; confirm its columns in the column map on this page.
         </p>
       )}
     </li>

@@ -24,12 +24,31 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
   const propR = (airframe.prop.diameterIn * 25.4) / 2;
   const reach = Math.max(...airframe.motors.map((m) => Math.hypot(m.x, m.y))) + propR;
   const pad = propR * 0.9 + 40;
-  const R = reach + pad;
   const sx = (m: { x: number; y: number }) => m.y;
   const sy = (m: { x: number; y: number }) => -m.x;
   const design = airframe.cg ?? { x: 0, y: 0 };
   const body = Math.max(18, reach * 0.16);
-  const font = R / 11;
+  const font = (reach + pad) / 11;
+  const barW = propR * 1.2;
+  // Each deviation label (figure over bar) sits just outside its verdict ring, pushed out by
+  // its own half-size in that direction, so it never covers a prop disc however wide it is.
+  const labels = airframe.motors.map((m, i) => {
+    const dev = deviationPct[i] ?? NaN;
+    const text = Number.isFinite(dev) ? fmtPct(dev) : '—';
+    const cx = sx(m);
+    const cy = sy(m);
+    const out = Math.hypot(cx, cy) || 1;
+    const ux = cx / out;
+    const uy = cy / out;
+    const halfW = Math.max(barW / 2, 0.28 * font * text.length);
+    const halfH = 0.6 * font;
+    const d = propR + 10 + Math.abs(ux) * halfW + Math.abs(uy) * halfH;
+    return { text, x: cx + ux * d, y: cy + uy * d, halfW, halfH };
+  });
+  const R = Math.max(
+    reach + pad,
+    ...labels.map((l) => Math.max(Math.abs(l.x) + l.halfW, Math.abs(l.y) + l.halfH) + 8),
+  );
 
   return (
     <svg
@@ -88,15 +107,15 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
         const out = Math.hypot(cx, cy) || 1;
         const ux = cx / out;
         const uy = cy / out;
-        const lx = cx + ux * (propR + font * 1.2);
-        const ly = cy + uy * (propR + font * 1.2);
+        const label = labels[i]!;
+        const lx = label.x;
+        const ly = label.y;
         const ar = propR * 0.72;
         const a0 = Math.atan2(-uy, -ux) + Math.PI / 2; // start the arrow on the inner side
         const sweep = m.spin === 'cw' ? 1 : -1;
         const a1 = a0 + sweep * ((110 * Math.PI) / 180);
         const p0 = [cx + ar * Math.cos(a0), cy + ar * Math.sin(a0)];
         const p1 = [cx + ar * Math.cos(a1), cy + ar * Math.sin(a1)];
-        const barW = propR * 1.2;
         const frac = Number.isFinite(dev) ? Math.max(-1, Math.min(1, dev / BAR_FULL_PCT)) : 0;
         return (
           <g
@@ -147,34 +166,34 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
             </text>
             <text
               x={lx}
-              y={ly}
+              y={ly + font * 0.1}
               textAnchor="middle"
               fontSize={font * 0.9}
               className="num"
               fill={isFlagged ? '#b4443c' : '#1c2733'}
               fontWeight={isFlagged ? 700 : 500}
             >
-              {Number.isFinite(dev) ? fmtPct(dev) : '—'}
+              {label.text}
             </text>
             <rect
               x={lx - barW / 2}
-              y={ly + font * 0.45}
+              y={ly + font * 0.3}
               width={barW}
-              height={font * 0.35}
+              height={font * 0.3}
               fill="#eeebe3"
             />
             <rect
               x={frac >= 0 ? lx : lx + (frac * barW) / 2}
-              y={ly + font * 0.45}
+              y={ly + font * 0.3}
               width={(Math.abs(frac) * barW) / 2}
-              height={font * 0.35}
+              height={font * 0.3}
               fill={isFlagged ? '#b4443c' : motorColor(n)}
             />
             <line
               x1={lx}
               x2={lx}
-              y1={ly + font * 0.35}
-              y2={ly + font * 0.9}
+              y1={ly + font * 0.25}
+              y2={ly + font * 0.65}
               stroke="#4a5866"
               strokeWidth={1}
             />

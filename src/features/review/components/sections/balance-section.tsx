@@ -69,9 +69,9 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
             <tr className="border-b border-line text-left text-xs uppercase tracking-wide text-ink-faint">
               <th className="py-1 pr-3 font-medium">Motor</th>
               <th className="py-1 pr-3 font-medium">Spin</th>
-              <th className="py-1 pr-3 text-right font-medium">Expected</th>
-              <th className="py-1 pr-3 text-right font-medium">Measured</th>
-              <th className="py-1 pl-4 font-medium">Deviation</th>
+              <th className="py-1 pr-3 text-right font-medium">Share, expected</th>
+              <th className="py-1 pr-3 text-right font-medium">Share, measured</th>
+              <th className="py-1 pl-4 font-medium">Output vs expected</th>
             </tr>
           </thead>
           <tbody>
@@ -148,8 +148,11 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
           )}
         </div>
         <p className="text-xs text-ink-faint">
-          Expected shares come from the airframe&apos;s geometry (an asymmetric frame carries
-          unequal shares by design). Measured over {report.segments.hoverS.toFixed(1)} s of hover.
+          Shares are of the hover thrust: expected from the airframe&apos;s geometry (an asymmetric
+          frame carries unequal shares by design), measured from rpm when logged, else from output.
+          &ldquo;Output vs expected&rdquo; is how much more (or less) output each motor needed than
+          its share calls for: a worn motor carries its share but needs more output for it. Measured
+          over {report.segments.hoverS.toFixed(1)} s of hover.
         </p>
       </div>
     </div>
