@@ -9,10 +9,23 @@ import { Team } from '../teams/team.entity';
  * list never reads (or walks the overflow pages of) megabytes of traces.
  */
 @Entity('flights')
-// The team's flight list, newest first, with the id as tie-breaker for the cursor.
+// The team's flight list, newest first, with the id as tie-breaker for the cursor; one index per
+// list filter, each ending in the list order (see the flight-list-indexes migration).
 @Index('idx_flights_team_recorded', ['teamId', 'recordedAt', 'id'])
+@Index('idx_flights_team_aircraft_recorded', ['teamId', 'aircraftId', 'recordedAt', 'id'])
+@Index('idx_flights_team_pilot_recorded', ['teamId', 'pilotId', 'recordedAt', 'id'])
+@Index('idx_flights_team_review_recorded', ['teamId', 'reviewState', 'recordedAt', 'id'])
+@Index('idx_flights_team_open_recorded', ['teamId', 'recordedAt', 'id'], {
+  where: '"openComments" > 0',
+})
+@Index('idx_flights_team_watch_recorded', ['teamId', 'recordedAt', 'id'], {
+  where: '"worstSeverity" >= 2',
+})
+@Index('idx_flights_team_act_recorded', ['teamId', 'recordedAt', 'id'], {
+  where: '"worstSeverity" >= 3',
+})
+// Trends and an aircraft's last flight.
 @Index('idx_flights_aircraft_recorded', ['aircraftId', 'recordedAt', 'id'])
-@Index('idx_flights_team_pilot_recorded', ['teamId', 'pilotId', 'recordedAt'])
 @Index('idx_flights_team_sha256', ['teamId', 'sha256'])
 export class Flight {
   @PrimaryColumn('text') id!: string;

@@ -342,10 +342,13 @@ export class FlightsService {
     if (q.pilotId) params.pilotId = q.pilotId;
     if (q.from) params.from = Date.parse(q.from);
     if (q.to) params.to = Date.parse(q.to);
-    if (q.severity) params.sev = severityRank(q.severity);
     if (q.review) params.review = q.review;
     if (q.cursor) [params.cr, params.cid] = decodeCursor(q.cursor);
-    const key = `${Object.keys(params).join(',')}|open=${String(q.openComments)}|limit=${q.limit}`;
+    // The severity rank (one of three) is written into the SQL, not bound: a literal matches the
+    // partial indexes for "watch or worse" and "act" in every build (sqlite.org/partialindex.html
+    // §2); a bound value is matched only by builds with STAT4, and only after a re-prepare.
+    const sev = q.severity ? severityRank(q.severity) : 0;
+    const key = `${Object.keys(params).join(',')}|open=${String(q.openComments)}|sev=${sev}|limit=${q.limit}`;
     let run = this.listQueries.get(key);
     if (!run) {
       if (this.listQueries.size > 500) this.listQueries.clear();
@@ -358,13 +361,13 @@ export class FlightsService {
         if ('to' in p) qb.andWhere('f.recordedAt < :to', { to: p.to });
         if (q.openComments !== undefined)
           qb.andWhere(q.openComments ? 'f.openComments > 0' : 'f.openComments = 0');
-        if ('sev' in p) qb.andWhere('f.worstSeverity >= :sev', { sev: p.sev });
+        if (sev > 0) qb.andWhere(`f.worstSeverity >= ${sev}`);
         if ('review' in p) qb.andWhere('f.reviewState = :review', { review: p.review });
+        // A row-value comparison seeks straight to the cursor in the (…, recordedAt, id) index;
+        // the equivalent OR of two terms walked every newer flight first, so deep pages cost
+        // more the further down the list they were.
         if ('cr' in p) {
-          qb.andWhere('(f.recordedAt < :cr OR (f.recordedAt = :cr AND f.id < :cid))', {
-            cr: p.cr,
-            cid: p.cid,
-          });
+          qb.andWhere('(f.recordedAt, f.id) < (:cr, :cid)', { cr: p.cr, cid: p.cid });
         }
         return qb
           .orderBy('f.recordedAt', 'DESC')

@@ -1,16 +1,25 @@
 /**
  * API load: comment writes per second and a paginated flight list over 10 k stored flights,
- * driven by autocannon against the real server process on loopback with a fresh SQLite file.
- * Reference in the same run: `GET /api/health` (one trivial query), so the ratios say how much
- * of the machine's request budget a write or a list page costs. Bounded in count and time.
+ * against the real server process on loopback with a fresh SQLite file. Reference in the same
+ * run: `GET /api/health` (one trivial query), so the ratios say how much of the machine's
+ * request budget a write or a list page costs. Bounded in count and time.
  *
- * Throughput is measured closed-loop (10 connections, as fast as the server answers). Latency
- * is measured open-loop at a fixed offered rate — 500 writes/s (the target rate) and 200 list
- * pages/s — with autocannon's coordinated-omission correction, because a closed loop's latency
- * is just connections ÷ throughput and says nothing about a server meeting a given load.
+ * Throughput is measured closed-loop with autocannon (10 connections, as fast as the server
+ * answers), timed to 50 ms (autocannon only stops on a sample tick, 1 s by default).
+ *
+ * Latency is measured at a fixed offered rate — 500 writes/s (the target rate) and 200 list
+ * pages/s — two ways, both printed:
+ * - autocannon's `overallRate`: each of 10 connections sends its share of the second back to
+ *   back, then waits for the next second, so the load arrives as a burst of 10 concurrent
+ *   requests at the top of every second. Its coordinated-omission correction takes 1/rate in
+ *   seconds, rounded up to 1 ms, as the expected interval.
+ * - paced: one request every 1/rate s on a timer, over as many keep-alive sockets as needed,
+ *   each latency counted from when the request was due (so a late send counts against it).
+ *   This is the load the target describes; the burst figure is kept to compare with past runs.
  */
 import { randomUUID } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
+import { Agent, request as httpRequest } from 'node:http';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import { parseConfig } from '../../server/config';
@@ -51,6 +60,7 @@ type Autocannon = (opts: {
   amount?: number;
   headers?: Record<string, string>;
   overallRate?: number;
+  sampleInt?: number;
   requests: { method?: string; setupRequest?: (req: Request) => Request }[];
 }) => Promise<Result>;
 // autocannon ships no types; only this file uses it.
@@ -146,6 +156,75 @@ async function cursors(url: string, cookie: string, teamId: string) {
   return out;
 }
 
+interface Paced {
+  p50: number;
+  p99: number;
+  max: number;
+  sent: number;
+  failed: number;
+}
+
+/**
+ * Open-loop load: request k is due at start + k / rate; its latency runs from that moment to
+ * the last byte of the answer, in ms. Sockets are opened as needed, never waited for.
+ */
+async function paced(
+  url: string,
+  rate: number,
+  seconds: number,
+  headers: Record<string, string>,
+  next: () => { method: string; path: string; body?: string },
+): Promise<Paced> {
+  const agent = new Agent({ keepAlive: true, maxSockets: Infinity });
+  const { hostname, port } = new URL(url);
+  const total = Math.round(rate * seconds);
+  const latency = new Float64Array(total);
+  let done = 0;
+  let failed = 0;
+  let sent = 0;
+  const start = performance.now() + 20;
+  await new Promise<void>((resolve) => {
+    const finish = (k: number, due: number, ok: boolean) => {
+      latency[k] = performance.now() - due;
+      if (!ok) failed++;
+      if (++done === total) resolve();
+    };
+    const fire = () => {
+      const now = performance.now();
+      while (sent < total && start + (sent * 1000) / rate <= now) {
+        const k = sent++;
+        const due = start + (k * 1000) / rate;
+        const r = next();
+        const req = httpRequest(
+          {
+            agent,
+            hostname,
+            port,
+            method: r.method,
+            path: r.path,
+            headers: r.body
+              ? { ...headers, 'content-length': String(Buffer.byteLength(r.body)) }
+              : headers,
+          },
+          (res) => {
+            res.resume();
+            res.once('end', () => finish(k, due, (res.statusCode ?? 500) < 300));
+          },
+        );
+        req.once('error', () => finish(k, due, false));
+        req.end(r.body);
+      }
+      if (sent < total) setTimeout(fire, Math.max(0, start + (sent * 1000) / rate - now - 0.5));
+    };
+    fire();
+  });
+  agent.destroy();
+  const sorted = latency.sort();
+  const at = (q: number) =>
+    Math.round(sorted[Math.min(total - 1, Math.floor(q * total))]! * 10) / 10;
+  return { p50: at(0.5), p99: at(0.99), max: at(1), sent: total, failed };
+}
+
 function check(name: string, r: Result) {
   if (r.errors || r.timeouts || r.non2xx) {
     throw new Error(
@@ -172,6 +251,8 @@ const bench: Bench = async ({ json, dir }) => {
     const cookie = await signIn(server.url);
     const headers = { cookie, 'content-type': 'application/json' };
     const base = { url: server.url, connections: 10, headers };
+    // Closed-loop runs end on a sample tick; a short one times them to 50 ms, not 1 s.
+    const closed = { ...base, sampleInt: 50 };
 
     // Warm up the JIT and SQLite page cache.
     await autocannon({
@@ -182,7 +263,7 @@ const bench: Bench = async ({ json, dir }) => {
     });
 
     const health = await autocannon({
-      ...base,
+      ...closed,
       duration: 8,
       amount: 8000,
       requests: [{ setupRequest: (r) => ({ ...r, method: 'GET', path: '/api/health' }) }],
@@ -201,7 +282,7 @@ const bench: Bench = async ({ json, dir }) => {
       }),
     });
     const writes = await autocannon({
-      ...base,
+      ...closed,
       duration: 8,
       amount: 6000,
       requests: [{ setupRequest: writeRequest }],
@@ -214,6 +295,11 @@ const bench: Bench = async ({ json, dir }) => {
       requests: [{ setupRequest: writeRequest }],
     });
     check('comment writes at 500/s', writesAt500);
+    const writesPaced = await paced(server.url, 500, 8, headers, () => {
+      const r = writeRequest({});
+      return { method: r.method!, path: r.path!, body: r.body! };
+    });
+    if (writesPaced.failed) throw new Error(`paced comment writes: ${writesPaced.failed} failed`);
 
     const pages = await cursors(server.url, cookie, server.teamId);
     let p = 0;
@@ -226,7 +312,7 @@ const bench: Bench = async ({ json, dir }) => {
       };
     };
     const list = await autocannon({
-      ...base,
+      ...closed,
       duration: 8,
       amount: 4000,
       requests: [{ setupRequest: listRequest }],
@@ -239,22 +325,29 @@ const bench: Bench = async ({ json, dir }) => {
       requests: [{ setupRequest: listRequest }],
     });
     check('flight list at 200/s', listAt200);
+    const listPaced = await paced(server.url, 200, 8, headers, () => {
+      const r = listRequest({});
+      return { method: r.method!, path: r.path! };
+    });
+    if (listPaced.failed) throw new Error(`paced flight list: ${listPaced.failed} failed`);
 
     const perS = (r: Result) => r['2xx'] / r.duration;
     const figures = {
       writesPerS: Math.round(perS(writes)),
       writeP99Ms: writesAt500.latency.p99,
+      writeP99PacedMs: writesPaced.p99,
       listP99Ms: listAt200.latency.p99,
+      listP99PacedMs: listPaced.p99,
     };
     const ref = perS(health);
     log(
       `reference GET /api/health: ${Math.round(ref)} req/s (closed loop, 10 connections), p50 ${health.latency.p50} ms, p99 ${health.latency.p99} ms`,
     );
     log(
-      `comment writes: ${figures.writesPerS} /s closed loop (${(perS(writes) / ref).toFixed(2)}× health); at 500 /s offered: p50 ${writesAt500.latency.p50} ms, p99 ${writesAt500.latency.p99} ms — target ≥ 500 /s with p99 ≤ 50 ms`,
+      `comment writes: ${figures.writesPerS} /s closed loop (${(perS(writes) / ref).toFixed(2)}× health); at 500 /s offered — paced: p50 ${writesPaced.p50} ms, p99 ${writesPaced.p99} ms, max ${writesPaced.max} ms; in per-second bursts on 10 connections: p50 ${writesAt500.latency.p50} ms, p99 ${writesAt500.latency.p99} ms — target ≥ 500 /s with p99 ≤ 50 ms`,
     );
     log(
-      `flight list, 50 a page over ${FLIGHTS} flights (${pages.length} cursors): ${Math.round(perS(list))} /s closed loop (${(perS(list) / ref).toFixed(2)}× health); at 200 /s offered: p50 ${listAt200.latency.p50} ms, p99 ${listAt200.latency.p99} ms — target p99 ≤ 30 ms`,
+      `flight list, 50 a page over ${FLIGHTS} flights (${pages.length} cursors): ${Math.round(perS(list))} /s closed loop (${(perS(list) / ref).toFixed(2)}× health); at 200 /s offered — paced: p50 ${listPaced.p50} ms, p99 ${listPaced.p99} ms, max ${listPaced.max} ms; in per-second bursts on 10 connections: p50 ${listAt200.latency.p50} ms, p99 ${listAt200.latency.p99} ms — target p99 ≤ 30 ms`,
     );
     return figures;
   } finally {

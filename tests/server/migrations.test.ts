@@ -18,9 +18,36 @@ describe('migrations', () => {
   });
 
   it('create the schema the entities describe, leaving nothing for synchronize to do', async () => {
-    expect(applied).toEqual(['Initial1764633600000', 'InviteWithdrawal1764720000000']);
+    expect(applied).toEqual([
+      'Initial1764633600000',
+      'InviteWithdrawal1764720000000',
+      'FlightListIndexes1764806400000',
+    ]);
     const pending = await ds.driver.createSchemaBuilder().log();
     expect(pending.upQueries.map((q) => q.query)).toEqual([]);
+  });
+
+  it('build each named index with the columns, order and condition its entity declares', async () => {
+    // The schema builder compares index names and column sets only, not order or WHERE.
+    const stored = new Map(
+      (
+        (await ds.query("SELECT name, sql FROM sqlite_master WHERE type = 'index'")) as {
+          name: string;
+          sql: string | null;
+        }[]
+      ).map((i) => [i.name, i.sql ?? '']),
+    );
+    const declared = ds.entityMetadatas.flatMap((m) =>
+      m.indices.filter((i) => i.givenName).map((i) => ({ table: m.tableName, index: i })),
+    );
+    expect(declared.length).toBeGreaterThan(5);
+    for (const { table, index } of declared) {
+      const columns = index.columns.map((c) => `"${c.databaseName}"`).join(', ');
+      const where = index.where ? ` WHERE ${index.where}` : '';
+      expect(stored.get(index.name), index.name).toBe(
+        `CREATE ${index.isUnique ? 'UNIQUE ' : ''}INDEX "${index.name}" ON "${table}" (${columns})${where}`,
+      );
+    }
   });
 
   it('are not applied twice when the database is opened again', async () => {

@@ -1,9 +1,11 @@
 import type { MigrationInterface } from 'typeorm';
 import { Initial1764633600000 } from './1764633600000-initial';
 import { InviteWithdrawal1764720000000 } from './1764720000000-invite-withdrawal';
+import { FlightListIndexes1764806400000 } from './1764806400000-flight-list-indexes';
 
 /** Every migration in the order it must run. */
 export const migrations: (new () => MigrationInterface)[] = [
   Initial1764633600000,
   InviteWithdrawal1764720000000,
+  FlightListIndexes1764806400000,
 ];

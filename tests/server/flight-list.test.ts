@@ -1,0 +1,246 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { Flight } from '../../server/flights/flight.entity';
+import { User } from '../../server/auth/user.entity';
+import { Membership } from '../../server/teams/membership.entity';
+import {
+  FlightListQuery,
+  FlightPage,
+  type FlightListQueryInput,
+} from '../../shared/schemas/flights';
+import { kite } from './helpers/fixtures';
+import { startTestApp, type TestApp } from './helpers/test-app';
+
+/**
+ * The flight list with every filter the fleet page offers: the right flights in the right
+ * order across pages, and a query plan that seeks an index instead of scanning or sorting.
+ */
+describe('flight list', () => {
+  let t: TestApp;
+  let ownerId: string;
+  let pilotId: string;
+  let teamId: string;
+  let kiteId: string;
+  let heronId: string;
+  const all: Flight[] = [];
+
+  beforeAll(async () => {
+    t = await startTestApp();
+    const s = t.services;
+    ownerId = await s.auth.signUp({
+      email: 'mara@crew.example',
+      password: 'long enough pass',
+      name: 'Mara',
+    });
+    teamId = (await s.teams.create(ownerId, 'Club and filming crew')).id;
+    pilotId = randomUUID();
+    await t.dataSource.getRepository(User).insert({
+      id: pilotId,
+      email: 'pia@crew.example',
+      name: 'Pia',
+      passwordHash: 'x',
+      commentMail: true,
+      createdAt: 0,
+    });
+    await t.dataSource
+      .getRepository(Membership)
+      .insert({ teamId, userId: pilotId, role: 'pilot', joinedAt: 0 });
+    kiteId = (await s.fleet.create(ownerId, teamId, kite)).id;
+    heronId = (await s.fleet.create(ownerId, teamId, { ...kite, name: 'Heron' })).id;
+    // 60 flights, several recorded in the same minute, so pages split runs of equal times.
+    const states = ['none', 'requested', 'reviewed', 'changes-requested'];
+    for (let i = 0; i < 60; i++) {
+      all.push({
+        id: randomUUID(),
+        teamId,
+        aircraftId: i % 3 ? kiteId : heronId,
+        pilotId: i % 2 ? pilotId : ownerId,
+        recordedAt: Date.UTC(2026, 4, 1) + Math.floor(i / 4) * 60_000,
+        durationS: 30,
+        sampleRateHz: 2000,
+        fileName: `flight-${i}.csv`,
+        sha256: i.toString(16).padStart(64, '0'),
+        sizeBytes: 1000,
+        rawKey: null,
+        rawGzip: false,
+        reportVersion: 1,
+        trend: '{}',
+        worstSeverity: i % 4,
+        noteCount: 0,
+        watchCount: 0,
+        actCount: 0,
+        commentCount: i % 5 === 0 ? 2 : 0,
+        openComments: i % 5 === 0 ? 1 : 0,
+        reviewState: states[i % 7 === 0 ? 1 : i % 3 === 0 ? 2 : i % 11 === 0 ? 3 : 0]!,
+        note: '',
+        createdAt: 0,
+        updatedAt: 0,
+      });
+    }
+    await t.dataSource.getRepository(Flight).insert(all);
+  });
+  afterAll(() => t.close());
+
+  const day = (minutes: number) => new Date(Date.UTC(2026, 4, 1) + minutes * 60_000).toISOString();
+  const filters: Record<string, () => FlightListQueryInput> = {
+    aircraft: () => ({ aircraftId: heronId }),
+    pilot: () => ({ pilotId }),
+    'date range': () => ({ from: day(3), to: day(11) }),
+    'from a date': () => ({ from: day(5) }),
+    'until a date': () => ({ to: day(9) }),
+    'open comments': () => ({ openComments: 'true' }),
+    'no open comments': () => ({ openComments: 'false' }),
+    'at least note': () => ({ severity: 'note' }),
+    'at least watch': () => ({ severity: 'watch' }),
+    'act only': () => ({ severity: 'act' }),
+    'awaiting review': () => ({ review: 'requested' }),
+    reviewed: () => ({ review: 'reviewed' }),
+    'changes requested': () => ({ review: 'changes-requested' }),
+    'not reviewed': () => ({ review: 'none' }),
+  };
+  /** Which of the 60 flights a filter should keep, written out independently of the SQL. */
+  function expected(q: FlightListQueryInput) {
+    const rank = { note: 1, watch: 2, act: 3 };
+    return all
+      .filter(
+        (f) =>
+          (!q.aircraftId || f.aircraftId === q.aircraftId) &&
+          (!q.pilotId || f.pilotId === q.pilotId) &&
+          (!q.from || f.recordedAt >= Date.parse(q.from)) &&
+          (!q.to || f.recordedAt < Date.parse(q.to)) &&
+          (q.openComments === undefined ||
+            (q.openComments === 'true' ? f.openComments > 0 : f.openComments === 0)) &&
+          (!q.severity || f.worstSeverity >= rank[q.severity]) &&
+          (!q.review || f.reviewState === q.review),
+      )
+      .sort((a, b) => b.recordedAt - a.recordedAt || (a.id < b.id ? 1 : a.id > b.id ? -1 : 0))
+      .map((f) => f.id);
+  }
+  /** Two filters of different kinds, the way people narrow the list. */
+  function pairs() {
+    const kind = (n: string) =>
+      /comments/.test(n)
+        ? 'open'
+        : /note|watch|act/.test(n)
+          ? 'sev'
+          : /review|changes/.test(n)
+            ? 'review'
+            : /date/.test(n)
+              ? 'date'
+              : n;
+    const names = Object.keys(filters);
+    return names.flatMap((a, i) =>
+      names
+        .slice(i + 1)
+        .filter((b) => kind(a) !== kind(b))
+        .map((b) => [a, b] as const),
+    );
+  }
+  const combos = () => [
+    ['no filter'] as const,
+    ...Object.keys(filters).map((n) => [n] as const),
+    ...pairs(),
+  ];
+  const queryOf = (names: readonly string[]) =>
+    Object.assign(
+      {},
+      ...names.filter((n) => n in filters).map((n) => filters[n]!()),
+    ) as FlightListQueryInput;
+
+  async function walk(q: FlightListQueryInput, limit: number) {
+    const ids: string[] = [];
+    let cursor: string | null = null;
+    do {
+      const page = FlightPage.parse(
+        await t.services.flights.list(
+          ownerId,
+          teamId,
+          FlightListQuery.parse({ ...q, limit, ...(cursor ? { cursor } : {}) }),
+        ),
+      );
+      expect(page.flights.length).toBeLessThanOrEqual(limit);
+      ids.push(...page.flights.map((f) => f.id));
+      cursor = page.nextCursor;
+    } while (cursor);
+    return ids;
+  }
+
+  it('pages every filter and every pair of filters newest first, each flight once', async () => {
+    for (const names of combos()) {
+      const q = queryOf(names);
+      const want = expected(q);
+      expect(await walk(q, 3), names.join(' + ')).toEqual(want);
+    }
+  });
+
+  it('keeps flights recorded at the same moment apart across a page boundary', async () => {
+    // Four flights share each minute; pages of 3 cut through every run of equal times.
+    const ids = await walk({}, 3);
+    expect(ids).toEqual(expected({}));
+    expect(ids).toHaveLength(60);
+  });
+
+  async function plan(q: FlightListQueryInput, withCursor: boolean) {
+    const first = await t.services.flights.list(
+      ownerId,
+      teamId,
+      FlightListQuery.parse({ ...q, limit: 2 }),
+    );
+    const spy = vi.spyOn(t.dataSource, 'query');
+    try {
+      await t.services.flights.list(
+        ownerId,
+        teamId,
+        FlightListQuery.parse({
+          ...q,
+          limit: 2,
+          ...(withCursor && first.nextCursor ? { cursor: first.nextCursor } : {}),
+        }),
+      );
+      const call = spy.mock.calls.find(([sql]) => /FROM "flights"/.test(sql));
+      expect(call, 'the list query').toBeDefined();
+      const [sql, params] = call!;
+      const rows = (await t.dataSource.query(`EXPLAIN QUERY PLAN ${sql}`, params)) as {
+        detail: string;
+      }[];
+      return rows.map((r) => r.detail);
+    } finally {
+      spy.mockRestore();
+    }
+  }
+
+  it('seeks an index for every filter and pair, with or without a cursor, and never sorts', async () => {
+    for (const names of combos()) {
+      for (const withCursor of [false, true]) {
+        const steps = await plan(queryOf(names), withCursor);
+        const label = `${names.join(' + ')}${withCursor ? ' (cursor)' : ''}: ${steps.join(' | ')}`;
+        const flights = steps.find(
+          (d) => / f /.test(` ${d} `) || d.startsWith('SEARCH f') || d.startsWith('SCAN f'),
+        );
+        expect(flights, label).toMatch(/^SEARCH f USING INDEX idx_flights_/);
+        expect(steps.join(' '), label).not.toMatch(/TEMP B-TREE|SCAN f\b/);
+      }
+    }
+  });
+
+  it('uses the index made for each single filter', async () => {
+    const want: Record<string, string> = {
+      'no filter': 'idx_flights_team_recorded',
+      aircraft: 'idx_flights_team_aircraft_recorded',
+      pilot: 'idx_flights_team_pilot_recorded',
+      'date range': 'idx_flights_team_recorded',
+      'open comments': 'idx_flights_team_open_recorded',
+      'at least watch': 'idx_flights_team_watch_recorded',
+      'act only': 'idx_flights_team_act_recorded',
+      'awaiting review': 'idx_flights_team_review_recorded',
+      reviewed: 'idx_flights_team_review_recorded',
+    };
+    for (const [name, index] of Object.entries(want)) {
+      const steps = await plan(queryOf([name]), true);
+      const f = steps.find((d) => d.startsWith('SEARCH f'))!;
+      expect(f, name).toContain(`USING INDEX ${index} `);
+      // The cursor is part of the seek, not a filter applied to every newer row.
+      if (name !== 'date range') expect(f, name).toContain('(recordedAt,id)<(?,?)');
+    }
+  });
+});
