@@ -23,10 +23,21 @@ export const aircraftQueries = {
     queryOptions({ queryKey: aircraftKeys.list(teamId), queryFn: () => fetchTeamAircraft(teamId) }),
   detail: (id: string) =>
     queryOptions({ queryKey: aircraftKeys.detail(id), queryFn: () => fetchAircraft(id) }),
+  // Records the crew adds to and corrects from several devices: always ask again when the page
+  // opens. (Queries under 'aircraft' are also kept across reloads, so a copy restored from
+  // before an entry was added or deleted must not pass as fresh.)
   serviceLog: (id: string) =>
-    queryOptions({ queryKey: aircraftKeys.serviceLog(id), queryFn: () => fetchServiceLog(id) }),
+    queryOptions({
+      queryKey: aircraftKeys.serviceLog(id),
+      queryFn: () => fetchServiceLog(id),
+      staleTime: 0,
+    }),
   benchRuns: (id: string) =>
-    queryOptions({ queryKey: aircraftKeys.benchRuns(id), queryFn: () => fetchBenchRuns(id) }),
+    queryOptions({
+      queryKey: aircraftKeys.benchRuns(id),
+      queryFn: () => fetchBenchRuns(id),
+      staleTime: 0,
+    }),
   trends: (id: string) =>
     queryOptions({ queryKey: aircraftKeys.trends(id), queryFn: () => fetchTrends(id) }),
 };
