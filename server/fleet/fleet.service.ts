@@ -49,16 +49,28 @@ export class FleetService {
   private async toDtos(rows: Aircraft[]): Promise<AircraftDto[]> {
     if (rows.length === 0) return [];
     const ids = rows.map((a) => a.id);
-    const stats = await this.ds
+    // Two counts that each stay inside an index: all flights from the aircraft index alone, and
+    // the few awaiting review through the team's review-state index (rather than reading every
+    // flight row of the fleet to look at its review state).
+    const counts = await this.ds
       .getRepository(Flight)
       .createQueryBuilder('f')
       .select('f.aircraftId', 'aircraftId')
-      .addSelect('COUNT(*)', 'flightCount')
-      .addSelect("SUM(CASE WHEN f.reviewState = 'requested' THEN 1 ELSE 0 END)", 'awaiting')
+      .addSelect('COUNT(*)', 'n')
       .where('f.aircraftId IN (:...ids)', { ids })
       .groupBy('f.aircraftId')
-      .getRawMany<{ aircraftId: string; flightCount: number; awaiting: number }>();
-    const byId = new Map(stats.map((s) => [s.aircraftId, s]));
+      .getRawMany<{ aircraftId: string; n: number }>();
+    const awaiting = await this.ds
+      .getRepository(Flight)
+      .createQueryBuilder('f')
+      .select('f.aircraftId', 'aircraftId')
+      .addSelect('COUNT(*)', 'n')
+      .where("f.teamId = :teamId AND f.reviewState = 'requested'", { teamId: rows[0]!.teamId })
+      .andWhere('f.aircraftId IN (:...ids)', { ids })
+      .groupBy('f.aircraftId')
+      .getRawMany<{ aircraftId: string; n: number }>();
+    const flightCount = new Map(counts.map((c) => [c.aircraftId, Number(c.n)]));
+    const awaitingReview = new Map(awaiting.map((c) => [c.aircraftId, Number(c.n)]));
     const out: AircraftDto[] = [];
     for (const a of rows) {
       const last = await this.ds.getRepository(Flight).findOne({
@@ -73,7 +85,6 @@ export class FleetService {
           actCount: true,
         },
       });
-      const s = byId.get(a.id);
       out.push({
         id: a.id,
         teamId: a.teamId,
@@ -81,8 +92,8 @@ export class FleetService {
         airframe: a.airframe,
         components: a.components,
         notes: a.notes,
-        flightCount: Number(s?.flightCount ?? 0),
-        awaitingReview: Number(s?.awaiting ?? 0),
+        flightCount: flightCount.get(a.id) ?? 0,
+        awaitingReview: awaitingReview.get(a.id) ?? 0,
         lastFlight: last
           ? {
               id: last.id,

@@ -180,6 +180,19 @@ describe('flight list', () => {
     expect(ids).toHaveLength(60);
   });
 
+  it('counts each aircraft’s flights and those awaiting review for the fleet cards', async () => {
+    const cards = await t.services.fleet.list(ownerId, teamId);
+    for (const card of cards) {
+      const mine = all.filter((f) => f.aircraftId === card.id);
+      expect(card.flightCount, card.name).toBe(mine.length);
+      expect(card.awaitingReview, card.name).toBe(
+        mine.filter((f) => f.reviewState === 'requested').length,
+      );
+      expect(card.awaitingReview, card.name).toBeGreaterThan(0);
+    }
+    expect(cards.map((c) => c.name)).toEqual(['Heron', 'Kite']);
+  });
+
   async function plan(q: FlightListQueryInput, withCursor: boolean) {
     const first = await t.services.flights.list(
       ownerId,
