@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { IsNull, type DataSource } from 'typeorm';
+import { In, IsNull, type DataSource } from 'typeorm';
 import type { Role } from '../../shared/schemas/common';
 import type {
   Invite as InviteDto,
@@ -220,7 +220,13 @@ export class TeamsService {
     return { ...this.inviteDto(invite, by.name), link: inviteUrl(this.config, token) };
   }
 
-  private inviteDto(i: Invite, invitedBy: string, now = Date.now()): InviteDto {
+  private inviteDto(
+    i: Invite,
+    invitedBy: string,
+    names: ReadonlyMap<string, string> = new Map(),
+    now = Date.now(),
+  ): InviteDto {
+    const nameOf = (id: string | null) => (id === null ? null : (names.get(id) ?? ''));
     return {
       id: i.id,
       teamId: i.teamId,
@@ -231,7 +237,9 @@ export class TeamsService {
       createdAt: iso(i.createdAt),
       invitedBy,
       acceptedAt: isoOrNull(i.acceptedAt),
+      acceptedBy: nameOf(i.acceptedById),
       withdrawnAt: isoOrNull(i.withdrawnAt),
+      withdrawnBy: nameOf(i.withdrawnById),
     };
   }
 
@@ -245,8 +253,15 @@ export class TeamsService {
         .orderBy('i.createdAt', 'DESC'),
       'i.invitedById',
     );
+    const ids = [
+      ...new Set(
+        rows.flatMap(([i]) => [i.acceptedById, i.withdrawnById]).filter((id) => id !== null),
+      ),
+    ];
+    const users = ids.length > 0 ? await this.ds.getRepository(User).findBy({ id: In(ids) }) : [];
+    const names = new Map(users.map((u) => [u.id, u.name]));
     const now = Date.now();
-    return rows.map(([invite, invitedBy]) => this.inviteDto(invite, invitedBy, now));
+    return rows.map(([invite, invitedBy]) => this.inviteDto(invite, invitedBy, names, now));
   }
 
   /**

@@ -56,7 +56,10 @@ export const Invite = z.object({
   createdAt: IsoDateTime,
   invitedBy: z.string(),
   acceptedAt: IsoDateTime.nullable(),
+  /** Who joined with it: anyone holding the link can, so it may not be the invited address. */
+  acceptedBy: z.string().nullable(),
   withdrawnAt: IsoDateTime.nullable(),
+  withdrawnBy: z.string().nullable(),
   /**
    * The accept link, for the owner to pass on by hand. Only in the answer that creates the invite:
    * the server keeps just a hash of the token, so it cannot show the link again later.

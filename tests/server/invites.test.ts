@@ -43,7 +43,12 @@ describe('invitations: withdrawal and state', () => {
     expect(row!.withdrawnById).toBe(owner.id);
     expect(row!.withdrawnAt).toBeGreaterThanOrEqual(before);
     const shown = await listed(inv.id);
-    expect(shown).toMatchObject({ state: 'withdrawn', acceptedAt: null });
+    expect(shown).toMatchObject({
+      state: 'withdrawn',
+      withdrawnBy: 'Mara',
+      acceptedAt: null,
+      acceptedBy: null,
+    });
     expect(Date.parse(shown!.withdrawnAt!)).toBe(row!.withdrawnAt);
   });
 
@@ -91,7 +96,12 @@ describe('invitations: withdrawal and state', () => {
     const res = await owner.agent.delete(`/api/teams/${teamId}/invites/${inv.id}`).expect(409);
     expect(ApiErrorBody.parse(res.body).error.code).toBe('invite_accepted');
     await cato.agent.get(`/api/teams/${teamId}`).expect(200);
-    expect(await listed(inv.id)).toMatchObject({ state: 'accepted', withdrawnAt: null });
+    expect(await listed(inv.id)).toMatchObject({
+      state: 'accepted',
+      acceptedBy: 'Cato',
+      withdrawnAt: null,
+      withdrawnBy: null,
+    });
   });
 
   it("does not find another team's invitation under this team", async () => {

@@ -22,7 +22,9 @@ const base = {
   createdAt: '2026-05-02T09:00:00.000Z',
   invitedBy: 'Mara',
   acceptedAt: null,
+  acceptedBy: null,
   withdrawnAt: null,
+  withdrawnBy: null,
 };
 const invites: Invite[] = [
   { ...base, id: OPEN, email: 'noor@crew.example', state: 'open' },
@@ -32,6 +34,7 @@ const invites: Invite[] = [
     email: 'cato@crew.example',
     state: 'accepted',
     acceptedAt: '2026-05-03T10:00:00.000Z',
+    acceptedBy: 'Cato',
   },
   {
     ...base,
@@ -39,6 +42,7 @@ const invites: Invite[] = [
     email: 'ines@crew.example',
     state: 'withdrawn',
     withdrawnAt: '2026-05-04T10:00:00.000Z',
+    withdrawnBy: 'Mara',
   },
   {
     ...base,
@@ -63,7 +67,12 @@ function stubServer() {
       return jsonResponse(200, {
         invites: invites.map((i) =>
           i.id === OPEN && withdrawn
-            ? { ...i, state: 'withdrawn', withdrawnAt: '2026-05-05T08:00:00.000Z' }
+            ? {
+                ...i,
+                state: 'withdrawn',
+                withdrawnAt: '2026-05-05T08:00:00.000Z',
+                withdrawnBy: 'Mara',
+              }
             : i,
         ),
       });
@@ -80,8 +89,10 @@ describe('invites panel', () => {
     stubServer();
     renderWithQuery(<InvitesPanel teamId={TEAM} />);
     expect(within(await rowOf('noor@crew.example')).getByText(/^open until/)).toBeTruthy();
-    expect(within(await rowOf('cato@crew.example')).getByText(/^joined/)).toBeTruthy();
-    expect(within(await rowOf('ines@crew.example')).getByText(/^withdrawn/)).toBeTruthy();
+    expect(within(await rowOf('cato@crew.example')).getByText(/^Cato joined/)).toBeTruthy();
+    expect(
+      within(await rowOf('ines@crew.example')).getByText(/^withdrawn .* by Mara$/),
+    ).toBeTruthy();
     expect(within(await rowOf('late@crew.example')).getByText(/^expired/)).toBeTruthy();
     expect(within(await rowOf('noor@crew.example')).getByText(/by Mara/)).toBeTruthy();
     expect(screen.getAllByRole('button', { name: /^Withdraw/ })).toHaveLength(1);

@@ -147,10 +147,17 @@ const day = (at: string) => new Date(at).toLocaleDateString();
 function InviteStateNote({ invite: i }: { invite: Invite }) {
   switch (i.state) {
     case 'accepted':
-      return <span className="text-ok">joined {i.acceptedAt && day(i.acceptedAt)}</span>;
+      return (
+        <span className="text-ok">
+          {i.acceptedBy ? `${i.acceptedBy} joined` : 'joined'} {i.acceptedAt && day(i.acceptedAt)}
+        </span>
+      );
     case 'withdrawn':
       return (
-        <span className="text-ink-faint">withdrawn {i.withdrawnAt && day(i.withdrawnAt)}</span>
+        <span className="text-ink-faint">
+          withdrawn {i.withdrawnAt && day(i.withdrawnAt)}
+          {i.withdrawnBy && ` by ${i.withdrawnBy}`}
+        </span>
       );
     case 'expired':
       return <span className="text-ink-faint">expired {day(i.expiresAt)}</span>;
