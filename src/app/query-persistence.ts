@@ -6,10 +6,14 @@ import { dehydrate, hydrate, type QueryClient } from '@tanstack/react-query';
  * and reviews are not kept here: flights read on this device live in IndexedDB.
  */
 const KEY = 'hoverprint.query-cache.v1';
-const kept = new Set(['teams', 'aircraft', 'import', 'presets']);
+const keptWhole = new Set(['import', 'presets']);
+/** Of these only the lists are kept; details (service log, members, trends…) are read fresh. */
+const keptLists = new Set(['teams', 'aircraft']);
 
 export function isKept(queryKey: readonly unknown[]): boolean {
-  return typeof queryKey[0] === 'string' && kept.has(queryKey[0]);
+  const [root, level] = queryKey;
+  if (typeof root !== 'string') return false;
+  return keptWhole.has(root) || (keptLists.has(root) && level === 'list');
 }
 
 export function restoreQueries(client: QueryClient, storage: Storage = localStorage): void {

@@ -6,13 +6,15 @@ import { persistQueries, restoreQueries } from '../../../src/app/query-persisten
 afterEach(() => localStorage.clear());
 
 describe('query persistence', () => {
-  it('brings team lists back after a reload and leaves flights and reviews out', async () => {
+  it('brings team lists back after a reload and leaves details, flights and reviews out', async () => {
     const before = new QueryClient();
     const stop = persistQueries(before, localStorage, 0);
     before.setQueryData(['aircraft', 'list', 'team-1'], { aircraft: [{ id: 'a1', name: 'Kite' }] });
     before.setQueryData(['import', 'aircraft', 'team-1'], {
       aircraft: [{ id: 'a1', name: 'Kite' }],
     });
+    before.setQueryData(['aircraft', 'detail', 'a1', 'service-log'], { entries: [] });
+    before.setQueryData(['teams', 'detail', 'team-1', 'members'], { members: [] });
     before.setQueryData(['review', 'flight', 'f1'], { big: true });
     before.setQueryData(['flights', 'list', 'team-1', {}], { pages: [] });
     stop();
@@ -23,6 +25,8 @@ describe('query persistence', () => {
       aircraft: [{ id: 'a1', name: 'Kite' }],
     });
     expect(after.getQueryData(['import', 'aircraft', 'team-1'])).toBeDefined();
+    expect(after.getQueryData(['aircraft', 'detail', 'a1', 'service-log'])).toBeUndefined();
+    expect(after.getQueryData(['teams', 'detail', 'team-1', 'members'])).toBeUndefined();
     expect(after.getQueryData(['review', 'flight', 'f1'])).toBeUndefined();
     expect(after.getQueryData(['flights', 'list', 'team-1', {}])).toBeUndefined();
   });
