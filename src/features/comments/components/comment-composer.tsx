@@ -1,4 +1,4 @@
-import { forwardRef, useImperativeHandle, useRef, useState } from 'react';
+import { forwardRef, useImperativeHandle, useLayoutEffect, useRef, useState } from 'react';
 import type { UserRef } from '../../../../shared/schemas/common';
 import { insertMention, matchMembers, mentionQuery, mentionedIn } from '../model/mentions';
 
@@ -38,13 +38,21 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
     const pick = (m: UserRef) => {
       if (!mq) return;
       const next = insertMention(text, mq.start, caret, m);
+      pendingCaret.current = next.caret;
       setText(next.text);
       setCaret(next.caret);
-      requestAnimationFrame(() => {
-        area.current?.focus();
-        area.current?.setSelectionRange(next.caret, next.caret);
-      });
     };
+
+    // Place the caret after the picked name in the same commit: a deferred frame let the
+    // next keystrokes land before it moved, scrambling fast typing.
+    const pendingCaret = useRef<number | null>(null);
+    useLayoutEffect(() => {
+      const at = pendingCaret.current;
+      if (at === null) return;
+      pendingCaret.current = null;
+      area.current?.focus();
+      area.current?.setSelectionRange(at, at);
+    });
 
     const submit = () => {
       const body = text.trim();
