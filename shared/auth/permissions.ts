@@ -23,7 +23,7 @@ export const permissions = {
   'serviceLog.create': ['owner', 'tuner', 'pilot'],
   // Correcting the record: whoever edits aircraft removes any service event; a pilot only their own.
   'serviceLog.deleteAny': ['owner', 'tuner'],
-  'serviceLog.deleteOwn': ['pilot'],
+  'serviceLog.deleteOwn': ['owner', 'pilot'],
   'benchRuns.create': ['owner', 'tuner'],
   'benchRuns.delete': ['owner', 'tuner'],
   'flights.upload': ['owner', 'tuner', 'pilot'],
