@@ -26,7 +26,9 @@ export function AircraftCards({ aircraft }: { aircraft: Aircraft[] }) {
             >
               {a.name}
             </Link>
-            <p className="truncate text-xs text-ink-soft">{a.airframe.name}</p>
+            {a.airframe.name !== a.name && (
+              <p className="truncate text-xs text-ink-soft">{a.airframe.name}</p>
+            )}
             <p className="num mt-1 text-xs text-ink-soft">
               {a.airframe.motors.length} motors · {a.airframe.massG} g ·{' '}
               {a.airframe.prop.diameterIn}″{a.airframe.cells ? ` · ${a.airframe.cells}S` : ''}

@@ -44,8 +44,10 @@ const columns = [
       return (
         <span className="flex items-center gap-2">
           <SeverityBadge severity={c.getValue()} />
-          <span className="num text-xs text-ink-faint" title="act / watch / note">
-            {act}/{watch}/{note}
+          <span className="num text-xs text-ink-faint">
+            {[act > 0 && `${act} act`, watch > 0 && `${watch} watch`, note > 0 && `${note} note`]
+              .filter(Boolean)
+              .join(' · ')}
           </span>
         </span>
       );
