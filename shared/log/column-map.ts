@@ -435,3 +435,15 @@ export function canonicalReading(header: string): { channel: string; unit: Unit 
   if (unit === null || !family.units.includes(unit)) return null;
   return { channel, unit };
 }
+
+/**
+ * The first saved map that names every one of these headers, so a file laid out like an
+ * earlier one reads without asking again; none for an empty header list.
+ */
+export function mapCoveringHeaders(
+  maps: readonly { columnMap: ColumnMap }[] | undefined,
+  headers: readonly string[],
+): ColumnMap | undefined {
+  if (!maps || headers.length === 0) return undefined;
+  return maps.find((m) => headers.every((h) => h in m.columnMap.columns))?.columnMap;
+}

@@ -4,7 +4,7 @@ import { useDropzone } from 'react-dropzone';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
-import type { ColumnMap } from '../../../../shared/log/column-map';
+import { mapCoveringHeaders } from '../../../../shared/log/column-map';
 import { saveRereadMap } from '../../../lib/local-db';
 import { parseWorker } from '../../../lib/parse-worker';
 import { isLogFile, jobsReducer, nextQueued, type ImportJob } from '../model/import-jobs';
@@ -23,15 +23,6 @@ export interface ImportPanelProps {
   canSavePreset: boolean;
   /** Called when the only file of a drop is analysed: the review opens straight away. */
   onOpenFlight: (flightId: string) => void;
-}
-
-/** Find a saved preset whose headers are exactly this file's headers. */
-function matchingPreset(
-  presets: { columnMap: ColumnMap }[] | undefined,
-  headers: string[],
-): ColumnMap | undefined {
-  if (!presets) return undefined;
-  return presets.find((p) => headers.every((h) => h in p.columnMap.columns))?.columnMap;
 }
 
 export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanelProps) {
@@ -115,7 +106,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
     }).then((status) => {
       dispatch({ type: 'status', id: job.id, status });
       if (status.kind === 'needs-map') {
-        const preset = matchingPreset(presets.data?.presets, status.headers);
+        const preset = mapCoveringHeaders(presets.data?.presets, status.headers);
         // A team preset that covers every header is applied without asking again.
         if (preset && !job.columnMap) dispatch({ type: 'map', id: job.id, columnMap: preset });
       }
@@ -247,7 +238,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
                 proposal={remap.data.preview.proposal}
                 sampleRows={remap.data.preview.sampleRows}
                 {...(() => {
-                  const p = matchingPreset(presets.data?.presets, remap.data.preview.headers);
+                  const p = mapCoveringHeaders(presets.data?.presets, remap.data.preview.headers);
                   return p ? { preset: p } : {};
                 })()}
                 canSavePreset={teamId !== null && canSavePreset}
@@ -271,7 +262,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
             proposal={mapping.status.proposal}
             sampleRows={mapping.status.sampleRows}
             {...(() => {
-              const p = matchingPreset(presets.data?.presets, mapping.status.headers);
+              const p = mapCoveringHeaders(presets.data?.presets, mapping.status.headers);
               return p ? { preset: p } : {};
             })()}
             canSavePreset={teamId !== null && canSavePreset}

@@ -1,6 +1,6 @@
 import { transfer } from 'comlink';
 import type { FilterSpec } from '../../../../shared/analysis/filters/filter-spec';
-import type { ColumnMap } from '../../../../shared/log/column-map';
+import { mapCoveringHeaders } from '../../../../shared/log/column-map';
 import type { ReadOptions } from '../../../../shared/log/parse';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { ParseFailure } from '../../../../workers/parse.worker';
@@ -17,11 +17,6 @@ export class NeedsColumnMapError extends Error {
 const loading = new Map<string, Promise<void>>();
 
 /** A team preset that maps every one of these headers (the rule the import uses too). */
-function coveringPreset(presets: { columnMap: ColumnMap }[], headers: string[]) {
-  if (headers.length === 0) return undefined;
-  return presets.find((p) => headers.every((h) => h in p.columnMap.columns))?.columnMap;
-}
-
 /** Reads the file in the parse worker straight into the analysis worker's cache; null when kept. */
 async function readInto(
   flight: ReviewFlight,
@@ -67,7 +62,7 @@ async function loadIntoWorker(flight: ReviewFlight, airframe: Airframe): Promise
             (r) => r.presets,
             () => [], // offline or signed out: no presets to try
           );
-    const preset = coveringPreset(presets, failure.headers ?? []);
+    const preset = mapCoveringHeaders(presets, failure.headers ?? []);
     if (!preset) {
       throw new NeedsColumnMapError(
         'The raw log’s columns need a column map to be read again, and none is kept for this flight or among the team’s import presets.',
