@@ -52,6 +52,9 @@ describe('segments', () => {
   const seg = findSegments(log, defaultThresholds);
   const sec = (r: [number, number][]) => rangeLength(r) / fs;
 
+  // The definition under test is the design's (PRODUCT.md §6: hover = steady body rates and
+  // collective for at least 1 s); the rate and collective limits behind it are common practice,
+  // each explained where it is defined (shared/analysis/thresholds.ts).
   it('finds the two hovers and not the short calm moment between flips', () => {
     expect(seg.hover.length).toBe(2);
     expect(seg.hover[0]![0] / fs).toBeCloseTo(3, 0);
