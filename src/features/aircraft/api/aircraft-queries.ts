@@ -24,8 +24,7 @@ export const aircraftQueries = {
   detail: (id: string) =>
     queryOptions({ queryKey: aircraftKeys.detail(id), queryFn: () => fetchAircraft(id) }),
   // Records the crew adds to and corrects from several devices: always ask again when the page
-  // opens. (Queries under 'aircraft' are also kept across reloads, so a copy restored from
-  // before an entry was added or deleted must not pass as fresh.)
+  // opens, so an entry added or deleted elsewhere a moment ago shows.
   serviceLog: (id: string) =>
     queryOptions({
       queryKey: aircraftKeys.serviceLog(id),
