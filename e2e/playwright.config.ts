@@ -37,7 +37,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'npx tsx server/index.ts',
+    // The server itself, not a wrapper that forks it, so stopping it leaves nothing behind.
+    command: 'node --import tsx server/index.ts',
     cwd: '..',
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
@@ -50,6 +51,8 @@ export default defineConfig({
       // Every journey signs people up and in from one address; the production limit would
       // start refusing them part-way through the suite.
       AUTH_RATE_LIMIT: '1000',
+      // Journeys read invite and reset links from the dev inbox.
+      MAIL_FAKE: '1',
     },
   },
 });

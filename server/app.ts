@@ -67,7 +67,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(fleetRouter(services));
   app.use(flightsRouter(services, config));
   app.use(commentsRouter(services));
-  if (config.mail.fake) app.use(devMailRouter(services.mailer, config));
+  if (config.mail.mode === 'fake') app.use(devMailRouter(services.mailer, config));
   app.use('/api', apiNotFound);
 
   if (config.env === 'production') {

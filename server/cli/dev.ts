@@ -27,7 +27,15 @@ function stop(code: number) {
   setTimeout(() => process.exit(code), 500).unref();
 }
 
-const env = { ...process.env, PORT: apiPort, API_PORT: apiPort, NODE_ENV: 'development' };
+// Loopback only: the dev inbox shows reset links, and the fake mail is on (MAIL_FAKE=1).
+const env = {
+  ...process.env,
+  PORT: apiPort,
+  API_PORT: apiPort,
+  NODE_ENV: 'development',
+  HOST: '127.0.0.1',
+  MAIL_FAKE: '1',
+};
 run(
   'api',
   ['node_modules/tsx/dist/cli.mjs', 'watch', '--clear-screen=false', 'server/index.ts'],

@@ -29,11 +29,14 @@ export interface Mailer {
   close(): Promise<void>;
 }
 
-/** nodemailer over SMTP: to the fake server in development/demo/tests, else SMTP_URL. */
+/**
+ * nodemailer: over SMTP to the fake server (MAIL_FAKE=1) or to SMTP_URL; with neither, each
+ * message is written to the server log so an operator can still pass on a reset link.
+ */
 export async function startMailer(config: MailConfig, logger: Logger): Promise<Mailer> {
   let fake: FakeSmtp | null = null;
   let transport: Transporter;
-  if (config.fake) {
+  if (config.mode === 'fake') {
     fake = await startFakeSmtp(config.fakePort);
     logger.info({ port: fake.port }, 'fake SMTP server catching all mail (see /api/dev/mail)');
     transport = nodemailer.createTransport({
@@ -44,8 +47,13 @@ export async function startMailer(config: MailConfig, logger: Logger): Promise<M
       pool: true,
       maxConnections: 2,
     });
-  } else {
+  } else if (config.mode === 'smtp') {
     transport = nodemailer.createTransport(config.smtpUrl!);
+  } else {
+    logger.warn(
+      'no SMTP_URL and no MAIL_FAKE=1: outgoing mail (invites, reset links) is only written to this log',
+    );
+    transport = nodemailer.createTransport({ jsonTransport: true });
   }
 
   const pending = new Set<Promise<void>>();
@@ -60,6 +68,9 @@ export async function startMailer(config: MailConfig, logger: Logger): Promise<M
       // Base64 parts keep long lines and non-ASCII names intact through any relay.
       textEncoding: 'base64',
     });
+    if (config.mode === 'log') {
+      logger.warn({ to: mail.to, subject: mail.subject, text: mail.text }, 'mail (not sent)');
+    }
   };
   return {
     send,

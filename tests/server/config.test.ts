@@ -11,7 +11,8 @@ describe('parseConfig', () => {
     expect(c.dataDir).toBe(resolve('./data'));
     expect(c.dbPath).toBe(resolve('./data/hoverprint.sqlite'));
     expect(c.publicUrl).toBe('http://localhost:8080');
-    expect(c.mail.fake).toBe(true);
+    // Neither fake nor real SMTP unless asked: mail goes to the log.
+    expect(c.mail.mode).toBe('log');
   });
 
   it('puts the database file inside DATA_DIR and builds links from PUBLIC_URL', () => {
@@ -55,18 +56,17 @@ describe('parseConfig', () => {
     }
   });
 
-  it('uses real SMTP in production when SMTP_URL is set, the fake otherwise', () => {
-    expect(
-      parseConfig({ NODE_ENV: 'production', SMTP_URL: 'smtp://mail.example.org:587' }).mail.fake,
-    ).toBe(false);
-    expect(parseConfig({ NODE_ENV: 'production' }).mail.fake).toBe(true);
-    expect(
-      parseConfig({ NODE_ENV: 'development', SMTP_URL: 'smtp://mail.example.org:587' }).mail.fake,
-    ).toBe(true);
-  });
-
-  it('refuses to turn the fake mail off without a real SMTP server', () => {
-    expect(() => parseConfig({ MAIL_FAKE: 'false' })).toThrow(/SMTP_URL/);
+  it('turns the fake mail on only when MAIL_FAKE is set, in any environment', () => {
+    for (const NODE_ENV of ['development', 'production', 'test']) {
+      expect(parseConfig({ NODE_ENV }).mail.mode).toBe('log');
+      expect(parseConfig({ NODE_ENV, MAIL_FAKE: '1' }).mail.mode).toBe('fake');
+      expect(parseConfig({ NODE_ENV, SMTP_URL: 'smtp://mail.example.org:587' }).mail.mode).toBe(
+        'smtp',
+      );
+    }
+    expect(parseConfig({ MAIL_FAKE: '0', SMTP_URL: 'smtp://mail.example.org:587' }).mail.mode).toBe(
+      'smtp',
+    );
   });
 });
 

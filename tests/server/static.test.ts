@@ -71,10 +71,10 @@ describe('production: one process serves the client and the API', () => {
     expect(ApiErrorBody.parse(res.body).error.code).toBe('not_found');
   });
 
-  it('shows the dev inbox of the fake mail only to this machine', async () => {
-    // supertest connects over loopback, so this is the local case.
-    const res = await request(app).get('/api/dev/mail').expect(200);
-    expect(res.body).toEqual({ messages: [] });
+  it('has no dev inbox without MAIL_FAKE=1, even for this machine', async () => {
+    // supertest connects over loopback, the case the old inbox trusted.
+    const res = await request(app).get('/api/dev/mail').expect(404);
+    expect(ApiErrorBody.parse(res.body).error.code).toBe('not_found');
   });
 
   it('answers the health check', async () => {

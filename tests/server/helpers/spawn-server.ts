@@ -24,7 +24,14 @@ function freePort(): Promise<number> {
 export async function spawnServer(env: Record<string, string>): Promise<SpawnedServer> {
   const port = await freePort();
   const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'server/index.ts'], {
-    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', ...env },
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      MAIL_FAKE: '1',
+      ...env,
+    },
     stdio: ['ignore', 'ignore', 'pipe'],
   });
   let stderr = '';

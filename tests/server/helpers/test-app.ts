@@ -33,6 +33,7 @@ export async function startTestApp(
     PORT: '0',
     PUBLIC_URL: 'http://hoverprint.test',
     AUTH_RATE_LIMIT: '1000',
+    MAIL_FAKE: '1',
     ...options.env,
   });
   const { dataSource } = await openDatabase(config);
