@@ -2,7 +2,7 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import pluginQuery from '@tanstack/eslint-plugin-query';
-import importX from 'eslint-plugin-import-x';
+import importX, { createNodeResolver } from 'eslint-plugin-import-x';
 import globals from 'globals';
 
 export default tseslint.config(
@@ -16,6 +16,13 @@ export default tseslint.config(
     files: ['**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser, ...globals.node } },
     plugins: { 'react-hooks': reactHooks, 'import-x': importX },
+    // Without a resolver that knows .ts, import-x cannot resolve our extensionless imports and the
+    // zones below would pass every import unchecked.
+    settings: {
+      'import-x/resolver-next': [
+        createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json', '.node'] }),
+      ],
+    },
     rules: {
       ...reactHooks.configs.recommended.rules,
       '@typescript-eslint/no-unused-vars': [
@@ -24,7 +31,8 @@ export default tseslint.config(
       ],
       '@typescript-eslint/no-explicit-any': 'error',
       // One direction for imports: shared depends on nothing of ours; src, server and workers
-      // may use shared; src takes only types from workers and nothing from server.
+      // may use shared; src takes only types from workers and nothing from server. src/cli runs
+      // the shared code in Node: it may import shared/ and Node only.
       'import-x/no-restricted-paths': [
         'error',
         {
@@ -39,6 +47,12 @@ export default tseslint.config(
               from: './server',
               message: 'The client talks to the server over HTTP only.',
             },
+            {
+              target: './src/cli',
+              from: ['./src', './workers'],
+              except: ['./cli'],
+              message: 'src/cli may import only shared/ and Node.',
+            },
             { target: './server', from: ['./src', './workers'] },
             { target: './workers', from: ['./src', './server'] },
           ],
@@ -48,6 +62,7 @@ export default tseslint.config(
   },
   {
     files: ['src/**/*.{ts,tsx}'],
+    ignores: ['src/cli/**'],
     rules: {
       'no-restricted-imports': [
         'error',
@@ -57,6 +72,10 @@ export default tseslint.config(
               group: ['**/workers/*'],
               allowTypeImports: true,
               message: 'Import only types from workers; create workers through src/lib.',
+            },
+            {
+              group: ['**/cli/*'],
+              message: 'src/cli holds the Node command-line tools; the client never imports them.',
             },
           ],
         },

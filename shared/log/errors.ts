@@ -18,6 +18,8 @@ export type LogErrorCode =
   | 'ragged-row'
   | 'line-too-long'
   | 'missing-time'
+  | 'too-few-samples'
+  | 'time-stalled'
   | 'bad-gzip'
   | 'gzip-needs-stream';
 

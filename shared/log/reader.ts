@@ -649,6 +649,7 @@ export class LogReader {
     const columns: Record<string, Column> = {};
     const sourceUnits: Record<string, string> = {};
     const emptyCells: Record<string, number> = {};
+    const sourceColumns: Record<string, { column: number; header: string }> = {};
     this.plans.forEach((plan, i) => {
       const sink = this.sinks[i];
       if (plan.channel === null || !sink) return;
@@ -665,6 +666,7 @@ export class LogReader {
       channels.push(plan.channel);
       columns[plan.channel] = col;
       sourceUnits[plan.channel] = plan.unit ?? '';
+      sourceColumns[plan.channel] = { column: i + 1, header: plan.header };
       const empty = this.emptyCounts[i]!;
       if (empty > 0) {
         emptyCells[plan.channel] = empty;
@@ -720,6 +722,8 @@ export class LogReader {
       emptyCells,
       timeBase: tb.timeBase,
       headerLine: pre.headerLine,
+      sourceColumns,
+      sampleLines: { first: this.lineOfRow(0), last: this.lineOfRow(rows - 1) },
       delimiter: pre.delimiter as Delimiter,
     };
   }

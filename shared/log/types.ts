@@ -61,6 +61,10 @@ export interface ParsedLog {
   timeBase?: TimeBase;
   /** 1-based line of the header row. */
   headerLine?: number;
+  /** Where each channel was read from: 1-based column and its header as written. */
+  sourceColumns?: Record<string, { column: number; header: string }>;
+  /** 1-based file lines of the first and last samples. */
+  sampleLines?: { first: number; last: number };
   /** Field delimiter detected from the header. */
   delimiter?: ',' | ';' | '\t';
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseSynthArgs, SynthUsageError } from '../../../shared/sim/synth-args';
+import { UsageError } from '../../../src/cli/exit-codes';
+import { parseSynthArgs } from '../../../src/cli/synth-args';
 
 describe('parseSynthArgs', () => {
   it('reads a full command line', () => {
@@ -55,7 +56,7 @@ describe('parseSynthArgs', () => {
     [['--scenario', 'a', '--scenario', 'b'], /given twice/],
     [['--scenario', 'toString'], /unknown scenario/],
   ])('rejects %j with a clear message', (argv, message) => {
-    expect(() => parseSynthArgs(argv)).toThrow(SynthUsageError);
+    expect(() => parseSynthArgs(argv)).toThrow(UsageError);
     expect(() => parseSynthArgs(argv)).toThrow(message);
   });
 });

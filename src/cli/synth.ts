@@ -1,8 +1,9 @@
 /**
  * `npm run synth -- --scenario <name> [--seconds N] [--rate HZ] [--seed S] [--out file.csv]
  * [--gzip]` writes a synthetic flight log and its ground truth; `--list` names the scenarios.
- * Exit 0 on success, 2 on a usage mistake, 1 on anything else. Files are written to a temporary
- * name and renamed, so a failure never leaves half a log behind.
+ * Exit codes as `npm run analyze` (./exit-codes.ts): 0 done, 1 a usage mistake or an internal
+ * failure, 2 an output folder that does not exist. Files are written to a temporary name and
+ * renamed, so a failure never leaves half a log behind.
  */
 import {
   createWriteStream,
@@ -19,7 +20,8 @@ import { createGzip } from 'node:zlib';
 import { writeCanonicalCsvBytes } from '../../shared/sim/csv-writer';
 import { scenarios } from '../../shared/sim/scenarios';
 import { simulate } from '../../shared/sim/simulate';
-import { parseSynthArgs, SYNTH_USAGE, SynthUsageError } from '../../shared/sim/synth-args';
+import { EXIT, UsageError } from './exit-codes';
+import { parseSynthArgs, SYNTH_USAGE } from './synth-args';
 
 function truthPathFor(csvPath: string): string {
   const name = basename(csvPath)
@@ -33,21 +35,21 @@ async function main(argv: string[]): Promise<number> {
   try {
     command = parseSynthArgs(argv);
   } catch (err) {
-    if (err instanceof SynthUsageError) {
+    if (err instanceof UsageError) {
       console.error(`synth: ${err.message}\n\n${SYNTH_USAGE}`);
-      return 2;
+      return EXIT.usage;
     }
     throw err;
   }
   if (command.kind === 'help') {
     console.log(SYNTH_USAGE);
-    return 0;
+    return EXIT.ok;
   }
   if (command.kind === 'list') {
     const width = Math.max(...Object.keys(scenarios).map((k) => k.length));
     for (const [name, s] of Object.entries(scenarios))
       console.log(`${name.padEnd(width)}  ${s.describe}`);
-    return 0;
+    return EXIT.ok;
   }
 
   const base = process.env.INIT_CWD ?? process.cwd();
@@ -58,7 +60,7 @@ async function main(argv: string[]): Promise<number> {
   const folder = dirname(csvPath);
   if (!existsSync(folder) || !statSync(folder).isDirectory()) {
     console.error(`synth: the output folder ${folder} does not exist`);
-    return 2;
+    return EXIT.refused;
   }
   const scenario = scenarios[command.scenario]!;
   const started = performance.now();
@@ -88,13 +90,13 @@ async function main(argv: string[]): Promise<number> {
     `${command.scenario}: ${log.rows} rows, ${log.durationS.toFixed(1)} s at ${log.sampleRateHz} Hz, seed ${command.seed}` +
       ` → ${csvPath} (+ ${basename(truthPath)}) in ${totalS.toFixed(2)} s (physics ${(simMs / 1000).toFixed(2)} s)`,
   );
-  return 0;
+  return EXIT.ok;
 }
 
 main(process.argv.slice(2)).then(
   (code) => process.exit(code),
   (err: unknown) => {
     console.error(`synth: ${err instanceof Error ? err.message : String(err)}`);
-    process.exit(1);
+    process.exit(EXIT.internal);
   },
 );

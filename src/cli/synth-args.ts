@@ -1,9 +1,5 @@
-import { scenarios } from './scenarios';
-
-/** A command-line mistake: the CLI prints the message and exits 2. */
-export class SynthUsageError extends Error {
-  override name = 'SynthUsageError';
-}
+import { scenarios } from '../../shared/sim/scenarios';
+import { UsageError } from './exit-codes';
 
 export type SynthCommand =
   | { kind: 'help' }
@@ -41,14 +37,14 @@ function number(flag: string, raw: string, min: number, max: number, integer: bo
     v < min ||
     v > max
   ) {
-    throw new SynthUsageError(
+    throw new UsageError(
       `${flag} needs ${integer ? 'an integer' : 'a number'} from ${min} to ${max}, got "${raw}"`,
     );
   }
   return v;
 }
 
-/** Parses `npm run synth` arguments (after `--`); throws SynthUsageError on anything unknown. */
+/** Parses `npm run synth` arguments (after `--`); throws UsageError on anything unknown. */
 export function parseSynthArgs(argv: readonly string[]): SynthCommand {
   const values = new Map<string, string>();
   const flags = new Set<string>();
@@ -63,24 +59,24 @@ export function parseSynthArgs(argv: readonly string[]): SynthCommand {
     if (VALUE_FLAGS.has(arg)) {
       const v = inline ?? argv[++i];
       if (v === undefined || (inline === undefined && v.startsWith('--'))) {
-        throw new SynthUsageError(`${arg} needs a value`);
+        throw new UsageError(`${arg} needs a value`);
       }
-      if (values.has(arg)) throw new SynthUsageError(`${arg} given twice`);
+      if (values.has(arg)) throw new UsageError(`${arg} given twice`);
       values.set(arg, v);
     } else if (BOOL_FLAGS.has(arg) && inline === undefined) {
       flags.add(arg);
     } else if (arg.startsWith('-')) {
-      throw new SynthUsageError(`unknown option ${arg}`);
+      throw new UsageError(`unknown option ${arg}`);
     } else {
-      throw new SynthUsageError(`unexpected argument "${arg}" (did you mean --scenario ${arg}?)`);
+      throw new UsageError(`unexpected argument "${arg}" (did you mean --scenario ${arg}?)`);
     }
   }
   if (flags.has('--help') || flags.has('-h')) return { kind: 'help' };
   if (flags.has('--list')) return { kind: 'list' };
   const scenario = values.get('--scenario');
-  if (scenario === undefined) throw new SynthUsageError('--scenario is required (see --list)');
+  if (scenario === undefined) throw new UsageError('--scenario is required (see --list)');
   if (!Object.hasOwn(scenarios, scenario)) {
-    throw new SynthUsageError(
+    throw new UsageError(
       `unknown scenario "${scenario}"; known: ${Object.keys(scenarios).join(', ')}`,
     );
   }
@@ -94,7 +90,7 @@ export function parseSynthArgs(argv: readonly string[]): SynthCommand {
     ? number('--seed', values.get('--seed')!, 0, 2 ** 31 - 2, true)
     : 1;
   const out = values.get('--out') ?? null;
-  if (out !== null && out.trim() === '') throw new SynthUsageError('--out needs a file name');
+  if (out !== null && out.trim() === '') throw new UsageError('--out needs a file name');
   return {
     kind: 'run',
     scenario,

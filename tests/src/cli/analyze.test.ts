@@ -10,7 +10,7 @@ import { scenarios } from '../../../shared/sim/scenarios';
 import { simulate } from '../../../shared/sim/simulate';
 
 const root = resolve(__dirname, '../../..');
-const cli = join(root, 'server/cli/analyze.ts');
+const cli = join(root, 'src/cli/analyze.ts');
 const tsx = join(root, 'node_modules/.bin/tsx');
 let dir: string;
 
@@ -162,16 +162,76 @@ describe('npm run analyze', () => {
     expect(r.stderr).toMatch(/broken\.json: line 4, column \d+/);
   });
 
-  it('exits 1 when the airframe does not match the log (6 motors vs 4 columns)', () => {
+  it('exits 2 (input refused) when the airframe does not match the log (6 motors vs 4 columns)', () => {
     const r = analyze(['kite.csv', '--airframe', 'osprey.json'], dir);
-    expect(r.code).toBe(1);
+    expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/4 motor columns.*6 motors/);
   });
 
-  it('exits 1 for a missing file or an unknown option', () => {
-    expect(analyze(['nowhere.csv'], dir).code).toBe(1);
+  it('exits 2 for a log or airframe file that does not exist', () => {
+    const log = analyze(['nowhere.csv'], dir);
+    expect(log.code).toBe(2);
+    expect(log.stderr).toMatch(/Cannot open the log nowhere\.csv/);
+    const frame = analyze(['kite.csv', '--airframe', 'nowhere.json'], dir);
+    expect(frame.code).toBe(2);
+    expect(frame.stderr).toMatch(/Cannot open the airframe file nowhere\.json/);
+  });
+
+  it('exits 2 naming the line of a log with one data row', () => {
+    writeFileSync(
+      join(dir, 'one.csv'),
+      '# craft: Kite\ntime,motor1,motor2,motor3,motor4\n0,0.5,0.5,0.5,0.5\n',
+    );
+    const r = analyze(['one.csv'], dir);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/one\.csv: Line 3: the log holds one sample/);
+    expect(r.stdout).toBe('');
+  });
+
+  it('exits 2 naming the line and column of a time that never advances', () => {
+    const rows = ['motor1,motor2,motor3,motor4,stamp'];
+    for (let i = 0; i < 50; i++) rows.push('0.5,0.5,0.5,0.5,12.5');
+    writeFileSync(join(dir, 'stalled.csv'), rows.join('\n') + '\n');
+    writeFileSync(
+      join(dir, 'stalled-map.json'),
+      JSON.stringify({
+        columns: {
+          stamp: { channel: 'time', unit: 's' },
+          motor1: { channel: 'motor1' },
+          motor2: { channel: 'motor2' },
+          motor3: { channel: 'motor3' },
+          motor4: { channel: 'motor4' },
+        },
+      }),
+    );
+    const r = analyze(['stalled.csv', '--map', 'stalled-map.json'], dir);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(
+      /Line 2, column 5 \(stamp\): time reads 12\.5 s on every sample from line 2 to line 51/,
+    );
+  });
+
+  it('exits 2 when time runs backwards through most of the log', () => {
+    const rows = ['time,motor1,motor2,motor3,motor4'];
+    for (let i = 0; i < 50; i++) rows.push(`${(50 - i) * 0.01},0.5,0.5,0.5,0.5`);
+    writeFileSync(join(dir, 'backwards.csv'), rows.join('\n') + '\n');
+    const r = analyze(['backwards.csv'], dir);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/column 1 \(time\): time does not move forward/);
+  });
+
+  it('exits 1 with the usage for a mistake in the command line', () => {
     const r = analyze(['kite.csv', '--fast'], dir);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/Unknown option --fast/);
+    expect(r.stderr).toMatch(/Exit codes: 0 done, 1 a mistake in the command line/);
+    expect(analyze(['kite.csv', '--airframe'], dir).code).toBe(1);
+  });
+
+  it('exits 1 without a log file and 0 for --help', () => {
+    expect(analyze([], dir).code).toBe(1);
+    const help = analyze(['--help'], dir);
+    expect(help.code).toBe(0);
+    expect(help.stderr).toMatch(/^Usage: npm run analyze/);
   });
 });
