@@ -1,7 +1,7 @@
 import type { ParsedLog } from './types';
 
 /**
- * The channel registry: our canonical channel names (PRODUCT.md §5), the units each accepts
+ * The channel registry: our canonical channel names (shared/log/FORMAT.md), the units each accepts
  * and how a value in that unit becomes the canonical unit.
  */
 

@@ -1,6 +1,6 @@
 /**
  * The full analysis of the 300 s, 4 kHz, 4-motor flight beside the time to parse the same file,
- * in the same run (PRODUCT.md §10: analysis ≤ parse time, one thread). Each is timed twice and
+ * in the same run (tests/bench/README.md §1.2: analysis ≤ parse time, one thread). Each is timed twice and
  * the faster run kept, so both get the same warm-up. CPU time is reported beside wall time
  * because the machine is shared: the CPU ratio is the steadier of the two.
  */

@@ -1,8 +1,9 @@
 /**
- * API load: comment writes per second and a paginated flight list over 10 k stored flights,
- * against the real server process on loopback with a fresh SQLite file. Reference in the same
- * run: `GET /api/health` (one trivial query), so the ratios say how much of the machine's
- * request budget a write or a list page costs. Bounded in count and time.
+ * API load (targets: tests/bench/README.md §1.4): comment writes per second and a paginated
+ * flight list over 10 k stored flights, against the real server process on loopback with a
+ * fresh SQLite file. Reference in the same run: `GET /api/health` (one trivial query), so the
+ * ratios say how much of the machine's request budget a write or a list page costs. Bounded in
+ * count and time.
  *
  * Throughput is measured closed-loop with autocannon (10 connections, as fast as the server
  * answers), timed to 50 ms (autocannon only stops on a sample tick, 1 s by default).

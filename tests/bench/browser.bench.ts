@@ -2,7 +2,7 @@
  * Browser benchmark: a pilot drops a ~100 MB synthesised log on the import page of the built
  * client, served by the real server, in headless Chromium. Measured: time from the drop to the
  * verdict on screen, and the longest main-thread task meanwhile (PerformanceObserver
- * 'longtask', which reports tasks over 50 ms). Targets (PRODUCT.md §10): ≤ 3 s to the verdict,
+ * 'longtask', which reports tasks over 50 ms). Targets (tests/bench/README.md §1.3): ≤ 3 s to the verdict,
  * no task over 100 ms. Reference in the same run: the time the same page takes to read the
  * file's bytes once in a worker (`Blob.arrayBuffer`), the floor any import of it has to pay.
  *

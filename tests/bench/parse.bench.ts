@@ -1,7 +1,7 @@
 /**
  * Parse benchmark: our engine against papaparse (dynamic typing) on the same ~150 MB canonical
  * CSV in the same run. Each parser runs in its own child process so peak memory is its own.
- * Targets (PRODUCT.md §10): ≥ 250 MB/s, ≥ 10× papaparse, peak RSS ≤ 2.5× the file size.
+ * Targets (tests/bench/README.md §1.1): ≥ 250 MB/s, ≥ 10× papaparse, peak RSS ≤ 2.5× the file size.
  */
 import { execFileSync } from 'node:child_process';
 import { join } from 'node:path';
