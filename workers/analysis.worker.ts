@@ -5,8 +5,8 @@ import {
   type FlightAnalysis,
 } from '../shared/analysis/analyze-flight';
 import { benchFilters, type FilterBenchResult } from '../shared/analysis/filters/filter-bench';
-import type { FilterSpec } from '../shared/analysis/filters/filter-spec';
-import type { FlightReport } from '../shared/analysis/report-schema';
+import type { FilterSpec } from '../shared/schemas/filters';
+import type { FlightReport } from '../shared/schemas/report';
 import {
   stripTrace,
   type DetailHead,
@@ -15,7 +15,7 @@ import {
   type Trace,
 } from '../shared/analysis/review-detail';
 import { findSegments } from '../shared/analysis/segments';
-import { resolveThresholds } from '../shared/analysis/thresholds';
+import { resolveThresholds } from '../shared/schemas/thresholds';
 import type { ParsedLog } from '../shared/log/types';
 import type { LogDelivery } from './parse.worker';
 

@@ -1,15 +1,13 @@
-import type { FlightReport, Severity } from '../../shared/analysis/report-schema';
+import { SEVERITIES, type FlightReport, type Severity } from '../../shared/schemas/report';
 import type { TrendPoint } from '../../shared/schemas/aircraft';
-
-const severities: Severity[] = ['note', 'watch', 'act'];
 
 /** Stored as 0 none, 1 note, 2 watch, 3 act so lists can filter "at least watch". */
 export function severityRank(s: Severity): number {
-  return severities.indexOf(s) + 1;
+  return SEVERITIES.indexOf(s) + 1;
 }
 
 export function severityName(rank: number): Severity | null {
-  return severities[rank - 1] ?? null;
+  return SEVERITIES[rank - 1] ?? null;
 }
 
 export function findingStats(report: FlightReport) {

@@ -13,7 +13,7 @@ import {
   type RawUploadResponse,
   type ReviewState,
 } from '../../shared/schemas/flights';
-import { FlightReport } from '../../shared/analysis/report-schema';
+import { FlightReport } from '../../shared/schemas/report';
 import type { ReviewDetail } from '../../shared/analysis/review-detail';
 import { User } from '../auth/user.entity';
 import type { Config } from '../config';

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { resolveThresholds, type Thresholds } from '../../shared/analysis/thresholds';
+import { resolveThresholds, type Thresholds } from '../../shared/schemas/thresholds';
 import type { TeamThresholds } from '../../shared/schemas/thresholds';
 import { isoOrNull } from '../util';
 import { Team } from './team.entity';

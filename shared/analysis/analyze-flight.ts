@@ -8,10 +8,10 @@ import { decomposeEffort } from './effort';
 import { buildFindings } from './findings';
 import { analyseHeadroom } from './headroom';
 import { analysePower } from './power';
-import { FlightReport, REPORT_VERSION } from './report-schema';
+import { FlightReport, REPORT_VERSION } from '../schemas/report';
 import type { ReviewDetail, Trace } from './review-detail';
 import { findSegments, motorColumns, type Ranges } from './segments';
-import { resolveThresholds, type Thresholds } from './thresholds';
+import { resolveThresholds, type Thresholds } from '../schemas/thresholds';
 import { analyseTracking } from './tracking';
 import { analyseVibration, toReviewSpectrum } from './vibration';
 import { benchRunCurve, type BenchRunTable, type ThrustCurve } from './thrust-curve';
@@ -22,7 +22,7 @@ export interface AnalyzeOptions {
   thresholds?: Partial<Thresholds>;
   /**
    * A bench run of this motor and prop (throttle 0–1 → thrust in grams, the `BenchRow` shape):
-   * the thrust proxy for balance, torque split and CG when rpm is not logged (PRODUCT.md §4).
+   * the thrust proxy for balance, torque split and CG when rpm is not logged (shared/README.md, physics conventions).
    */
   benchRun?: BenchRunTable;
 }
@@ -69,7 +69,7 @@ function longestMid(time: ArrayLike<number>, ranges: Ranges): number | null {
 }
 
 /**
- * The whole analysis of one flight: the report (PRODUCT.md §7 JSON) and what the review charts
+ * The whole analysis of one flight: the report (the report JSON of shared/README.md, report JSON and CLI contract) and what the review charts
  * draw. Pure and synchronous; the same call runs in the worker, the server and the CLI.
  */
 export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): FlightAnalysis {

@@ -1,7 +1,7 @@
 import type { Airframe } from '../schemas/airframe';
 import type { ReviewDetail } from './review-detail';
 import { fitPatterns, type BalanceResult } from './balance';
-import type { Thresholds } from './thresholds';
+import type { Thresholds } from '../schemas/thresholds';
 
 export type Diagnosis = ReviewDetail['diagnosis'];
 

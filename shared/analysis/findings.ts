@@ -1,11 +1,11 @@
 import type { Airframe } from '../schemas/airframe';
 import type { LogWarning } from '../log/types';
-import type { Finding, Severity } from './report-schema';
+import { mostSevereFirst, type Finding, type Severity } from '../schemas/report';
 import type { BalanceResult } from './balance';
 import type { Diagnosis } from './diagnosis';
 import type { HeadroomResult } from './headroom';
 import type { PowerResult } from './power';
-import type { Thresholds } from './thresholds';
+import type { Thresholds } from '../schemas/thresholds';
 import type { TrackingResult } from './tracking';
 import type { VibrationResult } from './vibration';
 
@@ -28,7 +28,6 @@ export interface FindingInput {
   th: Thresholds;
 }
 
-const rank: Record<Severity, number> = { act: 0, watch: 1, note: 2 };
 const pct = (v: number) => `${Math.round(Math.abs(v))} %`;
 const mm = (v: number) => `${Math.round(Math.abs(v))} mm`;
 const list = (ms: number[]) =>
@@ -299,5 +298,5 @@ export function buildFindings(f: FindingInput): Finding[] {
       message: `${w.message} Analysis treats the gap as missing data; check the logging rate and the SD card or flash speed.`,
     });
   }
-  return out.sort((a, b) => rank[a.severity] - rank[b.severity]);
+  return out.sort(mostSevereFirst);
 }

@@ -1,5 +1,5 @@
 import type { ParsedLog } from '../log/types';
-import type { Thresholds } from './thresholds';
+import type { Thresholds } from '../schemas/thresholds';
 
 /** Sample-index ranges [start, end), end exclusive, sorted and disjoint. */
 export type Ranges = [number, number][];

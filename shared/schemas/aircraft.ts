@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { Airframe } from './airframe';
 import { Id, IsoDate, IsoDateTime, UserRef } from './common';
+import { Severity } from './report';
 
 const Text = (max: number) => z.string().trim().max(max);
 
@@ -55,7 +56,7 @@ export const Aircraft = z.object({
     .object({
       id: Id,
       recordedAt: IsoDateTime,
-      worstSeverity: z.enum(['note', 'watch', 'act']).nullable(),
+      worstSeverity: Severity.nullable(),
       findingCount: z.number().int(),
     })
     .nullable(),
@@ -158,7 +159,7 @@ export const TrendPoint = z.object({
   minCellV: z.number().nullable(),
   internalResistanceOhm: z.number().nullable(),
   saturationS: z.number(),
-  worstSeverity: z.enum(['note', 'watch', 'act']).nullable(),
+  worstSeverity: Severity.nullable(),
 });
 export type TrendPoint = z.infer<typeof TrendPoint>;
 /** Oldest first, so charts draw left to right. */

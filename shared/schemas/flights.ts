@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { FlightReport, Severity } from '../analysis/report-schema';
+import { FlightReport, Severity } from './report';
 import type { ReviewDetail } from '../analysis/review-detail';
 import { Id, IsoDateTime, UserRef } from './common';
 

@@ -1,6 +1,6 @@
 import type { ParsedLog } from '../log/types';
 
-/** Canonical unit and printed decimals per channel family (PRODUCT.md §5 defaults). */
+/** Canonical unit and printed decimals per channel family (shared/log/FORMAT.md defaults). */
 const FORMATS: [RegExp, string, number][] = [
   [/^time$/, 's', 6],
   [/^motor\d+$/, 'frac', 4],
@@ -153,7 +153,7 @@ export function* writeCanonicalCsvBytes(
 }
 
 /**
- * The log as canonical CSV text in chunks (PRODUCT.md §5: `# key: value` metadata, then
+ * The log as canonical CSV text in chunks (shared/log/FORMAT.md: `# key: value` metadata, then
  * `channel [unit]` headers, then rows), so a 150 MB file never has to exist as one string.
  * Lines end in '\n'.
  */

@@ -1,5 +1,5 @@
 import Dexie, { type EntityTable } from 'dexie';
-import type { FlightReport } from '../../shared/analysis/report-schema';
+import type { FlightReport } from '../../shared/schemas/report';
 import type { ReviewDetail } from '../../shared/analysis/review-detail';
 import type { ColumnMap } from '../../shared/log/column-map';
 

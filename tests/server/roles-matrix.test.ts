@@ -3,7 +3,7 @@ import request from 'supertest';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiErrorBody } from '../../shared/api/error';
-import { defaultThresholds } from '../../shared/analysis/thresholds';
+import { defaultThresholds } from '../../shared/schemas/thresholds';
 import type { Role } from '../../shared/schemas/common';
 import { User } from '../../server/auth/user.entity';
 import { Membership } from '../../server/teams/membership.entity';

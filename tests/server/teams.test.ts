@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiErrorBody } from '../../shared/api/error';
-import { defaultThresholds } from '../../shared/analysis/thresholds';
+import { defaultThresholds } from '../../shared/schemas/thresholds';
 import { Aircraft, BenchRunList, ServiceLog } from '../../shared/schemas/aircraft';
 import { Invite, InviteList, MemberList, Team, TeamList } from '../../shared/schemas/teams';
 import { TeamThresholds } from '../../shared/schemas/thresholds';

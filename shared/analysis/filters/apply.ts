@@ -1,5 +1,5 @@
 import { stageCoefficients } from './biquad';
-import type { FilterSpec } from './filter-spec';
+import type { FilterSpec } from '../../schemas/filters';
 
 /**
  * Runs the cascade over a column (direct form II transposed, state starting at rest), as a

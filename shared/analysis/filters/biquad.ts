@@ -1,4 +1,4 @@
-import { DEFAULT_LOWPASS_Q, DEFAULT_NOTCH_Q, type FilterStage } from './filter-spec';
+import { DEFAULT_LOWPASS_Q, DEFAULT_NOTCH_Q, type FilterStage } from '../../schemas/filters';
 
 /** Normalised (a0 = 1) second-order section: y = b0·x + b1·x₁ + b2·x₂ − a1·y₁ − a2·y₂. */
 export interface Biquad {

@@ -3,7 +3,7 @@ import type { Spectrum } from '../review-detail';
 import { chooseSegment, welch } from '../dsp/welch';
 import { toReviewSpectrum } from '../vibration';
 import { applyFilters } from './apply';
-import { FilterSpec } from './filter-spec';
+import { FilterSpec } from '../../schemas/filters';
 import { filterResponse, responseGrid, type FilterResponse } from './response';
 import type { Ranges } from '../segments';
 

@@ -1,5 +1,5 @@
 import { stageCoefficients, type Biquad } from './biquad';
-import type { FilterSpec } from './filter-spec';
+import type { FilterSpec } from '../../schemas/filters';
 
 export interface FilterResponse {
   hz: number[];

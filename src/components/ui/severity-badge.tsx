@@ -1,4 +1,4 @@
-import type { Severity } from '../../../shared/analysis/report-schema';
+import type { Severity } from '../../../shared/schemas/report';
 
 const styles: Record<Severity, string> = {
   note: 'border-sev-note/40 text-sev-note',

@@ -1,5 +1,5 @@
 import { randomUUID, createHash } from 'node:crypto';
-import type { FlightReport } from '../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../shared/schemas/report';
 import type { AircraftInput } from '../../../shared/schemas/aircraft';
 import type { FlightPutInput } from '../../../shared/schemas/flights';
 

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeFlight, AnalysisInputError } from '../../../shared/analysis/analyze-flight';
-import { FlightReport } from '../../../shared/analysis/report-schema';
+import { FlightReport } from '../../../shared/schemas/report';
 import {
   defaultThresholds,
   resolveThresholds,
   Thresholds,
-} from '../../../shared/analysis/thresholds';
+} from '../../../shared/schemas/thresholds';
 import { scenarios } from '../../../shared/sim/scenarios';
 import { simulate } from '../../../shared/sim/simulate';
 import type { ParsedLog } from '../../../shared/log/types';
@@ -90,7 +90,7 @@ describe('thresholds', () => {
     expect(resolveThresholds({ cellActV: 3.2 }).cellActV).toBe(3.2);
   });
 
-  it('keeps the LiPo cell limits at 3.5 V watch and 3.3 V act (common practice, REFERENCES §12)', () => {
+  it('keeps the LiPo cell limits at 3.5 V watch and 3.3 V act (common practice, tests/REFERENCES.md, LiPo cell voltages)', () => {
     expect(defaultThresholds.cellWatchV).toBe(3.5);
     expect(defaultThresholds.cellActV).toBe(3.3);
   });

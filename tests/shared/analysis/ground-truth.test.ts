@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeFlight, type FlightAnalysis } from '../../../shared/analysis/analyze-flight';
-import { FlightReport } from '../../../shared/analysis/report-schema';
+import { FlightReport } from '../../../shared/schemas/report';
 import { scenarios } from '../../../shared/sim/scenarios';
 import { simulate } from '../../../shared/sim/simulate';
 import type { GroundTruth } from '../../../shared/sim/types';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { findSegments, rangeLength } from '../../../shared/analysis/segments';
-import { defaultThresholds } from '../../../shared/analysis/thresholds';
+import { defaultThresholds } from '../../../shared/schemas/thresholds';
 import { downsampleMinMax } from '../../../shared/analysis/downsample';
 import type { ParsedLog } from '../../../shared/log/types';
 
@@ -52,9 +52,9 @@ describe('segments', () => {
   const seg = findSegments(log, defaultThresholds);
   const sec = (r: [number, number][]) => rangeLength(r) / fs;
 
-  // The definition under test is the design's (PRODUCT.md §6: hover = steady body rates and
+  // The definition under test is the design's (shared/README.md, analyses: hover = steady body rates and
   // collective for at least 1 s); the rate and collective limits behind it are common practice,
-  // each explained where it is defined (shared/analysis/thresholds.ts).
+  // each explained where it is defined (shared/schemas/thresholds.ts).
   it('finds the two hovers and not the short calm moment between flips', () => {
     expect(seg.hover.length).toBe(2);
     expect(seg.hover[0]![0] / fs).toBeCloseTo(3, 0);

@@ -57,7 +57,7 @@ describe('bench-run thrust curve', () => {
     ).toThrow(/reading 2: thrust falls/);
   });
 
-  it('the power law is output^γ (PRODUCT.md §4) and its inverse', () => {
+  it('the power law is output^γ (shared/README.md, physics conventions) and its inverse', () => {
     const p = powerLawCurve(2);
     expect(p.thrust(0.5)).toBe(0.25);
     expect(p.output(0.25)).toBeCloseTo(0.5, 12);
@@ -65,8 +65,8 @@ describe('bench-run thrust curve', () => {
 });
 
 describe('analyzeFlight with a bench run and no rpm', () => {
-  // A quad X hovering steadily with its CG 12 mm forward: by moments about the CG (REFERENCES.md
-  // §5.3), the motors' thrusts are the minimum-norm hover solution about (12, 0).
+  // A quad X hovering steadily with its CG 12 mm forward: by moments about the CG (tests/REFERENCES.md,
+  // hover thrust balance), the motors' thrusts are the minimum-norm hover solution about (12, 0).
   const airframe = presetAirframe('quad-x', { name: 'Bench quad', armMm: 110, massG: 600 });
   const cg = { x: 12, y: 0 };
   const thrustN = hoverThrustsN(airframe, cg);

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeFlight } from '../../../shared/analysis/analyze-flight';
-import type { FlightReport } from '../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../shared/schemas/report';
 import { demoFlightLog } from '../../../shared/sim/demo/demo-flight-log';
 import { demoAircraft } from '../../../shared/sim/demo/fleet';
 import { demoFlights, type DemoFlight } from '../../../shared/sim/demo/flights';

@@ -3,7 +3,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { FlightReport } from '../../../shared/analysis/report-schema';
+import { FlightReport } from '../../../shared/schemas/report';
 import { presetAirframe } from '../../../shared/airframe/presets';
 import { writeCanonicalCsvBytes } from '../../../shared/sim/csv-writer';
 import { scenarios } from '../../../shared/sim/scenarios';

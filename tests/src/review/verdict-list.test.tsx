@@ -3,7 +3,7 @@ import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { MemoryRouter } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Finding } from '../../../shared/analysis/report-schema';
+import type { Finding } from '../../../shared/schemas/report';
 import { VerdictList } from '../../../src/features/review/components/verdict-list';
 
 afterEach(cleanup);

@@ -2,7 +2,7 @@
 import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { defaultThresholds } from '../../../shared/analysis/thresholds';
+import { defaultThresholds } from '../../../shared/schemas/thresholds';
 import { ThresholdsEditor } from '../../../src/features/team/components/thresholds-editor';
 import { jsonResponse, renderWithQuery } from '../helpers/render-with-query';
 

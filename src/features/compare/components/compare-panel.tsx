@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import type { FlightReport } from '../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import { XyChart } from '../../../components/charts/xy-chart';
 import { inkSeries, motorColor } from '../../../components/charts/palette';

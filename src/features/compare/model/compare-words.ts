@@ -1,4 +1,4 @@
-import type { FlightReport } from '../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../shared/schemas/report';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 
 const signedPct = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(Math.round(v))} %`;

@@ -1,5 +1,5 @@
 import { pathTo } from '../../../../shared/api/paths';
-import type { Severity } from '../../../../shared/analysis/report-schema';
+import type { Severity } from '../../../../shared/schemas/report';
 import { FlightPage, type ReviewState } from '../../../../shared/schemas/flights';
 import { apiFetch } from '../../../lib/api-fetch';
 

@@ -1,7 +1,7 @@
 import { proxy, transfer } from 'comlink';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { ColumnMap } from '../../../../shared/log/column-map';
-import type { Severity } from '../../../../shared/analysis/report-schema';
+import { severityRank, type Severity } from '../../../../shared/schemas/report';
 import {
   DETAIL_PARTS,
   type DetailParts,
@@ -39,8 +39,6 @@ export interface ParseProgress {
   bytes: number;
   rows: number;
 }
-
-const severityRank: Record<Severity, number> = { note: 0, watch: 1, act: 2 };
 
 /**
  * One file through the same path every import takes: read in the parse worker, analysed in the
@@ -154,7 +152,7 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   }
   let worst: Severity | null = null;
   for (const f of report.findings)
-    if (worst === null || severityRank[f.severity] > severityRank[worst]) worst = f.severity;
+    if (worst === null || severityRank(f.severity) > severityRank(worst)) worst = f.severity;
   return { kind: 'done', flightId, findings: report.findings.length, worst };
 }
 

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { FlightReport } from '../../../../shared/analysis/report-schema';
-import { FlightReport as FlightReportSchema } from '../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../shared/schemas/report';
+import { FlightReport as FlightReportSchema } from '../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import { Aircraft } from '../../../../shared/schemas/aircraft';
 import type { Airframe } from '../../../../shared/schemas/airframe';

@@ -1,5 +1,5 @@
 import { startTransition, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
-import type { Finding } from '../../../../shared/analysis/report-schema';
+import type { Finding } from '../../../../shared/schemas/report';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { TimePin } from '../../../components/charts/time-chart';
 import type { ReviewFlight } from '../api/flight-api';

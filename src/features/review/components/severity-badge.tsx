@@ -1,4 +1,4 @@
-import type { Severity } from '../../../../shared/analysis/report-schema';
+import type { Severity } from '../../../../shared/schemas/report';
 import { severityLabel } from '../model/sections';
 
 const tone: Record<Severity, string> = {

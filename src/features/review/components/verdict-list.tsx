@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import type { Finding } from '../../../../shared/analysis/report-schema';
+import type { Finding } from '../../../../shared/schemas/report';
 import { motorColor } from '../../../components/charts/palette';
 import { rankFindings, sectionForFinding, sections } from '../model/sections';
 import { SeverityBadge } from './severity-badge';

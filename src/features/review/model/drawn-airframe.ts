@@ -1,4 +1,4 @@
-import type { FlightReport } from '../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 

@@ -1,4 +1,9 @@
-import type { Finding, FindingCode, Severity } from '../../../../shared/analysis/report-schema';
+import {
+  mostSevereFirst,
+  type Finding,
+  type FindingCode,
+  type Severity,
+} from '../../../../shared/schemas/report';
 
 export type SectionId =
   | 'effort'
@@ -89,13 +94,11 @@ export function sectionForFinding(f: Pick<Finding, 'code'>): SectionId {
   return sectionOfCode[f.code];
 }
 
-const rank: Record<Severity, number> = { act: 0, watch: 1, note: 2 };
-
 /** Most severe first; within a severity the engine's own order (it ranks by size) is kept. */
 export function rankFindings(findings: readonly Finding[]): Finding[] {
   return findings
     .map((f, i) => ({ f, i }))
-    .sort((a, b) => rank[a.f.severity] - rank[b.f.severity] || a.i - b.i)
+    .sort((a, b) => mostSevereFirst(a.f, b.f) || a.i - b.i)
     .map((x) => x.f);
 }
 

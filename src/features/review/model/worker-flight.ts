@@ -1,5 +1,5 @@
 import { transfer } from 'comlink';
-import type { FilterSpec } from '../../../../shared/analysis/filters/filter-spec';
+import type { FilterSpec } from '../../../../shared/schemas/filters';
 import { mapCoveringHeaders } from '../../../../shared/log/column-map';
 import type { ReadOptions } from '../../../../shared/log/parse';
 import type { Airframe } from '../../../../shared/schemas/airframe';

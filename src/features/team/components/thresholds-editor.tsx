@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { defaultThresholds, Thresholds } from '../../../../shared/analysis/thresholds';
+import { defaultThresholds, Thresholds } from '../../../../shared/schemas/thresholds';
 import { Alert, ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';

@@ -7,8 +7,8 @@ import {
   DEFAULT_NOTCH_Q,
   FilterSpec,
   type FilterStage,
-} from '../../../../../shared/analysis/filters/filter-spec';
-import type { FlightReport } from '../../../../../shared/analysis/report-schema';
+} from '../../../../../shared/schemas/filters';
+import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { XyChart } from '../../../../components/charts/xy-chart';
 import { inkSeries } from '../../../../components/charts/palette';

@@ -1,6 +1,6 @@
 import { Caution } from '../../../../components/ui/caution';
 import { useMemo } from 'react';
-import type { FlightReport } from '../../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { TimeChart } from '../../../../components/charts/time-chart';

@@ -1,5 +1,5 @@
 import { Caution } from '../../../../components/ui/caution';
-import type { FlightReport } from '../../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
 import { TimeChart } from '../../../../components/charts/time-chart';
 import { inkSeries } from '../../../../components/charts/palette';

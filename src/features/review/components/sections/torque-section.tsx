@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import type { FlightReport } from '../../../../../shared/analysis/report-schema';
+import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { expectedHoverShares } from '../../../../../shared/airframe/allocation';

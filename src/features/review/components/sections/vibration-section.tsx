@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import type { FlightReport, PeakLabel } from '../../../../../shared/analysis/report-schema';
+import type { FlightReport, PeakLabel } from '../../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../../shared/analysis/review-detail';
 import { XyChart, type XySeries } from '../../../../components/charts/xy-chart';
 import { HeatmapChart } from '../../../../components/charts/heatmap-chart';

@@ -2,14 +2,26 @@ import { z } from 'zod';
 
 /**
  * The flight report: what `npm run analyze -- --json` prints, what the worker hands the review
- * and what the server stores as a flight's summary. Field meanings follow PRODUCT.md §7 of the
- * team handbook; extra sections (traces, spectra) live beside these and are optional so the
- * core stays small.
+ * and what the server stores as a flight's summary. Field meanings are set out in
+ * shared/README.md (report JSON and CLI contract); extra sections (traces, spectra) live beside
+ * these and are optional so the core stays small.
  */
 export const REPORT_VERSION = 1;
 
+/** Least to most severe: the one order every verdict, badge, filter and stored rank uses. */
 export const Severity = z.enum(['note', 'watch', 'act']);
 export type Severity = z.infer<typeof Severity>;
+export const SEVERITIES: readonly Severity[] = Severity.options;
+
+/** 0 for `note` up to 2 for `act`. */
+export function severityRank(s: Severity): number {
+  return SEVERITIES.indexOf(s);
+}
+
+/** Sort comparator: most severe first (stable sorts keep the engine's order within a severity). */
+export function mostSevereFirst(a: { severity: Severity }, b: { severity: Severity }): number {
+  return severityRank(b.severity) - severityRank(a.severity);
+}
 
 export const FindingCode = z.enum([
   'motor-working-hard',
