@@ -24,7 +24,7 @@ export function spinSign(spin: Motor['spin']): 1 | -1 {
 /**
  * Allocation matrix, 4 × n: rows are total thrust (N), roll L, pitch M and yaw N moments (N·m)
  * per newton of each motor's thrust, about the CG. Motor and CG positions in mm, yawK in m.
- * Signs per shared/README.md, physics conventions: L = −Σ(y_i−y_c)T_i, M = Σ(x_i−x_c)T_i, N = −Σ s_i k T_i, s = +1 cw.
+ * Signs per shared/README.md §4: L = −Σ(y_i−y_c)T_i, M = Σ(x_i−x_c)T_i, N = −Σ s_i k T_i, s = +1 cw.
  */
 export function allocationMatrix(
   motors: readonly Motor[],

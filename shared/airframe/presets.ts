@@ -42,7 +42,7 @@ function ring(count: number, armMm: number, firstDeg: number): Motor[] {
   return out;
 }
 
-/** Quad numbering of shared/README.md, physics conventions: 1 FR ccw, 2 RR cw, 3 RL ccw, 4 FL cw. */
+/** Quad numbering of shared/README.md §4: 1 FR ccw, 2 RR cw, 3 RL ccw, 4 FL cw. */
 function quad(front: number, rear: number, halfWidthFront: number, halfWidthRear: number): Motor[] {
   return [
     { x: front, y: halfWidthFront, spin: 'ccw' },

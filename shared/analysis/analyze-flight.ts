@@ -22,7 +22,7 @@ export interface AnalyzeOptions {
   thresholds?: Partial<Thresholds>;
   /**
    * A bench run of this motor and prop (throttle 0–1 → thrust in grams, the `BenchRow` shape):
-   * the thrust proxy for balance, torque split and CG when rpm is not logged (shared/README.md, physics conventions).
+   * the thrust proxy for balance, torque split and CG when rpm is not logged (shared/README.md §4).
    */
   benchRun?: BenchRunTable;
 }
@@ -69,7 +69,7 @@ function longestMid(time: ArrayLike<number>, ranges: Ranges): number | null {
 }
 
 /**
- * The whole analysis of one flight: the report (the report JSON of shared/README.md, report JSON and CLI contract) and what the review charts
+ * The whole analysis of one flight: the report (shared/README.md §7) and what the review charts
  * draw. Pure and synchronous; the same call runs in the worker, the server and the CLI.
  */
 export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): FlightAnalysis {

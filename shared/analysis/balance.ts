@@ -131,7 +131,7 @@ export interface BalanceResult {
 }
 
 /**
- * Balance, torque split and CG from hover means (definitions in shared/README.md, report JSON and CLI contract). Measured shares
+ * Balance, torque split and CG from hover means (definitions in shared/README.md §7). Measured shares
  * use rpm² when logged (propeller law), else the bench-run curve when one is attached, else
  * output^γ. Deviation compares each motor's mean output with the output that delivers its
  * expected share of the measured total through the same curve. With rpm logged the total is the
@@ -233,7 +233,7 @@ function explainedBy(d: number[], basis: number[][]): { r2: number; coef: number
 }
 
 /**
- * Which hover pattern explains the motors' output shares best (shared/README.md, analyses): a CG offset
+ * Which hover pattern explains the motors' output shares best (shared/README.md §6): a CG offset
  * loads a side through the mixer's roll and pitch columns with no yaw part; a weak motor loads
  * one motor (the mixer's projection of that motor alone, which carries a yaw part); a spin-set
  * mismatch or tilted motor loads one spin set (the yaw column). Returns every candidate with

@@ -25,7 +25,7 @@ export interface LabelContext {
   motorHz: number[];
   /** Each motor's rotation frequency per Welch segment, Hz, to match orders flown only part of the time. */
   motorSegHz?: readonly ArrayLike<number>[];
-  /** Log rate, Hz: orders above Nyquist fold back (tests/REFERENCES.md, peak labelling). */
+  /** Log rate, Hz: orders above Nyquist fold back (tests/REFERENCES.md §3). */
   fs: number;
   /** Magnet poles, for the motors' electrical frequency (pole pairs × rotation). */
   poles?: number;

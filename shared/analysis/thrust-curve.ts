@@ -14,7 +14,7 @@ export interface ThrustCurve {
   source: 'bench-run' | 'power-law';
 }
 
-/** shared/README.md, physics conventions: thrust ∝ output^γ (γ = 2 is the propeller law with rpm ∝ output). */
+/** shared/README.md §4: thrust ∝ output^γ (γ = 2 is the propeller law with rpm ∝ output). */
 export function powerLawCurve(gamma: number): ThrustCurve {
   if (!(gamma > 0) || !Number.isFinite(gamma))
     throw new RangeError(`thrust exponent must be a positive number, got ${gamma}`);

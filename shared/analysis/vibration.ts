@@ -18,7 +18,7 @@ export const VIBRATION_CHANNELS = [
 const GYRO = new Set(['gyro_x', 'gyro_y', 'gyro_z']);
 /** Lowest frequency searched for peaks, Hz: below this is the flying itself, not vibration. */
 const MIN_PEAK_HZ = 20;
-/** Band RMS starts here (shared/README.md, report JSON and CLI contract). */
+/** Band RMS starts here (shared/README.md §7). */
 const BAND_LO_HZ = 50;
 const CAMPBELL_ROWS = 20;
 

@@ -3,8 +3,8 @@ import { z } from 'zod';
 /**
  * The flight report: what `npm run analyze -- --json` prints, what the worker hands the review
  * and what the server stores as a flight's summary. Field meanings are set out in
- * shared/README.md (report JSON and CLI contract); extra sections (traces, spectra) live beside
- * these and are optional so the core stays small.
+ * shared/README.md §7; extra sections (traces, spectra) live beside these and are optional so
+ * the core stays small.
  */
 export const REPORT_VERSION = 1;
 

@@ -16,7 +16,7 @@ export const Thresholds = z.object({
   hoverCollectiveBand: z.number().positive().max(0.5),
   /** Hover collective is at least this above the idle floor, 0–1, so sitting armed on the ground is not hover. */
   hoverAboveIdle: z.number().min(0).max(0.5),
-  /** Shortest steady stretch that counts as hover, s (shared/README.md, analyses: ≥ 1 s). */
+  /** Shortest steady stretch that counts as hover, s (shared/README.md §6: ≥ 1 s). */
   hoverMinS: z.number().positive(),
   /** Less hover than this in total and balance, CG and torque split are not judged, s: a few seconds average out gusts and control noise. */
   minHoverForVerdictS: z.number().positive(),
@@ -37,7 +37,7 @@ export const Thresholds = z.object({
   /** Amplitude of an accelerometer tone raising `watch` / `act`, g: half a g of rotor tone is usual on a hard-mounted board; above ~1 g attitude estimates suffer (common practice). */
   accToneWatchG: z.number().positive(),
   accToneActG: z.number().positive(),
-  /** Output counted as saturated, 0–1 (shared/README.md, analyses: 98 %). */
+  /** Output counted as saturated, 0–1 (shared/README.md §6: 98 %). */
   saturationLevel: z.number().min(0.5).max(1),
   /** Share of armed time saturated raising `watch` / `act`, %: brief full-throttle punches are normal, long stretches mean no headroom left (common practice). */
   saturationWatchPct: z.number().positive(),

@@ -1,7 +1,7 @@
 /**
  * LiPo pack model: open-circuit voltage from state of charge, terminal voltage V = V_oc − I·R.
  * The curve is a typical LiPo discharge shape (common practice; 4.20 V full and 3.7 V nominal
- * per tests/REFERENCES.md, LiPo cell voltages), not a particular cell's datasheet.
+ * per tests/REFERENCES.md §12), not a particular cell's datasheet.
  */
 const SOC = [0, 0.05, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 0.95, 1];
 const OCV = [3.27, 3.61, 3.69, 3.73, 3.77, 3.8, 3.84, 3.87, 3.95, 4.02, 4.11, 4.15, 4.2];

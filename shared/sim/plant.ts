@@ -54,8 +54,7 @@ export function buildPlant(airframe: Airframe, build: BuildParams, fx: FaultEffe
   const cells = airframe.cells ?? 4;
   const vFull = 4.2 * cells;
   const dM = airframe.prop.diameterIn * 0.0254;
-  // Propeller law (shared/README.md, physics conventions; tests/REFERENCES.md, propeller thrust
-  // from rpm): T = C_T·ρ·n²·D⁴, P = C_P·ρ·n³·D⁵, n in rev/s.
+  // Propeller law (shared/README.md §4; tests/REFERENCES.md §6): T = C_T·ρ·n²·D⁴, P = C_P·ρ·n³·D⁵, n in rev/s.
   const kT0 = (build.ct * build.rho * dM ** 4) / 3600; // N per rpm²
   const kQ0 = (build.cp * build.rho * dM ** 5) / (2 * Math.PI) / 3600; // N·m per rpm²
   const rpmMax0 =

@@ -56,7 +56,7 @@ export function welch(x: ArrayLike<number>, fs: number, options: WelchOptions): 
   for (let k = 0; k < bins; k++) scale[k] = k === 0 || k === half ? norm : 2 * norm;
   const detrend = (options.detrend ?? 'constant') === 'constant';
   // Removing the mean before windowing only changes the bins where the window's own DFT is
-  // non-zero (bins 0 and 1 for a periodic Hann, tests/REFERENCES.md, Hann window: [N/2, −N/4, 0, …]), so the
+  // non-zero (bins 0 and 1 for a periodic Hann, tests/REFERENCES.md §1: [N/2, −N/4, 0, …]), so the
   // mean comes off those bins after the transform instead of off every sample before it.
   const wBins: number[] = [];
   const wRe: number[] = [];

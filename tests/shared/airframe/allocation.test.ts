@@ -10,7 +10,7 @@ import { multiplyVector } from '../../../shared/airframe/linear-algebra';
 import { presetAirframe } from '../../../shared/airframe/presets';
 import type { Motor } from '../../../shared/schemas/airframe';
 
-// tests/REFERENCES.md, motor mixing inputs: arm 0.15 m at 45°, d = 0.15/√2 m, k = 0.016 m; M1 FR ccw, M2 RR cw,
+// tests/REFERENCES.md §5 inputs: arm 0.15 m at 45°, d = 0.15/√2 m, k = 0.016 m; M1 FR ccw, M2 RR cw,
 // M3 RL ccw, M4 FL cw. Positions here in mm.
 const dM = 0.15 / Math.SQRT2;
 const d = dM * 1000;
@@ -40,8 +40,8 @@ function expectMatrixClose(actual: number[][], expected: number[][], tol: number
 }
 
 describe('allocationMatrix', () => {
-  it('matches the symmetric quad-X matrix B of tests/REFERENCES.md, motor mixing, symmetric X', () => {
-    // tests/REFERENCES.md, motor mixing, symmetric X [computed from first principles]
+  it('matches the symmetric quad-X matrix B of tests/REFERENCES.md §5.1', () => {
+    // tests/REFERENCES.md §5.1 [computed from first principles]
     const B = allocationMatrix(symmetric);
     expectMatrixClose(
       B,
@@ -63,8 +63,8 @@ describe('allocationMatrix', () => {
 });
 
 describe('mixerMatrix', () => {
-  it('inverts the symmetric quad X exactly (tests/REFERENCES.md, motor mixing, symmetric X closed form)', () => {
-    // tests/REFERENCES.md, motor mixing, symmetric X: entries 1/4, ±1/(4d) = ±2.3570226 m⁻¹, ±1/(4k) = ±15.625 m⁻¹, tol 1e-9.
+  it('inverts the symmetric quad X exactly (tests/REFERENCES.md §5.1 closed form)', () => {
+    // tests/REFERENCES.md §5.1: entries 1/4, ±1/(4d) = ±2.3570226 m⁻¹, ±1/(4k) = ±15.625 m⁻¹, tol 1e-9.
     const r = 1 / (4 * dM);
     expectMatrixClose(
       mixerMatrix(symmetric),
@@ -80,7 +80,7 @@ describe('mixerMatrix', () => {
   });
 
   it('gives the well-known quad-X sign pattern', () => {
-    // Common practice (tests/REFERENCES.md, motor mixing, symmetric X table): roll right raises the left motors, pitch
+    // Common practice (tests/REFERENCES.md §5.1 table): roll right raises the left motors, pitch
     // forward (nose down) raises the rear motors, yaw right raises the counter-clockwise props.
     const B = mixerMatrix(symmetric);
     const rollRight = B.map((row) => Math.sign(row[1]!));
@@ -91,7 +91,7 @@ describe('mixerMatrix', () => {
     expect(yawRight).toEqual([1, -1, 1, -1]); // M1 and M3 (ccw) up
   });
 
-  it('reproduces the worked roll and yaw examples of tests/REFERENCES.md, motor mixing, symmetric X', () => {
+  it('reproduces the worked roll and yaw examples of tests/REFERENCES.md §5.1', () => {
     const B = mixerMatrix(symmetric);
     const roll = multiplyVector(B, [0, 0.1, 0, 0]);
     const yaw = multiplyVector(B, [0, 0, 0, 0.01]);
@@ -99,8 +99,8 @@ describe('mixerMatrix', () => {
     [0.15625, -0.15625, 0.15625, -0.15625].forEach((v, i) => expect(yaw[i]).toBeCloseTo(v, 9));
   });
 
-  it('inverts the front-arms-1.2× quad of tests/REFERENCES.md, motor mixing, front arms 20 % longer', () => {
-    // tests/REFERENCES.md, motor mixing, front arms 20 % longer [computed], closed forms 1/4.4, 1.2/4.4, 1/(4.4d), 1/(4.4k), 1.2/(4.4k).
+  it('inverts the front-arms-1.2× quad of tests/REFERENCES.md §5.2', () => {
+    // tests/REFERENCES.md §5.2 [computed], closed forms 1/4.4, 1.2/4.4, 1/(4.4d), 1/(4.4k), 1.2/(4.4k).
     const r = 1 / (4.4 * dM);
     expectMatrixClose(
       mixerMatrix(frontLong),
@@ -161,16 +161,16 @@ describe('mixerMatrix', () => {
 });
 
 describe('hover thrusts', () => {
-  const W = 0.6 * G0; // tests/REFERENCES.md, hover thrust balance: 0.6 kg × 9.80665 m/s² (g0, CGPM 1901) = 5.883990 N
+  const W = 0.6 * G0; // tests/REFERENCES.md §5.3: 0.6 kg × 9.80665 m/s² (g0, CGPM 1901) = 5.883990 N
 
   it('shares the weight equally on a symmetric quad X', () => {
     expect(W).toBeCloseTo(5.88399, 6);
     const t = hoverThrustsN(presetAirframe('quad-x', { armMm: 150, massG: 600 }));
-    t.forEach((v) => expectWithin(v, 1.470998, 1e-6)); // tests/REFERENCES.md, hover thrust balance
+    t.forEach((v) => expectWithin(v, 1.470998, 1e-6)); // tests/REFERENCES.md §5.3
   });
 
   it('loads the rear motors 1.2× on the front-arms-1.2× quad', () => {
-    // tests/REFERENCES.md, hover thrust balance: front W/4.4 = 1.337270 N, rear 1.2·W/4.4 = 1.604725 N.
+    // tests/REFERENCES.md §5.3: front W/4.4 = 1.337270 N, rear 1.2·W/4.4 = 1.604725 N.
     const t = hoverThrustsN(presetAirframe('wide-front-x', { armMm: 150, massG: 600 }));
     expectWithin(t[0], 1.33727, 1e-6);
     expectWithin(t[1], 1.604725, 1e-6);
@@ -179,7 +179,7 @@ describe('hover thrusts', () => {
   });
 
   it('loads the rear motors when the CG sits 10 mm behind the arm junction', () => {
-    // tests/REFERENCES.md, hover thrust balance: front 1.332311 N, rear 1.609684 N.
+    // tests/REFERENCES.md §5.3: front 1.332311 N, rear 1.609684 N.
     const airframe = presetAirframe('quad-x', { armMm: 150, massG: 600 });
     const t = hoverThrustsN(airframe, { x: -10, y: 0 });
     expectWithin(t[0], 1.332311, 1e-6);

@@ -9,7 +9,7 @@ import { Airframe } from '../../../shared/schemas/airframe';
 
 describe('layout presets', () => {
   it('numbers the quad X clockwise from front-right with spins ccw, cw, ccw, cw', () => {
-    // The default numbering of shared/README.md (physics conventions), the layout
+    // The default numbering of shared/README.md §4, the layout
     // tests/REFERENCES.md uses for its motor mixing cases.
     const m = presetAirframe('quad-x').motors;
     expect(m.map((v) => [Math.sign(v.x), Math.sign(v.y), v.spin])).toEqual([

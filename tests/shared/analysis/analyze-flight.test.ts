@@ -90,7 +90,7 @@ describe('thresholds', () => {
     expect(resolveThresholds({ cellActV: 3.2 }).cellActV).toBe(3.2);
   });
 
-  it('keeps the LiPo cell limits at 3.5 V watch and 3.3 V act (common practice, tests/REFERENCES.md, LiPo cell voltages)', () => {
+  it('keeps the LiPo cell limits at 3.5 V watch and 3.3 V act (common practice, tests/REFERENCES.md §12)', () => {
     expect(defaultThresholds.cellWatchV).toBe(3.5);
     expect(defaultThresholds.cellActV).toBe(3.3);
   });

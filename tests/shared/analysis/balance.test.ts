@@ -7,7 +7,7 @@ import { diagnose } from '../../../shared/analysis/diagnosis';
 import { defaultThresholds } from '../../../shared/schemas/thresholds';
 import type { Airframe } from '../../../shared/schemas/airframe';
 
-// tests/REFERENCES.md, motor mixing: arm 0.15 m at 45° → d = 106.066 mm; 0.6 kg; M1 FR ccw, M2 RR cw, M3 RL ccw, M4 FL cw.
+// tests/REFERENCES.md §5: arm 0.15 m at 45° → d = 106.066 mm; 0.6 kg; M1 FR ccw, M2 RR cw, M3 RL ccw, M4 FL cw.
 const d = 150 / Math.SQRT2;
 const quad = (front = 1): Airframe => ({
   name: 'Kite',
@@ -26,7 +26,7 @@ const columnsFor = (thrusts: number[], scale = 0.05) =>
   thrusts.map((t) => new Float64Array(100).fill(Math.sqrt(t) * scale));
 const all: [number, number][] = [[0, 100]];
 
-describe('mixer sign pattern and numbers via shared/airframe (tests/REFERENCES.md, motor mixing, symmetric X, closed form 1/(4d), 1/(4k))', () => {
+describe('mixer sign pattern and numbers via shared/airframe (tests/REFERENCES.md §5.1, closed form 1/(4d), 1/(4k))', () => {
   it('gives each motor the published share of thrust, roll, pitch and yaw', () => {
     const m = mixerMatrix(quad().motors, { x: 0, y: 0 }, 0.016);
     const want = [
@@ -105,7 +105,7 @@ describe('balance, torque split and CG', () => {
     const bw = analyseBalance(af, hoverMeans(weak, null, all, 2));
     const fw = fitPatterns(af, bw.outputShare, bw.expectedShare);
     expect(fw[0]).toMatchObject({ pattern: 'weak-motor', motor: 3 });
-    // shared/README.md, report JSON and CLI contract: against the output expected at the measured total, √1.08/√(4.08/4) − 1
+    // shared/README.md §7: against the output expected at the measured total, √1.08/√(4.08/4) − 1
     expect(bw.deviationPct[2]).toBeCloseTo((Math.sqrt(1.08) / Math.sqrt(4.08 / 4) - 1) * 100, 6);
     // The cw props (2, 4) carry 6 % more each.
     const spin = columnsFor(t.map((v, i) => (i % 2 === 1 ? v * 1.06 : v)));

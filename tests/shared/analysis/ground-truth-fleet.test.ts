@@ -37,7 +37,7 @@ describe('a CG offset on a wide-front quad', () => {
   it('does not read as a tracking problem: the integrator holds the trim', () => {
     expect(codes(r)).not.toContain('tracking-lag');
     const clean = fly(heronLike, [], 500, 108);
-    // The lag is the loop's, not the offset's (Knapp & Carter 1976, tests/REFERENCES.md, cross-correlation delay: the
+    // The lag is the loop's, not the offset's (Knapp & Carter 1976, tests/REFERENCES.md §11: the
     // cross-correlation peak measures the delay, which a steady offset must not change).
     const lag = r.report.tracking!.pitch.lagMs!;
     expect(Math.abs(lag - clean.report.tracking!.pitch.lagMs!)).toBeLessThan(15);
@@ -52,7 +52,7 @@ describe('a frame mode on a hex logged at 500 Hz', () => {
   it('labels the line frame (it holds 140 Hz while the rotors change speed) and raises frame-resonance', () => {
     // The mode sits where the motors' electrical line (12 pole pairs × a ~95 Hz hover rotor
     // speed ≈ 1140 Hz) folds down by the 500 Hz log rate; that line would move with rpm, this
-    // one does not (shared/README.md, analyses: frame = constant frequency across throttle).
+    // one does not (shared/README.md §6: frame = constant frequency across throttle).
     expect(ospreyLike.poles).toBe(24);
     const fs = r.report.sampleRateHz;
     const bin = fs / 128;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { inferCells, LIPO, packVoltages } from '../../../shared/analysis/lipo';
 
-describe('LiPo thresholds (tests/REFERENCES.md, LiPo cell voltages)', () => {
+describe('LiPo thresholds (tests/REFERENCES.md §12)', () => {
   it('uses 4.20 V full and 3.7 V nominal per cell (cell specifications) and 3.5 / 3.3 V in flight (common practice)', () => {
     expect(LIPO.fullV).toBe(4.2);
     expect(LIPO.nominalV).toBe(3.7);

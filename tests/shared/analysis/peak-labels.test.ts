@@ -18,7 +18,7 @@ describe('labelPeak', () => {
     });
   });
 
-  it('folds orders above Nyquist back (tests/REFERENCES.md, peak labelling: 600 Hz at 1000 Hz appears at 400 Hz)', () => {
+  it('folds orders above Nyquist back (tests/REFERENCES.md §3: 600 Hz at 1000 Hz appears at 400 Hz)', () => {
     // 400 Hz is 2× of a 200 Hz rotor directly; the direct reading wins over a folded one.
     expect(labelPeak(400, { ...base, motorHz: [200, 200, 200, 200] }).label).toBe('rotor-2x');
     // 220 Hz rotor, 3 blades: blade pass 660 Hz folds to 340 Hz.
@@ -26,7 +26,7 @@ describe('labelPeak', () => {
       label: 'blade-pass',
       aliasOfHz: 660,
     });
-    // 14-pole motor (7 pole pairs) at 6000 rpm: electrical 700 Hz folds to 300 Hz (tests/REFERENCES.md, peak labelling).
+    // 14-pole motor (7 pole pairs) at 6000 rpm: electrical 700 Hz folds to 300 Hz (tests/REFERENCES.md §3).
     const e = labelPeak(300, { ...base, blades: 2, poles: 14, motorHz: [100, 100, 100, 100] });
     expect(e).toMatchObject({ label: null, aliasOfHz: 700 });
   });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { energyUsed, fitSag } from '../../../shared/analysis/power';
 
-describe('internal resistance from sag (IEC 61960 two-step ΔV/ΔI; tests/REFERENCES.md, battery internal resistance)', () => {
+describe('internal resistance from sag (IEC 61960 two-step ΔV/ΔI; tests/REFERENCES.md §10)', () => {
   it('gives 42.857 mΩ and 16.4857 V open circuit for 16.40 V @ 2 A, 15.20 V @ 30 A', () => {
     const fit = fitSag([16.4, 15.2], [2, 30])!;
     expect(fit.ohm).toBeCloseTo(0.0428571428571, 9);

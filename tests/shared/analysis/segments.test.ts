@@ -52,7 +52,7 @@ describe('segments', () => {
   const seg = findSegments(log, defaultThresholds);
   const sec = (r: [number, number][]) => rangeLength(r) / fs;
 
-  // The definition under test is the design's (shared/README.md, analyses: hover = steady body rates and
+  // The definition under test is the design's (shared/README.md §6: hover = steady body rates and
   // collective for at least 1 s); the rate and collective limits behind it are common practice,
   // each explained where it is defined (shared/schemas/thresholds.ts).
   it('finds the two hovers and not the short calm moment between flips', () => {

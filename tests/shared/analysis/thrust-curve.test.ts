@@ -57,7 +57,7 @@ describe('bench-run thrust curve', () => {
     ).toThrow(/reading 2: thrust falls/);
   });
 
-  it('the power law is output^γ (shared/README.md, physics conventions) and its inverse', () => {
+  it('the power law is output^γ (shared/README.md §4) and its inverse', () => {
     const p = powerLawCurve(2);
     expect(p.thrust(0.5)).toBe(0.25);
     expect(p.output(0.25)).toBeCloseTo(0.5, 12);

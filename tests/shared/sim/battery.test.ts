@@ -3,7 +3,7 @@ import { cellOpenCircuitV, terminalVoltage } from '../../../shared/sim/battery';
 
 describe('cellOpenCircuitV', () => {
   it('reads 4.20 V full and about 3.7–3.85 V mid-discharge', () => {
-    // tests/REFERENCES.md, LiPo cell voltages: full charge 4.20 V per cell, nominal 3.7 V (LiPo cell specifications).
+    // tests/REFERENCES.md §12: full charge 4.20 V per cell, nominal 3.7 V (LiPo cell specifications).
     expect(cellOpenCircuitV(1)).toBeCloseTo(4.2, 9);
     expect(cellOpenCircuitV(1.2)).toBeCloseTo(4.2, 9);
     const mid = cellOpenCircuitV(0.5);
@@ -23,7 +23,7 @@ describe('cellOpenCircuitV', () => {
 });
 
 describe('terminalVoltage', () => {
-  it('reproduces the two-point sag case of tests/REFERENCES.md, battery internal resistance', () => {
+  it('reproduces the two-point sag case of tests/REFERENCES.md §10', () => {
     // 4S pack, 16.40 V at 2.0 A and 15.20 V at 30.0 A: R = 0.0428571 Ω, V_oc = 16.4857 V.
     const r = 1.2 / 28;
     const ocv = 16.4 + 2 * r;

@@ -36,7 +36,7 @@ describe('demo crew and fleet', () => {
     for (const a of demoFleet) expect(() => Airframe.parse(a.airframe)).not.toThrow();
     expect(demoAircraft('kite').airframe.motors).toHaveLength(4);
     expect(demoAircraft('osprey').airframe.motors).toHaveLength(6);
-    // Heron is wide-front: its front motors are expected to carry less (tests/REFERENCES.md, hover thrust balance).
+    // Heron is wide-front: its front motors are expected to carry less (tests/REFERENCES.md §5.3).
     const s = expectedHoverShares(demoAircraft('heron').airframe);
     expect(s[1]! / s[0]!).toBeCloseTo(1.2, 9);
     expect(() => demoAircraft('albatross')).toThrow(/no demo aircraft/);

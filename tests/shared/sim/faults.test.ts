@@ -81,7 +81,7 @@ describe('simulate: each fault changes what it should and nothing else', () => {
   });
 
   it('a tired pack sags by its larger internal resistance (V = V_oc − I·R)', () => {
-    // tests/REFERENCES.md, battery internal resistance: R = ΔV/ΔI between two current levels close in time.
+    // tests/REFERENCES.md §10: R = ΔV/ΔI between two current levels close in time.
     for (const [name, scale] of [
       ['clean-quad-x', 1],
       ['tired-battery', 3.5],
@@ -129,7 +129,7 @@ describe('simulate: each fault changes what it should and nothing else', () => {
   });
 
   it('a setpoint delay shows as extra lag between setpoint and gyro', () => {
-    // Knapp & Carter 1976 (tests/REFERENCES.md, cross-correlation delay): the delay is the lag of the cross-correlation peak.
+    // Knapp & Carter 1976 (tests/REFERENCES.md §11): the delay is the lag of the cross-correlation peak.
     const lagMs = (name: string) => {
       const { log } = run(scenario(name));
       const sp = col(log, 'sp_roll');

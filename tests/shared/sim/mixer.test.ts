@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { Mixer } from '../../../shared/sim/mixer';
 
 // Quad X columns scaled to ±1 (roll, pitch, yaw) in the default numbering: 1 FR ccw, 2 RR cw,
-// 3 RL ccw, 4 FL cw (shared/README.md, physics conventions).
+// 3 RL ccw, 4 FL cw (shared/README.md §4).
 const ctl = [
   Float64Array.from([-1, -1, 1, 1]),
   Float64Array.from([1, -1, -1, 1]),

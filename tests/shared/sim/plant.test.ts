@@ -29,7 +29,7 @@ describe('simulate: physics sanity', () => {
   });
 
   it('gives a clockwise prop a negative (nose-left) reaction yaw moment', () => {
-    // Newton's third law: the frame turns opposite to the prop (shared/README.md, physics conventions sign convention).
+    // Newton's third law: the frame turns opposite to the prop (shared/README.md §4 sign convention).
     expect(reactionYawSign('cw')).toBe(-1);
     expect(reactionYawSign('ccw')).toBe(1);
   });
@@ -78,7 +78,7 @@ describe('simulate: physics sanity', () => {
   });
 
   it('settles an asymmetric frame where the moments about the CG vanish', () => {
-    // shared/README.md, physics conventions: moments about the CG; tests/REFERENCES.md, hover thrust balance: rear/front thrust = 1.2 exactly
+    // shared/README.md §4: moments about the CG; tests/REFERENCES.md §5.3: rear/front thrust = 1.2 exactly
     // for front arms 1.2× the rear.
     const { log, truth } = run(scenario('wide-front-healthy'));
     const t = hoverThrusts(log, truth);

@@ -3,7 +3,7 @@ import { ParkMiller, PM_MODULUS, streamFor } from '../../../shared/sim/prng';
 
 describe('ParkMiller', () => {
   it('starts 16807, 282475249, 1622650073 from z0 = 1', () => {
-    // OEIS A096550 first terms (tests/REFERENCES.md, Park–Miller noise).
+    // OEIS A096550 first terms (tests/REFERENCES.md §2.3).
     const rng = new ParkMiller(1);
     expect([rng.nextInt(), rng.nextInt(), rng.nextInt()]).toEqual([16807, 282475249, 1622650073]);
   });
@@ -16,7 +16,7 @@ describe('ParkMiller', () => {
     expect(z).toBe(1043618065);
   });
 
-  it('reproduces the uniform noise values of tests/REFERENCES.md, Park–Miller noise', () => {
+  it('reproduces the uniform noise values of tests/REFERENCES.md §2.3', () => {
     // e[n] = √12·0.1·(z/(2³¹−1) − 0.5); first three values [computed there].
     const rng = new ParkMiller(1);
     const e = () => Math.sqrt(12) * 0.1 * (rng.uniform() - 0.5);

@@ -77,7 +77,7 @@ describe('simulate: the log it returns', () => {
   });
 
   it('keeps the scripted hovers steady: low body rates and a steady collective', () => {
-    // shared/README.md, analyses calls a hover steady when body rates are low and the collective steady.
+    // shared/README.md §6 calls a hover steady when body rates are low and the collective steady.
     const { log, truth } = run(scenario('clean-quad-x'), { seconds: 60, rateHz: 500, seed: 4 });
     for (const range of hoverRows(log, truth)) {
       for (const axis of ['gyro_x', 'gyro_y', 'gyro_z']) {

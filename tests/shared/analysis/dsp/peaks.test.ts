@@ -11,7 +11,7 @@ const welch256 = (
   detrend: 'constant' | false = 'constant',
 ) => welch(x, fs, { nperseg: 256, noverlap: 128, scaling, detrend });
 
-describe('peaks and harmonic interpolation (tests/REFERENCES.md, peak labelling; J. O. Smith, SASP)', () => {
+describe('peaks and harmonic interpolation (tests/REFERENCES.md §3; J. O. Smith, SASP)', () => {
   const harmonics = (f0: number) =>
     signal(
       4096,

@@ -27,7 +27,7 @@ describe('fft.js wrapper', () => {
     expect(() => new RealFft(1)).toThrow(RangeError);
   });
 
-  it('gives |X| = 64, 32, 32 for a Hann-windowed bin-25 sine, N = 256 (tests/REFERENCES.md, Hann window, computed)', () => {
+  it('gives |X| = 64, 32, 32 for a Hann-windowed bin-25 sine, N = 256 (tests/REFERENCES.md §1, computed)', () => {
     const w = hannPeriodic(256);
     const x = Float64Array.from(w, (v, n) => v * Math.sin((2 * Math.PI * 25 * n) / 256));
     const p = new Float64Array(129);

@@ -12,7 +12,7 @@ const welch256 = (
   detrend: 'constant' | false = 'constant',
 ) => welch(x, fs, { nperseg: 256, noverlap: 128, scaling, detrend });
 
-describe('Welch PSD against scipy.signal.welch (tests/REFERENCES.md, Welch PSD, computed with scipy 1.17.1)', () => {
+describe('Welch PSD against scipy.signal.welch (tests/REFERENCES.md §2.2, computed with scipy 1.17.1)', () => {
   it('W1: a bin-centred unit sine reads A²/2 = 0.5 in spectrum scaling and 0.0853333 V²/Hz density', () => {
     const x = signal(4096, (t) => Math.sin(2 * Math.PI * 97.65625 * t));
     const s = welch256(x, 'spectrum');

@@ -6,7 +6,7 @@ import {
   windowResponseDb,
 } from '../../../../shared/analysis/dsp/window';
 
-describe('Hann window figures (Harris 1978, Table I; tests/REFERENCES.md, Hann window)', () => {
+describe('Hann window figures (Harris 1978, Table I; tests/REFERENCES.md §1)', () => {
   it('has coherent gain 0.5 and ENBW 1.5 bins (periodic form)', () => {
     for (const n of [16, 256, 4096]) {
       const f = windowFigures(hannPeriodic(n));

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { crossCorrelationLag } from '../../../../shared/analysis/dsp/xcorr';
 import { parkMiller } from '../park-miller';
 
-describe('cross-correlation lag (Knapp & Carter 1976; scipy correlate convention, tests/REFERENCES.md, cross-correlation delay)', () => {
+describe('cross-correlation lag (Knapp & Carter 1976; scipy correlate convention, tests/REFERENCES.md §11)', () => {
   it('X1: finds the 37-sample delay of a Park–Miller sequence, peak 75.68664602', () => {
     const r = parkMiller(1);
     const x = Float64Array.from({ length: 1000 }, () => r() / 2147483647 - 0.5);

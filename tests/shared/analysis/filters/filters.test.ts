@@ -10,7 +10,7 @@ import { FilterSpec } from '../../../../shared/schemas/filters';
 
 const impulse = (n: number) => Float64Array.from({ length: n }, (_, i) => (i === 0 ? 1 : 0));
 
-describe('RBJ notch, f0 = 200 Hz, Q = 5, fs = 4000 (RBJ Audio EQ Cookbook, W3C Note 2021; tests/REFERENCES.md, RBJ notch)', () => {
+describe('RBJ notch, f0 = 200 Hz, Q = 5, fs = 4000 (RBJ Audio EQ Cookbook, W3C Note 2021; tests/REFERENCES.md §4.1)', () => {
   const notch: FilterSpec = [{ kind: 'notch', hz: 200, q: 5 }];
 
   it('has the cookbook coefficients', () => {
@@ -23,7 +23,7 @@ describe('RBJ notch, f0 = 200 Hz, Q = 5, fs = 4000 (RBJ Audio EQ Cookbook, W3C N
   });
 
   it('matches scipy.signal.freqz magnitude, phase and group delay', () => {
-    // [f, |H|, phase deg, group delay ms] from tests/REFERENCES.md, RBJ notch (computed with scipy)
+    // [f, |H|, phase deg, group delay ms] from tests/REFERENCES.md §4.1 (computed with scipy)
     const rows = [
       [50, 0.998605, -3.0262, 0.19001],
       [100, 0.991405, -7.5176, 0.34321],
@@ -65,7 +65,7 @@ describe('RBJ notch, f0 = 200 Hz, Q = 5, fs = 4000 (RBJ Audio EQ Cookbook, W3C N
   });
 });
 
-describe('RBJ low-pass, f0 = 100 Hz, fs = 4000 (tests/REFERENCES.md, RBJ low-pass)', () => {
+describe('RBJ low-pass, f0 = 100 Hz, fs = 4000 (tests/REFERENCES.md §4.2)', () => {
   it('equals scipy.signal.butter(2, 100, fs=4000) with Q = 1/√2', () => {
     const c = lowpass2Coefficients(100, Math.SQRT1_2, 4000);
     expect(c.b0).toBeCloseTo(0.00554271721, 12);
