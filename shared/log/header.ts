@@ -1,6 +1,7 @@
-import { canonicalReading, proposeColumnMap, type ProposedColumnMap } from './column-map';
+import { canonicalReading, type ProposedColumnMap } from './column-map';
 import { LogFormatError } from './errors';
 import { isGzip } from './gzip';
+import { proposeColumnMap } from './propose-column-map';
 import { readPreamble, splitCells, type Delimiter } from './preamble';
 import { decodeUtf8 } from './utf8';
 

@@ -6,14 +6,9 @@ import {
   type Conversion,
   type Unit,
 } from './channels';
-import {
-  canonicalReading,
-  ColumnMap,
-  impliedUnit,
-  proposeColumnMap,
-  splitHeader,
-} from './column-map';
+import { canonicalReading, ColumnMap, impliedUnit, splitHeader } from './column-map';
 import { LogFormatError } from './errors';
+import { proposeColumnMap } from './propose-column-map';
 import type { LogWarning } from './types';
 
 /** What the reader does with one field of each row. */

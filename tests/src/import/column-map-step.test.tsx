@@ -2,7 +2,7 @@
 import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { proposeColumnMap } from '../../../shared/log/column-map';
+import { proposeColumnMap } from '../../../shared/log/propose-column-map';
 import { ColumnMapStep } from '../../../src/features/import/components/column-map-step';
 
 afterEach(cleanup);
