@@ -1,37 +1,13 @@
-import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { presetAirframe } from '../shared/airframe/presets';
 import { PASSWORD, uniqueEmail } from './helpers/accounts';
 import { writeScenarioCsv } from './fixtures/synth-log';
+import { writeForeignHeaderCsv } from './fixtures/foreign-csv';
 
 const artifacts = new URL('./artifacts/', import.meta.url).pathname;
-
-/** The same flight written with headers of another layout: the column-map step must open. */
-function writeForeignHeaderCsv(): string {
-  const canonical = readFileSync(writeScenarioCsv('clean-quad-x', { seconds: 20 }), 'utf8').split(
-    '\n',
-  );
-  const headerAt = canonical.findIndex((l) => !l.startsWith('#'));
-  const names = canonical[headerAt]!.split(',');
-  const rename = (h: string) => {
-    const m = /^motor(\d+)/.exec(h);
-    if (m) return `Out${Number(m[1]) - 1}`;
-    if (h.startsWith('time')) return 'Timestamp (s)';
-    if (h.startsWith('gyro_x')) return 'GyroRoll (dps)';
-    if (h.startsWith('gyro_y')) return 'GyroPitch (dps)';
-    if (h.startsWith('gyro_z')) return 'GyroYaw (dps)';
-    return `Extra ${h.replace(/\W+/g, '')}`;
-  };
-  const out = [names.map(rename).join(','), ...canonical.slice(headerAt + 1)];
-  const dir = mkdtempSync(join(tmpdir(), 'hoverprint-e2e-foreign-'));
-  const path = join(dir, 'kite-export.csv');
-  writeFileSync(path, out.join('\n'));
-  return path;
-}
 
 test('the parse worker reports progress and the review shows the rows it read, from a gzipped log', async ({
   page,

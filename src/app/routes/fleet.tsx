@@ -119,7 +119,7 @@ function TeamFleet({
           <Empty>
             No aircraft yet.{' '}
             {can(role, 'aircraft.create') ? (
-              <Link to="/aircraft/new" className="text-accent underline">
+              <Link to="/aircraft/new" className="text-accent-ink underline">
                 Add the first one from a layout preset.
               </Link>
             ) : (
@@ -178,7 +178,7 @@ function TeamFleet({
             ) : rows.length === 0 ? (
               <Empty>
                 No flights match.{' '}
-                <Link to="/import" className="text-accent underline">
+                <Link to="/import" className="text-accent-ink underline">
                   Import a log
                 </Link>{' '}
                 to add one.

@@ -9,7 +9,7 @@ export function NoTeam({ title }: { title: string }) {
       <PageHeader title={title} />
       <Empty>
         You are not in a team yet.{' '}
-        <Link to="/teams/new" className="text-accent underline">
+        <Link to="/teams/new" className="text-accent-ink underline">
           Start one
         </Link>
         , or open the invitation link a team owner sent you.

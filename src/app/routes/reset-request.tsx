@@ -9,7 +9,7 @@ export function ResetRequestRoute() {
       lead="We e-mail a link that lets you choose a new one."
       footer={
         <p>
-          <Link className="text-accent underline" to="/sign-in">
+          <Link className="text-accent-ink underline" to="/sign-in">
             Back to sign-in
           </Link>
         </p>

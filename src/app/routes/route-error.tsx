@@ -12,7 +12,7 @@ export function RouteError() {
     <div role="alert" className="mx-auto max-w-xl py-16">
       <h1 className="text-xl font-semibold text-sev-act">Something went wrong</h1>
       <p className="mt-2 font-mono text-sm text-ink-soft">{message}</p>
-      <Link className="mt-4 inline-block text-accent underline" to="/">
+      <Link className="mt-4 inline-block text-accent-ink underline" to="/">
         Back to the fleet
       </Link>
     </div>

@@ -18,14 +18,14 @@ export function SignInRoute() {
           <p>
             New here?{' '}
             <Link
-              className="text-accent underline"
+              className="text-accent-ink underline"
               to={`/sign-up${next !== '/' ? `?next=${encodeURIComponent(next)}` : ''}`}
             >
               Create an account
             </Link>
           </p>
           <p>
-            <Link className="text-accent underline" to="/reset">
+            <Link className="text-accent-ink underline" to="/reset">
               Forgot your password?
             </Link>
           </p>

@@ -15,7 +15,7 @@ export function SignUpRoute() {
       footer={
         <p>
           Have an account?{' '}
-          <Link className="text-accent underline" to="/sign-in">
+          <Link className="text-accent-ink underline" to="/sign-in">
             Sign in
           </Link>
         </p>

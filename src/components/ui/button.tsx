@@ -4,7 +4,8 @@ type Tone = 'primary' | 'plain' | 'danger' | 'quiet';
 
 const tones: Record<Tone, string> = {
   primary: 'bg-slate-brand text-paper hover:bg-ink disabled:bg-ink-faint',
-  plain: 'border border-line bg-paper-raised text-ink hover:bg-paper-sunk disabled:text-ink-faint',
+  plain:
+    'border border-line-strong bg-paper-raised text-ink hover:bg-paper-sunk disabled:text-ink-faint',
   danger: 'border border-sev-act/40 bg-paper-raised text-sev-act hover:bg-sev-act/10',
   quiet: 'text-ink-soft hover:bg-paper-sunk hover:text-ink',
 };

@@ -7,7 +7,7 @@ export function Caution({ title, children }: { title: string; children: ReactNod
       aria-label={`Caution: ${title}`}
       className="flex gap-3 rounded border border-accent/50 bg-accent-soft/50 px-3 py-2 text-xs text-ink"
     >
-      <span aria-hidden className="mt-0.5 font-mono font-semibold text-accent">
+      <span aria-hidden className="mt-0.5 font-mono font-semibold text-accent-ink">
         !
       </span>
       <div>

@@ -22,7 +22,7 @@ function controlProps(id: string, { error, hint }: Omit<FieldProps, 'label'>, ex
     id,
     'aria-invalid': error ? true : undefined,
     'aria-describedby': error ? `${id}-error` : hint ? `${id}-hint` : undefined,
-    className: control + (error ? 'border-sev-act ' : 'border-line ') + extraClass,
+    className: control + (error ? 'border-sev-act ' : 'border-line-strong ') + extraClass,
   };
 }
 

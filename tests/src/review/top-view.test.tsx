@@ -40,12 +40,17 @@ describe('top view', () => {
     expect(screen.getByRole('img', { name: /motor 3 marked/ })).toBeTruthy();
     expect(motor(3).getAttribute('data-flagged')).toBe('true');
     expect(motor(1).getAttribute('data-flagged')).toBe('false');
-    expect(motor(3).getAttribute('aria-label')).toBe(
-      'Motor 3, ccw, deviation +11.8 %, named in the verdict',
-    );
+    const tip = (n: number) => motor(n).querySelector('title')!.textContent;
+    expect(tip(3)).toBe('Motor 3, ccw, deviation +11.8 %, named in the verdict');
     // Rounded to zero shows no sign.
-    expect(motor(2).getAttribute('aria-label')).toContain('deviation 0.0 %');
-    expect(motor(1).getAttribute('aria-label')).toContain('deviation −1.2 %');
+    expect(tip(2)).toContain('deviation 0.0 %');
+    expect(tip(1)).toContain('deviation −1.2 %');
+    // The image's own name carries every figure, since its parts are not read out.
+    expect(
+      screen.getByRole('img', {
+        name: /Deviation from expected hover output: motor 1 −1\.2 %, motor 2 0\.0 %, motor 3 \+11\.8 %, motor 4 −0\.4 %$/,
+      }),
+    ).toBeTruthy();
   });
 
   it('turns each spin arrow the way its prop spins, seen from above', () => {
@@ -80,6 +85,10 @@ describe('top view', () => {
     const line = document.querySelector('line[stroke-dasharray]')!;
     expect(Number(line.getAttribute('x2'))).toBe(-2);
     expect(Number(line.getAttribute('y2'))).toBe(-6);
-    expect(screen.getByRole('img', { name: 'CG detail, ±10 mm' })).toBeTruthy();
+    expect(
+      screen.getByRole('img', {
+        name: 'CG detail, ±10 mm: estimate +6.0 mm forward, −2.0 mm right of the design CG',
+      }),
+    ).toBeTruthy();
   });
 });

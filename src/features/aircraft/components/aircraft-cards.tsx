@@ -51,7 +51,7 @@ export function AircraftCards({ aircraft }: { aircraft: Aircraft[] }) {
             <p className="num mt-1 text-xs text-ink-faint">
               {a.flightCount} flight{a.flightCount === 1 ? '' : 's'}
               {a.awaitingReview > 0 && (
-                <span className="text-accent"> · {a.awaitingReview} awaiting review</span>
+                <span className="text-accent-ink"> · {a.awaitingReview} awaiting review</span>
               )}
             </p>
           </div>

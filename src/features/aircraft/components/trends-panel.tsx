@@ -86,7 +86,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
   return (
     <div className="grid gap-5 lg:grid-cols-2">
       <section>
-        <h3 className="text-sm font-semibold text-slate-brand">Balance: deviation per motor</h3>
+        <h2 className="text-sm font-semibold text-slate-brand">Balance: deviation per motor</h2>
         <p className="text-xs text-ink-soft">
           Hover output against what the airframe predicts. A motor drifting up is working harder:
           check its bearings, prop and mounting.
@@ -94,7 +94,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
         <TrendChart ariaLabel="Balance trend" yName="%" series={charts.balance} events={events} />
       </section>
       <section>
-        <h3 className="text-sm font-semibold text-slate-brand">Vibration: band RMS above 50 Hz</h3>
+        <h2 className="text-sm font-semibold text-slate-brand">Vibration: band RMS above 50 Hz</h2>
         <p className="text-xs text-ink-soft">
           Gyro in deg/s (solid), accelerometer in its unit (dashed). Rising after a crash often
           means a bent prop or shaft.
@@ -107,7 +107,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
         />
       </section>
       <section>
-        <h3 className="text-sm font-semibold text-slate-brand">Torque split and CG</h3>
+        <h2 className="text-sm font-semibold text-slate-brand">Torque split and CG</h2>
         <TrendChart
           ariaLabel="Torque split and CG trend"
           yName="% / mm"
@@ -116,7 +116,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
         />
       </section>
       <section>
-        <h3 className="text-sm font-semibold text-slate-brand">Battery: sag and lowest cell</h3>
+        <h2 className="text-sm font-semibold text-slate-brand">Battery: sag and lowest cell</h2>
         <p className="text-xs text-ink-soft">More sag at the same load means the pack is ageing.</p>
         <TrendChart ariaLabel="Battery trend" yName="V" series={charts.battery} events={events} />
         <TrendChart

@@ -64,7 +64,7 @@ export function InviteAcceptance({
         <>
           <p className="text-sm text-ink-soft">
             Have an account?{' '}
-            <Link to={`/sign-in?next=${next}`} className="text-accent underline">
+            <Link to={`/sign-in?next=${next}`} className="text-accent-ink underline">
               Sign in first
             </Link>
             , then come back to this link. New here? Create your account:

@@ -201,7 +201,7 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
                   aria-label="Coach"
                   value={coachId}
                   onChange={(e) => setCoachId(e.target.value)}
-                  className="min-w-0 flex-1 rounded border border-line bg-paper-raised px-1 py-0.5 text-xs"
+                  className="min-w-0 flex-1 rounded border border-line-strong bg-paper-raised px-1 py-0.5 text-xs"
                 >
                   {coaches.map((c) => (
                     <option key={c.userId} value={c.userId}>

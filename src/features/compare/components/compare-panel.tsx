@@ -5,6 +5,7 @@ import { XyChart } from '../../../components/charts/xy-chart';
 import { inkSeries, motorColor } from '../../../components/charts/palette';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import { describeDifferences, describeGeometryChange } from '../model/compare-words';
+import { MotorMarker } from '../../../components/ui/motor-marker';
 
 export interface CompareFlight {
   label: string;
@@ -55,11 +56,7 @@ function Deviations({ f }: { f: CompareFlight }) {
         const frac = Math.max(-1, Math.min(1, d / 20));
         return (
           <li key={i} className="flex items-center gap-2 text-sm">
-            <span
-              aria-hidden
-              className="inline-block h-2.5 w-2.5 rounded-full"
-              style={{ background: motorColor(i + 1) }}
-            />
+            <MotorMarker motor={i + 1} />
             <span className="w-14">Motor {i + 1}</span>
             <span className="num w-8 text-xs text-ink-faint">
               {airframe?.motors[i]?.spin ?? ''}
@@ -163,7 +160,7 @@ export function ComparePanel({
         <select
           value={otherId ?? ''}
           onChange={(e) => onPick(e.target.value)}
-          className="rounded border border-line bg-paper-raised px-2 py-1"
+          className="rounded border border-line-strong bg-paper-raised px-2 py-1"
         >
           <option value="" disabled>
             pick a flight…
@@ -204,7 +201,7 @@ export function ComparePanel({
               <select
                 value={channel}
                 onChange={(e) => setChannel(e.target.value)}
-                className="rounded border border-line bg-paper-raised px-2 py-1"
+                className="rounded border border-line-strong bg-paper-raised px-2 py-1"
               >
                 {channels.map((c) => (
                   <option key={c}>{c}</option>

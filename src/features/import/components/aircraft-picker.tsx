@@ -22,7 +22,7 @@ export function AircraftPicker({ teamId, value, onChange }: AircraftPickerProps)
     <label className="flex flex-col gap-1 text-sm">
       <span className="text-ink-soft">Aircraft</span>
       <select
-        className="rounded border border-line bg-paper-raised px-2 py-1.5"
+        className="rounded border border-line-strong bg-paper-raised px-2 py-1.5"
         value={value}
         onChange={(e) =>
           onChange(e.target.value, list.find((a) => a.id === e.target.value) ?? null)

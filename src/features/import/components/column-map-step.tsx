@@ -67,7 +67,7 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
           return (
             <select
               aria-label={`Channel for ${r.header}`}
-              className="w-36 rounded border border-line bg-paper-raised px-1 py-0.5 text-sm"
+              className="w-36 rounded border border-line-strong bg-paper-raised px-1 py-0.5 text-sm"
               value={r.channel}
               onChange={(e) => {
                 const channel = e.target.value;
@@ -97,7 +97,7 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
             <div className="flex items-center gap-1">
               <select
                 aria-label={`Unit for ${r.header}`}
-                className="w-24 rounded border border-line bg-paper-raised px-1 py-0.5 text-sm disabled:opacity-40"
+                className="w-24 rounded border border-line-strong bg-paper-raised px-1 py-0.5 text-sm disabled:opacity-40"
                 value={r.unit}
                 disabled={units.length === 0}
                 onChange={(e) => update(r.index, { unit: e.target.value })}
@@ -114,14 +114,14 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
                   <input
                     aria-label={`Raw value at 0 % for ${r.header}`}
                     placeholder="0 %"
-                    className="num w-16 rounded border border-line px-1 py-0.5 text-sm"
+                    className="num w-16 rounded border border-line-strong px-1 py-0.5 text-sm"
                     value={r.min}
                     onChange={(e) => update(r.index, { min: e.target.value })}
                   />
                   <input
                     aria-label={`Raw value at 100 % for ${r.header}`}
                     placeholder="100 %"
-                    className="num w-16 rounded border border-line px-1 py-0.5 text-sm"
+                    className="num w-16 rounded border border-line-strong px-1 py-0.5 text-sm"
                     value={r.max}
                     onChange={(e) => update(r.index, { max: e.target.value })}
                   />
@@ -236,7 +236,7 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
           <input
             aria-label="Preset name"
             placeholder="e.g. Kite card export"
-            className="rounded border border-line px-2 py-1 text-sm"
+            className="rounded border border-line-strong px-2 py-1 text-sm"
             value={presetName}
             onChange={(e) => setPresetName(e.target.value)}
           />

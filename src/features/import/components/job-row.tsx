@@ -128,7 +128,7 @@ export function JobRow({ job, onCancel, onRetry, onRemove, onOpenMap }: JobRowPr
         </div>
       )}
       {status.kind === 'needs-map' && (
-        <p className="mt-1 text-sm text-accent">
+        <p className="mt-1 text-sm text-accent-ink">
           The header is not ours; confirm its columns in the column map on this page.
         </p>
       )}

@@ -11,7 +11,7 @@ function Linked({ text }: { text: string }) {
     <>
       {parts.map((part, i) =>
         /^https?:\/\//.test(part) ? (
-          <a key={i} href={toLocal(part)} className="break-all text-accent underline">
+          <a key={i} href={toLocal(part)} className="break-all text-accent-ink underline">
             {part}
           </a>
         ) : (

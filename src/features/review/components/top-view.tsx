@@ -15,6 +15,27 @@ export interface TopViewProps {
 const fmtPct = (v: number) => `${signedFixed(v)} %`;
 const BAR_FULL_PCT = 20;
 
+const motorSummary = (n: number, spin: string, dev: number, isFlagged: boolean) =>
+  `Motor ${n}, ${spin}, deviation ${Number.isFinite(dev) ? fmtPct(dev) : 'not measured'}${isFlagged ? ', named in the verdict' : ''}`;
+
+/** The image's text alternative: what it shows and the figures it shows, in reading order. */
+function topViewSummary(
+  airframe: Airframe,
+  deviationPct: readonly number[],
+  cg: { xMm: number; yMm: number } | null,
+  flagged: ReadonlySet<number>,
+): string {
+  const marked = flagged.size ? `, motor ${[...flagged].join(' and ')} marked` : '';
+  const devs = airframe.motors
+    .map((_, i) => {
+      const dev = deviationPct[i] ?? NaN;
+      return `motor ${i + 1} ${Number.isFinite(dev) ? fmtPct(dev) : 'not measured'}`;
+    })
+    .join(', ');
+  const cgText = cg ? `; estimated CG at x ${cg.xMm.toFixed(1)} mm, y ${cg.yMm.toFixed(1)} mm` : '';
+  return `Top view of ${airframe.name}: ${airframe.motors.length} motors${marked}. Deviation from expected hover output: ${devs}${cgText}`;
+}
+
 /**
  * The airframe seen from above, drawn from its geometry: nose up, right side right (FRD x
  * forward → screen up, y right → screen right). Each motor shows its spin, its deviation as a
@@ -54,7 +75,7 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
     <svg
       viewBox={`${-R} ${-R} ${2 * R} ${2 * R}`}
       role="img"
-      aria-label={`Top view of ${airframe.name}: ${airframe.motors.length} motors${flagged.size ? `, motor ${[...flagged].join(' and ')} marked` : ''}`}
+      aria-label={topViewSummary(airframe, deviationPct, cg, flagged)}
       className="h-auto w-full max-w-[26rem]"
     >
       <defs>
@@ -75,7 +96,7 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
         d={`M ${-body * 0.5} ${-body - 4} L 0 ${-body - body * 0.9} L ${body * 0.5} ${-body - 4} z`}
         fill="#1f3a4d"
       />
-      <text x={0} y={-R + font * 1.2} textAnchor="middle" fontSize={font * 0.8} fill="#7d8894">
+      <text x={0} y={-R + font * 1.2} textAnchor="middle" fontSize={font * 0.8} fill="#5c6773">
         front
       </text>
       {airframe.motors.map((m, i) => (
@@ -118,19 +139,17 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
         const p1 = [cx + ar * Math.cos(a1), cy + ar * Math.sin(a1)];
         const frac = Number.isFinite(dev) ? Math.max(-1, Math.min(1, dev / BAR_FULL_PCT)) : 0;
         return (
-          <g
-            key={`motor-${n}`}
-            data-motor={n}
-            data-flagged={isFlagged ? 'true' : 'false'}
-            aria-label={`Motor ${n}, ${m.spin}, deviation ${Number.isFinite(dev) ? fmtPct(dev) : 'not measured'}${isFlagged ? ', named in the verdict' : ''}`}
-          >
+          <g key={`motor-${n}`} data-motor={n} data-flagged={isFlagged ? 'true' : 'false'}>
+            {/* A tooltip for pointer users; inside role="img" an aria-label here is not allowed
+                and would not be read, so the image's own name carries the figures. */}
+            <title>{motorSummary(n, m.spin, dev, isFlagged)}</title>
             {isFlagged && (
               <circle
                 cx={cx}
                 cy={cy}
                 r={propR + 6}
                 fill="none"
-                stroke="#b4443c"
+                stroke="#a63c35"
                 strokeWidth={4}
                 strokeDasharray="10 6"
               />
@@ -151,7 +170,14 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
               strokeWidth={2}
               markerEnd="url(#tv-arrow)"
             />
-            <circle cx={cx} cy={cy} r={propR * 0.2} fill={motorColor(n)} />
+            <circle
+              cx={cx}
+              cy={cy}
+              r={propR * 0.2}
+              fill={motorColor(n)}
+              stroke="#1c2733"
+              strokeWidth={1.5}
+            />
             <text
               x={cx}
               y={cy + font * 0.35}
@@ -170,7 +196,7 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
               textAnchor="middle"
               fontSize={font * 0.9}
               className="num"
-              fill={isFlagged ? '#b4443c' : '#1c2733'}
+              fill={isFlagged ? '#a63c35' : '#1c2733'}
               fontWeight={isFlagged ? 700 : 500}
             >
               {label.text}
@@ -187,7 +213,7 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
               y={ly + font * 0.3}
               width={(Math.abs(frac) * barW) / 2}
               height={font * 0.3}
-              fill={isFlagged ? '#b4443c' : motorColor(n)}
+              fill={isFlagged ? '#a63c35' : motorColor(n)}
             />
             <line
               x1={lx}
@@ -208,10 +234,12 @@ export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
         fill="none"
         stroke="#f7f5f0"
         strokeWidth={2}
-        aria-label="Design CG"
-      />
+      >
+        <title>Design CG</title>
+      </circle>
       {cg && (
-        <g aria-label={`Estimated CG at x ${cg.xMm.toFixed(1)} mm, y ${cg.yMm.toFixed(1)} mm`}>
+        <g>
+          <title>{`Estimated CG at x ${cg.xMm.toFixed(1)} mm, y ${cg.yMm.toFixed(1)} mm`}</title>
           <line
             x1={sx({ x: cg.xMm, y: cg.yMm }) - body * 0.5}
             x2={sx({ x: cg.xMm, y: cg.yMm }) + body * 0.5}
@@ -255,7 +283,7 @@ export function CgDetail({
     <svg
       viewBox={`${-span * 1.15} ${-span * 1.15} ${span * 2.3} ${span * 2.3}`}
       role="img"
-      aria-label={`CG detail, ±${span} mm`}
+      aria-label={`CG detail, ±${span} mm: estimate ${signedFixed(cg.xMm - design.x)} mm forward, ${signedFixed(cg.yMm - design.y)} mm right of the design CG`}
       className="h-40 w-40"
     >
       {ticks.map((v) => (
@@ -292,7 +320,7 @@ export function CgDetail({
         <line x1={dx - span * 0.1} x2={dx + span * 0.1} y1={dy} y2={dy} />
         <line x1={dx} x2={dx} y1={dy - span * 0.1} y2={dy + span * 0.1} />
       </g>
-      <text x={-span} y={-span * 1.03} fontSize={span / 8} fill="#7d8894">
+      <text x={-span} y={-span * 1.03} fontSize={span / 8} fill="#5c6773">
         ±{span} mm · front ↑
       </text>
     </svg>

@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
 import type { Finding } from '../../../../shared/schemas/report';
-import { motorColor } from '../../../components/charts/palette';
 import { rankFindings, sectionForFinding, sections } from '../model/sections';
 import { SeverityBadge } from './severity-badge';
+import { MotorMarker } from '../../../components/ui/motor-marker';
 
 export interface VerdictListProps {
   flightId: string;
@@ -54,11 +54,7 @@ export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictLis
                   <p className="text-sm text-ink">
                     {f.motor !== undefined && (
                       <span className="mr-1.5 inline-flex items-center gap-1 font-medium">
-                        <span
-                          aria-hidden
-                          className="inline-block h-2.5 w-2.5 rounded-full"
-                          style={{ background: motorColor(f.motor) }}
-                        />
+                        <MotorMarker motor={f.motor} />
                         {named ? (
                           <span className="sr-only">Motor {f.motor}</span>
                         ) : (

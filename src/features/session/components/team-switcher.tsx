@@ -7,7 +7,7 @@ export function TeamSwitcher() {
   const { team, teams, select } = useActiveTeam();
   if (teams.length === 0)
     return (
-      <Link to="/teams/new" className="text-xs text-accent underline">
+      <Link to="/teams/new" className="text-xs text-accent-ink underline">
         Create a team
       </Link>
     );
@@ -18,7 +18,7 @@ export function TeamSwitcher() {
         aria-label="Team"
         value={team?.id}
         onChange={(e) => select(e.target.value)}
-        className="max-w-48 rounded border border-line bg-paper-raised px-2 py-1 text-xs text-ink"
+        className="max-w-48 rounded border border-line-strong bg-paper-raised px-2 py-1 text-xs text-ink"
       >
         {teams.map((t) => (
           <option key={t.id} value={t.id}>

@@ -65,7 +65,9 @@ export function LocalFlightsPanel({
             </Link>
             <span className="text-xs text-ink-faint">{f.report.airframe.name}</span>
             <span
-              className={'text-xs ' + (f.syncState === 'failed' ? 'text-sev-act' : 'text-accent')}
+              className={
+                'text-xs ' + (f.syncState === 'failed' ? 'text-sev-act' : 'text-accent-ink')
+              }
             >
               {stateText(f)}
             </span>
@@ -73,7 +75,7 @@ export function LocalFlightsPanel({
             {!f.aircraftId && canUpload && aircraft.length > 0 && (
               <select
                 aria-label={`Aircraft for ${f.fileName}`}
-                className="ml-auto rounded border border-line bg-paper-raised px-2 py-0.5 text-xs"
+                className="ml-auto rounded border border-line-strong bg-paper-raised px-2 py-0.5 text-xs"
                 defaultValue=""
                 onChange={(e) => {
                   if (e.target.value)

@@ -162,6 +162,6 @@ function InviteStateNote({ invite: i }: { invite: Invite }) {
     case 'expired':
       return <span className="text-ink-faint">expired {day(i.expiresAt)}</span>;
     case 'open':
-      return <span className="text-accent">open until {day(i.expiresAt)}</span>;
+      return <span className="text-accent-ink">open until {day(i.expiresAt)}</span>;
   }
 }

@@ -4,6 +4,7 @@ import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { motorColor } from '../../../../components/charts/palette';
 import { CgDetail, TopView } from '../top-view';
 import { signedFixed } from '../../model/format';
+import { MotorMarker } from '../../../../components/ui/motor-marker';
 
 export interface BalanceSectionProps {
   report: FlightReport;
@@ -87,11 +88,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
                 >
                   <td className="py-1 pr-3">
                     <span className="inline-flex items-center gap-1.5">
-                      <span
-                        aria-hidden
-                        className="inline-block h-2.5 w-2.5 rounded-full"
-                        style={{ background: motorColor(n) }}
-                      />
+                      <MotorMarker motor={n} />
                       {n}
                     </span>
                   </td>

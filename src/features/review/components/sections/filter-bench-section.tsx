@@ -102,7 +102,7 @@ export function FilterBenchSection({
           <select
             value={channel}
             onChange={(e) => setChannel(e.target.value)}
-            className="rounded border border-line bg-paper-raised px-2 py-1"
+            className="rounded border border-line-strong bg-paper-raised px-2 py-1"
           >
             {gyros.map((g) => (
               <option key={g}>{g}</option>
@@ -137,7 +137,7 @@ export function FilterBenchSection({
               aria-label={`Stage ${i + 1} kind`}
               value={s.kind}
               onChange={(e) => set(i, { kind: e.target.value as FilterStage['kind'] })}
-              className="rounded border border-line bg-paper-raised px-1 py-0.5"
+              className="rounded border border-line-strong bg-paper-raised px-1 py-0.5"
             >
               {(Object.keys(kindLabel) as FilterStage['kind'][]).map((k) => (
                 <option key={k} value={k}>
@@ -148,7 +148,7 @@ export function FilterBenchSection({
             <label className="flex items-center gap-1">
               <input
                 aria-label={`Stage ${i + 1} frequency, Hz`}
-                className="num w-20 rounded border border-line px-1 py-0.5"
+                className="num w-20 rounded border border-line-strong px-1 py-0.5"
                 value={s.hz}
                 onChange={(e) => set(i, { hz: e.target.value })}
               />
@@ -159,7 +159,7 @@ export function FilterBenchSection({
                 Q
                 <input
                   aria-label={`Stage ${i + 1} Q`}
-                  className="num w-16 rounded border border-line px-1 py-0.5"
+                  className="num w-16 rounded border border-line-strong px-1 py-0.5"
                   value={s.q}
                   onChange={(e) => set(i, { q: e.target.value })}
                 />

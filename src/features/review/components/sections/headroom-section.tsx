@@ -4,8 +4,8 @@ import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { Trace } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { TimeChart } from '../../../../components/charts/time-chart';
-import { motorColor } from '../../../../components/charts/palette';
 import { motorSeries, type TimeContext } from './time-context';
+import { MotorMarker } from '../../../../components/ui/motor-marker';
 
 export function HeadroomSection({
   report,
@@ -63,11 +63,7 @@ export function HeadroomSection({
                 onClick={() => time.onCursor(e.t0)}
                 className="num inline-flex items-center gap-1 rounded border border-line px-2 py-0.5 hover:bg-paper-sunk"
               >
-                <span
-                  aria-hidden
-                  className="inline-block h-2 w-2 rounded-full"
-                  style={{ background: motorColor(e.motor) }}
-                />
+                <MotorMarker motor={e.motor} />
                 motor {e.motor} · {e.t0.toFixed(2)}–{e.t1.toFixed(2)} s
               </button>
             </li>

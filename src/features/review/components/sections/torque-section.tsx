@@ -4,8 +4,9 @@ import type { Trace } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { expectedHoverShares } from '../../../../../shared/airframe/allocation';
 import { TimeChart } from '../../../../components/charts/time-chart';
-import { inkSeries, motorColor } from '../../../../components/charts/palette';
+import { inkSeries } from '../../../../components/charts/palette';
 import { followReviewTime, type TimeContext } from './time-context';
+import { MotorMarker } from '../../../../components/ui/motor-marker';
 
 const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
 
@@ -42,11 +43,7 @@ export function TorqueSection({
     .filter((x) => x.m.spin === 'ccw');
   const chip = (n: number) => (
     <span key={n} className="inline-flex items-center gap-1">
-      <span
-        aria-hidden
-        className="inline-block h-2 w-2 rounded-full"
-        style={{ background: motorColor(n) }}
-      />
+      <MotorMarker motor={n} />
       {n}
     </span>
   );

@@ -3,7 +3,7 @@ import type { FlightReport, PeakLabel } from '../../../../../shared/schemas/repo
 import type { ReviewDetail } from '../../../../../shared/analysis/review-detail';
 import { XyChart, type XySeries } from '../../../../components/charts/xy-chart';
 import { HeatmapChart } from '../../../../components/charts/heatmap-chart';
-import { motorColor } from '../../../../components/charts/palette';
+import { MotorMarker } from '../../../../components/ui/motor-marker';
 
 const axisColour = ['#1f3a4d', '#8a5a2b', '#6b4c7a'];
 
@@ -48,7 +48,7 @@ export function VibrationSection({
         label:
           o.label === 'rotor-1x' ? 'rotor 1×' : o.label === 'rotor-2x' ? 'rotor 2×' : 'blade pass',
         points: o.points,
-        color: o.label === 'rotor-1x' ? '#c7771a' : o.label === 'rotor-2x' ? '#b4443c' : '#f7f5f0',
+        color: o.label === 'rotor-1x' ? '#c7771a' : o.label === 'rotor-2x' ? '#a63c35' : '#f7f5f0',
       })) ?? [],
     [camp],
   );
@@ -125,11 +125,7 @@ export function VibrationSection({
               <td className="py-1 pl-4 text-ink-soft">
                 {p.motor !== undefined && (
                   <span className="mr-1 inline-flex items-center gap-1">
-                    <span
-                      aria-hidden
-                      className="inline-block h-2 w-2 rounded-full"
-                      style={{ background: motorColor(p.motor) }}
-                    />
+                    <MotorMarker motor={p.motor} />
                     motor {p.motor},
                   </span>
                 )}

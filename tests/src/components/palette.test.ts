@@ -1,0 +1,98 @@
+import { describe, expect, it } from 'vitest';
+import { palette } from '../../../src/components/ui/palette';
+
+/**
+ * WCAG 2.1, "relative luminance" and "contrast ratio" (definitions used by success criteria
+ * 1.4.3 Contrast (Minimum) and 1.4.11 Non-text Contrast): sRGB channels linearised with the
+ * 0.03928 knee (W3C has since noted 0.04045 is the sRGB figure; no 8-bit value lies between
+ * them), L = 0.2126 R + 0.7152 G + 0.0722 B, ratio = (L1 + 0.05) / (L2 + 0.05).
+ */
+function channel(c8: number): number {
+  const c = c8 / 255;
+  return c <= 0.03928 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+}
+function rgb(hex: string): [number, number, number] {
+  const m = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(hex);
+  if (!m) throw new Error(`not a #rrggbb colour: ${hex}`);
+  return [parseInt(m[1]!, 16), parseInt(m[2]!, 16), parseInt(m[3]!, 16)];
+}
+function luminance([r, g, b]: [number, number, number]): number {
+  return 0.2126 * channel(r) + 0.7152 * channel(g) + 0.0722 * channel(b);
+}
+function contrast(a: string, b: string): number {
+  const [hi, lo] = [luminance(rgb(a)), luminance(rgb(b))].sort((x, y) => y - x) as [number, number];
+  return (hi + 0.05) / (lo + 0.05);
+}
+/** A colour laid over a background at an opacity, as Tailwind's `bg-x/15` paints it. */
+function over(fg: string, alpha: number, bg: string): string {
+  const f = rgb(fg);
+  const b = rgb(bg);
+  return (
+    '#' +
+    f
+      .map((c, i) =>
+        Math.round(c * alpha + b[i]! * (1 - alpha))
+          .toString(16)
+          .padStart(2, '0'),
+      )
+      .join('')
+  );
+}
+
+const papers = {
+  paper: palette.paper.DEFAULT,
+  raised: palette.paper.raised,
+  sunk: palette.paper.sunk,
+  'accent soft': palette.accent.soft,
+};
+
+describe('contrast formula', () => {
+  it('matches the end points and a known grey', () => {
+    // WCAG 2.1 §1.4.3 understanding: ratios run from 1:1 to 21:1 (black on white).
+    expect(contrast('#000000', '#ffffff')).toBeCloseTo(21, 6);
+    expect(contrast('#777777', '#777777')).toBe(1);
+    // From memory: #767676 is the lightest grey that passes 4.5:1 on white (4.54:1), #777777
+    // just fails (4.48:1).
+    expect(contrast('#767676', '#ffffff')).toBeCloseTo(4.54, 2);
+    expect(contrast('#777777', '#ffffff')).toBeCloseTo(4.48, 2);
+  });
+});
+
+describe('palette meets WCAG 2.1 AA', () => {
+  const text = {
+    ink: palette.ink.DEFAULT,
+    'ink soft': palette.ink.soft,
+    'ink faint': palette.ink.faint,
+    'slate brand': palette.slate.brand,
+    'accent ink': palette.accent.ink,
+    note: palette.sev.note,
+    watch: palette.sev.watch,
+    act: palette.sev.act,
+    ok: palette.ok,
+  };
+  for (const [fg, fgHex] of Object.entries(text))
+    for (const [bg, bgHex] of Object.entries(papers))
+      it(`${fg} text on ${bg} reads at 4.5:1 or more (§1.4.3)`, () => {
+        expect(contrast(fgHex, bgHex)).toBeGreaterThanOrEqual(4.5);
+      });
+
+  it('filled severity chips and the primary button keep paper text at 4.5:1 (§1.4.3)', () => {
+    for (const fill of [palette.sev.act, palette.sev.watch, palette.slate.brand, palette.ink.faint])
+      expect(contrast(palette.paper.DEFAULT, fill), fill).toBeGreaterThanOrEqual(4.5);
+  });
+
+  it('the tinted note chip keeps its text at 4.5:1 on every paper (§1.4.3)', () => {
+    for (const bg of Object.values(papers))
+      expect(
+        contrast(palette.sev.note, over(palette.sev.note, 0.15, bg)),
+        bg,
+      ).toBeGreaterThanOrEqual(4.5);
+  });
+
+  it('control borders and the amber accent mark read at 3:1 on paper and white (§1.4.11)', () => {
+    for (const bg of [palette.paper.DEFAULT, palette.paper.raised, palette.paper.sunk])
+      expect(contrast(palette.line.strong, bg), bg).toBeGreaterThanOrEqual(3);
+    for (const bg of [palette.paper.DEFAULT, palette.paper.raised])
+      expect(contrast(palette.accent.DEFAULT, bg), bg).toBeGreaterThanOrEqual(3);
+  });
+});
