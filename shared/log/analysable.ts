@@ -21,9 +21,11 @@ export function whyNotAnalysable(log: ParsedLog): LogFormatError | null {
   }
   if (log.sampleRateHz > 0) return null;
   const time = log.columns.time;
-  const first = time ? time[0]! : NaN;
-  const last = time ? time[log.rows - 1]! : NaN;
-  const allSame = time !== undefined && time.every((t) => t === first);
+  // As the logger wrote them: the reader starts time at 0.
+  const start = log.timeStartS ?? 0;
+  const first = time ? time[0]! + start : NaN;
+  const last = time ? time[log.rows - 1]! + start : NaN;
+  const allSame = time !== undefined && time.every((t) => t === time[0]);
   const said = allSame
     ? `time reads ${first} s on every sample from line ${lines.first} to line ${lines.last}`
     : `time does not move forward from one sample to the next in most of the log (${first} s at line ${lines.first}, ${last} s at line ${lines.last})`;

@@ -61,6 +61,9 @@ export interface ProposedColumn {
   channel: string | null;
   /** Suggested unit, or null when the header does not say (the person picks one). */
   unit: Unit | null;
+  /** Raw value at 0 % and at 100 %, when the unit is 'raw'. */
+  min?: number;
+  max?: number;
   /** Why, in plain words, for the person confirming it. */
   reason: string;
 }
@@ -72,22 +75,43 @@ export interface ProposedColumnMap {
   missing: string[];
 }
 
-/** Splits a header into its name and `[unit]` (brackets or parentheses). */
+/**
+ * Splits a header into its name and `[unit]` (brackets or parentheses). A number in brackets
+ * is an index, part of the name: `esc_out[0]` is the first of a set, `rpm[2] [erpm]` the third
+ * in eRPM.
+ */
 export function splitHeader(header: string): { name: string; unit: string | null } {
   const m = /^(.*?)\s*[[(]\s*([^\])]*?)\s*[\])]\s*$/.exec(header.trim());
-  if (m && m[1] !== undefined && m[1] !== '') return { name: m[1].trim(), unit: m[2] ?? '' };
+  if (m && m[1] !== undefined && m[1] !== '' && !/^[0-9]+$/.test(m[2] ?? ''))
+    return { name: m[1].trim(), unit: m[2] ?? '' };
   return { name: header.trim(), unit: null };
 }
 
-/** The confirmed part of a proposal as a column map (entries with a channel and a unit). */
+/**
+ * The confirmed part of a proposal as a column map: entries with a channel and a unit (and, for
+ * 'raw', its range).
+ */
 export function proposalToColumnMap(proposal: ProposedColumnMap): ColumnMap {
   const columns: ColumnMap['columns'] = {};
   for (const e of proposal.entries) {
-    if (e.channel !== null && e.unit !== null && e.unit !== 'raw') {
-      columns[e.header] = { channel: e.channel, unit: e.unit };
-    }
+    if (e.channel === null || e.unit === null) continue;
+    if (e.unit !== 'raw') columns[e.header] = { channel: e.channel, unit: e.unit };
+    else if (e.min !== undefined && e.max !== undefined)
+      columns[e.header] = { channel: e.channel, unit: 'raw', min: e.min, max: e.max };
   }
   return { columns };
+}
+
+/** A cell's number as the reader would take it (a decimal comma when `;` or tab delimits). */
+export function cellNumber(text: string | undefined, delimiter = ','): number {
+  if (text === undefined) return NaN;
+  let t = text
+    .trim()
+    .replace(/^"(.*)"$/, '$1')
+    .trim();
+  if (t === '') return NaN;
+  if (delimiter !== ',') t = t.replace(',', '.');
+  return Number(t);
 }
 
 /** Reads a header written in our canonical form ('gyro_x [rad/s]'), or null. */

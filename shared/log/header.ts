@@ -66,7 +66,7 @@ export function inspectHeader(firstBytes: Uint8Array): HeaderPreview {
     metadata: pre.metadata,
     headerLine: pre.headerLine,
     canonical,
-    proposal: proposeColumnMap(pre.headers, sampleRows),
+    proposal: proposeColumnMap(pre.headers, sampleRows, pre.delimiter),
     sampleRows,
   };
 }

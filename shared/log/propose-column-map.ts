@@ -1,5 +1,10 @@
 import { channelFamily, type Unit } from './channels';
-import { canonicalReading, type ProposedColumn, type ProposedColumnMap } from './column-map';
+import {
+  canonicalReading,
+  cellNumber,
+  type ProposedColumn,
+  type ProposedColumnMap,
+} from './column-map';
 import { guessFamily, numberedSet, parseWords } from './header-words';
 import { unitFromValues } from './unit-from-values';
 
@@ -10,12 +15,14 @@ const axisNames: Record<string, readonly string[]> = {
 };
 
 /**
- * Suggests a column map from the words and units in the headers, for a person to confirm.
- * It never applies itself: the reader only uses a map it is given.
+ * Suggests a column map from the words and units in the headers, and units from the first
+ * rows' values (cells split by `delimiter`) where a header names none, for a person to
+ * confirm. It never applies itself: the reader only uses a map it is given.
  */
 export function proposeColumnMap(
   headers: string[],
   sampleRows: string[][] = [],
+  delimiter = ',',
 ): ProposedColumnMap {
   const parsed = headers.map(parseWords);
   const guesses = parsed.map((p) => guessFamily(p.words));
@@ -110,15 +117,31 @@ export function proposeColumnMap(
       reason: `the word "${g.clue}" suggests ${channel}${shifted}; ${unitReason}`,
     };
   });
+  const fromValues = new Map<string, Unit>();
   entries.forEach((e, i) => {
     if (e.channel === null || e.unit !== null || sampleRows.length === 0) return;
-    const values = sampleRows.map((r) => Number(r[i])).filter((v) => Number.isFinite(v));
+    const values = sampleRows.map((r) => cellNumber(r[i], delimiter));
     const guess = unitFromValues(e.channel, values);
     if (guess) {
       e.unit = guess.unit;
+      if (guess.unit === 'raw') Object.assign(e, { min: guess.min, max: guess.max });
       e.reason = e.reason.replace('no unit in the header: check it', `${guess.why}: check it`);
+      fromValues.set(e.channel, guess.unit);
     }
   });
+  // The axes of one sensor share a unit: an accelerometer's x and y read near 0 at rest and
+  // say nothing, while its z reads near 1 g or 9.8 m/s².
+  for (const e of entries) {
+    if (e.channel === null || e.unit !== null) continue;
+    const axes = Object.values(axisNames).find((a) => a.includes(e.channel!));
+    const sibling = axes?.find((a) => fromValues.has(a));
+    if (!sibling) continue;
+    e.unit = fromValues.get(sibling)!;
+    e.reason = e.reason.replace(
+      'no unit in the header: check it',
+      `same unit as ${sibling}, read from its values: check it`,
+    );
+  }
   const mapped = new Set(entries.map((e) => e.channel).filter((c): c is string => c !== null));
   const missing: string[] = [];
   if (!mapped.has('time')) missing.push('time');

@@ -3,7 +3,7 @@ import { describePlace, LogFormatError } from './errors';
 import { readPreamble, type Delimiter, type Preamble } from './preamble';
 import { resolveColumns, type ColumnPlan, type ReadOptions } from './resolve-columns';
 import { analyseTimeBase } from './time-base';
-import { checkAssumedUnits } from './unit-checks';
+import { checkUnits } from './unit-checks';
 import type { Column, LogWarning, ParsedLog } from './types';
 import { decodeUtf8 } from './utf8';
 
@@ -705,11 +705,12 @@ export class LogReader {
         line: this.firstCommentLine,
       });
     }
+    // The review reads time from the first sample; where the logger's clock started is kept.
+    const timeStartS = time[0]!;
+    if (timeStartS !== 0) for (let r = 0; r < rows; r++) time[r] = time[r]! - timeStartS;
     const tb = analyseTimeBase(time, (r) => this.lineOfRow(r));
     warnings.push(...tb.warnings);
-    warnings.push(
-      ...checkAssumedUnits(this.plans, columns, tb.timeBase.medianStepS, pre.headerLine),
-    );
+    warnings.push(...checkUnits(this.plans, columns, pre.headerLine));
     return {
       channels,
       columns,
@@ -722,6 +723,7 @@ export class LogReader {
       emptyCells,
       timeBase: tb.timeBase,
       headerLine: pre.headerLine,
+      timeStartS,
       sourceColumns,
       sampleLines: { first: this.lineOfRow(0), last: this.lineOfRow(rows - 1) },
       delimiter: pre.delimiter as Delimiter,

@@ -61,6 +61,11 @@ export interface ParsedLog {
   timeBase?: TimeBase;
   /** 1-based line of the header row. */
   headerLine?: number;
+  /**
+   * The first sample's time as the logger wrote it, s. `time` itself starts at 0: the reader
+   * subtracts this, so a flight reads from 0 s whatever the logger's clock said.
+   */
+  timeStartS?: number;
   /** Where each channel was read from: 1-based column and its header as written. */
   sourceColumns?: Record<string, { column: number; header: string }>;
   /** 1-based file lines of the first and last samples. */

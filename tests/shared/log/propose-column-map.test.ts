@@ -130,3 +130,77 @@ describe('units suggested by the first values', () => {
     expect(p.entries.map((e) => e.unit)).toEqual([null, null]);
   });
 });
+
+describe('indexed headers and units from values', () => {
+  it('reads name[0]-style headers as a set numbered from 0', () => {
+    const p = proposeColumnMap(
+      [
+        'time',
+        'esc_out[0]',
+        'esc_out[1]',
+        'esc_out[2]',
+        'esc_out[3]',
+        'rpm[0] [erpm]',
+        'rpm[1] [erpm]',
+      ],
+      [
+        ['0', '1000', '1100', '1200', '1300', '7000', '7100'],
+        ['0.001', '1010', '1110', '1210', '1310', '7000', '7100'],
+      ],
+    );
+    expect(p.entries.map((e) => e.channel)).toEqual([
+      'time',
+      'motor1',
+      'motor2',
+      'motor3',
+      'motor4',
+      'rpm1',
+      'rpm2',
+    ]);
+    expect(p.entries.map((e) => e.unit)).toEqual(['s', 'us', 'us', 'us', 'us', 'erpm', 'erpm']);
+    expect(p.entries[1]!.reason).toMatch(/numbered from 0 in the file/);
+    expect(p.missing).toEqual([]);
+  });
+
+  it('proposes the digital command range and carries it into the column map', () => {
+    const p = proposeColumnMap(
+      ['t_ms', 'out1'],
+      [
+        ['0', '48'],
+        ['2', '1400'],
+        ['4', '2047'],
+      ],
+    );
+    expect(p.entries[1]).toMatchObject({ channel: 'motor1', unit: 'raw', min: 48, max: 2047 });
+    expect(proposalToColumnMap(p).columns.out1).toEqual({
+      channel: 'motor1',
+      unit: 'raw',
+      min: 48,
+      max: 2047,
+    });
+  });
+
+  it('gives the accelerometer axes the unit its vertical axis shows at rest (±9.8 → m/s²)', () => {
+    const p = proposeColumnMap(
+      ['time', 'motor1', 'accX', 'accY', 'accZ'],
+      [
+        ['0', '0.1', '0.12', '-0.05', '-9.79'],
+        ['0.001', '0.1', '0.08', '-0.02', '-9.83'],
+      ],
+    );
+    expect(p.entries.slice(2).map((e) => e.unit)).toEqual(['m/s2', 'm/s2', 'm/s2']);
+    expect(p.entries[2]!.reason).toMatch(/same unit as acc_z/);
+  });
+
+  it('reads a decimal comma in the first rows when semicolons delimit', () => {
+    const p = proposeColumnMap(
+      ['elapsed', 'Thr'],
+      [
+        ['0,000', '0,31'],
+        ['0,004', '0,35'],
+      ],
+      ';',
+    );
+    expect(p.entries.map((e) => e.unit)).toEqual(['s', 'frac']);
+  });
+});

@@ -32,3 +32,36 @@ describe('assumed units that do not fit the values', () => {
     );
   });
 });
+
+describe('units written in the header or a column map that do not fit the values', () => {
+  it('warns about µs motor outputs mapped as fractions, offering µs', () => {
+    const text = 'stamp,out_a\n0,1000\n0.002,1450\n0.004,1990\n';
+    const log = parseLog(enc(text), {
+      columnMap: {
+        columns: { stamp: { channel: 'time' }, out_a: { channel: 'motor1', unit: 'frac' } },
+      },
+    });
+    const w = log.warnings.filter((x) => x.code === 'unit-suspect');
+    expect(w.map((x) => x.message)).toEqual([
+      expect.stringMatching(
+        /^motor1 \("out_a"\) is read as a 0–1 fraction, but it reaches 1990.*read it as a 1000–2000 µs pulse instead\.$/,
+      ),
+    ]);
+  });
+
+  it('warns about an accelerometer header in g that reads near −9.8', () => {
+    const [m] = suspects('time,motor1,acc_z [g]\n0,0.5,-9.81\n0.001,0.5,-9.79\n');
+    expect(m).toMatch(/acc_z \("acc_z \[g\]"\) is read as g, but it reads near 9\.8.*m\/s²/);
+  });
+});
+
+describe('time from zero', () => {
+  it('starts time at 0 and keeps where the logger clock started', () => {
+    const log = parseLog(enc('time [ms],motor1\n81250,0.5\n81254,0.5\n81258,0.5\n'));
+    expect(Array.from(log.columns.time!)).toEqual(
+      [0, 0.004, 0.008].map((v) => expect.closeTo(v, 12)),
+    );
+    expect(log.timeStartS).toBeCloseTo(81.25, 12);
+    expect(log.durationS).toBeCloseTo(0.008, 12);
+  });
+});
