@@ -4,9 +4,10 @@ import { LessThan } from 'typeorm';
 import { createApp } from './app';
 import { Session } from './auth/session.entity';
 import { ConfigError, loadConfig, type Config } from './config';
-import { openDatabase } from './db/data-source';
+import { engineOf, openDatabase } from './db/data-source';
 import { createLogger } from './http/logger';
 import { startMailer } from './mail/mailer';
+import { createServices } from './services';
 
 export interface RunningServer {
   url: string;
@@ -20,7 +21,8 @@ export async function startServer(config: Config): Promise<RunningServer> {
   if (applied.length > 0) logger.info({ applied }, 'database migrated');
 
   const mailer = await startMailer(config.mail, logger);
-  const app = createApp({ dataSource, config, logger, mailer });
+  const services = createServices(dataSource, config, mailer);
+  const app = createApp({ dataSource, config, logger, mailer, services });
   const server = app.listen(config.port, config.host);
   await new Promise<void>((resolveListen, rejectListen) => {
     server.once('listening', resolveListen);
@@ -28,9 +30,20 @@ export async function startServer(config: Config): Promise<RunningServer> {
   });
   const { port } = server.address() as AddressInfo;
   const url = `http://localhost:${port}`;
-  logger.info({ url, dbPath: config.dbPath, env: config.env }, `Hoverprint listening on ${url}`);
+  const engine = engineOf(config);
+  logger.info(
+    {
+      url,
+      env: config.env,
+      database: engine === 'sqlite' ? config.dbPath : 'postgres',
+      rawStore: config.s3 ? `s3://${config.s3.bucket}` : 'disk',
+      rateLimits: config.redisUrl ? 'redis' : 'memory',
+    },
+    `Hoverprint listening on ${url}`,
+  );
 
-  // Lucia leaves expired sessions in the table; sweep them hourly.
+  // Lucia leaves expired sessions in the table; sweep them hourly. With several processes on
+  // one database each sweeps: the DELETE is idempotent, so running it twice is harmless.
   const sweep = setInterval(() => {
     dataSource
       .getRepository(Session)
@@ -48,6 +61,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         server.closeIdleConnections();
       });
       await mailer.close();
+      await services.rateLimits.close();
       if (dataSource.isInitialized) await dataSource.destroy();
     })());
   return { url, close };

@@ -1,11 +1,12 @@
-import { join } from 'node:path';
 import type { DataSource } from 'typeorm';
 import { AuthService } from './auth/auth.service';
 import { CommentsService } from './comments/comments.service';
 import type { Config } from './config';
 import { FleetService } from './fleet/fleet.service';
 import { FlightsService } from './flights/flights.service';
-import { DiskRawStore, type RawStore } from './flights/raw-store';
+import { openRawStore } from './flights/open-raw-store';
+import type { RawStore } from './flights/raw-store';
+import { createRateLimitStores, type RateLimitStores } from './http/rate-limit-store';
 import type { Mailer } from './mail/mailer';
 import { PresetsService } from './presets/presets.service';
 import { TeamsService } from './teams/teams.service';
@@ -20,6 +21,8 @@ export interface Services {
   comments: CommentsService;
   presets: PresetsService;
   mailer: Mailer;
+  /** Counters of every rate limiter (Redis when REDIS_URL is set). */
+  rateLimits: RateLimitStores;
 }
 
 /**
@@ -30,7 +33,7 @@ export function createServices(
   dataSource: DataSource,
   config: Config,
   mailer: Mailer,
-  rawStore: RawStore = new DiskRawStore(join(config.dataDir, 'raw')),
+  rawStore: RawStore = openRawStore(config),
 ): Services {
   const teams = new TeamsService(dataSource, config, mailer);
   const flights = new FlightsService(dataSource, config, teams, mailer, rawStore);
@@ -43,5 +46,6 @@ export function createServices(
     comments: new CommentsService(dataSource, config, flights, mailer),
     presets: new PresetsService(dataSource, teams),
     mailer,
+    rateLimits: createRateLimitStores(config),
   };
 }

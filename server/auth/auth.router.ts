@@ -15,25 +15,33 @@ import { authRateLimit } from '../http/rate-limit';
 import { requireUser, setSessionCookie } from '../http/session';
 import type { Services } from '../services';
 
-export function authRouter({ auth, teams }: Services, config: Config) {
+export function authRouter({ auth, teams, rateLimits }: Services, config: Config) {
   const router = Router();
   const me = async (userId: string): Promise<MeResponse> => ({ user: await auth.me(userId) });
 
-  router.post(paths.signUp, authRateLimit(config), async (req, res) => {
-    const input = SignUpInput.parse(req.body);
-    // Check the invite before creating the account, so a bad link does not leave a half-done sign-up.
-    if (input.inviteToken) await teams.previewInvite(input.inviteToken);
-    const userId = await auth.signUp(input);
-    if (input.inviteToken) await teams.acceptInvite(userId, input.inviteToken);
-    setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
-    res.status(201).json(await me(userId));
-  });
+  router.post(
+    paths.signUp,
+    authRateLimit(config, rateLimits.store('sign-up')),
+    async (req, res) => {
+      const input = SignUpInput.parse(req.body);
+      // Check the invite before creating the account, so a bad link does not leave a half-done sign-up.
+      if (input.inviteToken) await teams.previewInvite(input.inviteToken);
+      const userId = await auth.signUp(input);
+      if (input.inviteToken) await teams.acceptInvite(userId, input.inviteToken);
+      setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
+      res.status(201).json(await me(userId));
+    },
+  );
 
-  router.post(paths.signIn, authRateLimit(config), async (req, res) => {
-    const userId = await auth.signIn(SignInInput.parse(req.body));
-    setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
-    res.json(await me(userId));
-  });
+  router.post(
+    paths.signIn,
+    authRateLimit(config, rateLimits.store('sign-in')),
+    async (req, res) => {
+      const userId = await auth.signIn(SignInInput.parse(req.body));
+      setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
+      res.json(await me(userId));
+    },
+  );
 
   router.post(paths.signOut, async (req, res) => {
     if (req.auth) await auth.signOut(req.auth.session.id);
@@ -54,27 +62,39 @@ export function authRouter({ auth, teams }: Services, config: Config) {
   });
 
   /** Changing the password ends every session, then signs this device back in. */
-  router.post(paths.password, authRateLimit(config), async (req, res) => {
-    const user = requireUser(req);
-    await auth.changePassword(user.id, ChangePasswordInput.parse(req.body));
-    setSessionCookie(auth.lucia, req, res, await auth.createSession(user.id));
-    res.json(await me(user.id));
-  });
+  router.post(
+    paths.password,
+    authRateLimit(config, rateLimits.store('password')),
+    async (req, res) => {
+      const user = requireUser(req);
+      await auth.changePassword(user.id, ChangePasswordInput.parse(req.body));
+      setSessionCookie(auth.lucia, req, res, await auth.createSession(user.id));
+      res.json(await me(user.id));
+    },
+  );
 
-  router.post(paths.resetRequest, authRateLimit(config), async (req, res) => {
-    await auth.requestReset(ResetRequestInput.parse(req.body).email);
-    const body: OkResponse = {
-      ok: true,
-      message: 'If an account uses this address, a reset link is on its way.',
-    };
-    res.status(202).json(body);
-  });
+  router.post(
+    paths.resetRequest,
+    authRateLimit(config, rateLimits.store('reset-request')),
+    async (req, res) => {
+      await auth.requestReset(ResetRequestInput.parse(req.body).email);
+      const body: OkResponse = {
+        ok: true,
+        message: 'If an account uses this address, a reset link is on its way.',
+      };
+      res.status(202).json(body);
+    },
+  );
 
-  router.post(paths.resetConfirm, authRateLimit(config), async (req, res) => {
-    const userId = await auth.confirmReset(ResetConfirmInput.parse(req.body));
-    setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
-    res.json(await me(userId));
-  });
+  router.post(
+    paths.resetConfirm,
+    authRateLimit(config, rateLimits.store('reset-confirm')),
+    async (req, res) => {
+      const userId = await auth.confirmReset(ResetConfirmInput.parse(req.body));
+      setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
+      res.json(await me(userId));
+    },
+  );
 
   return router;
 }

@@ -33,11 +33,11 @@ export class TypeOrmLuciaAdapter implements Adapter {
       .innerJoin(User, 'u', 'u.id = s.userId')
       .select([
         's.id AS sid',
-        's.userId AS userId',
-        's.expiresAt AS expiresAt',
+        's.userId AS "userId"',
+        's.expiresAt AS "expiresAt"',
         'u.email AS email',
         'u.name AS name',
-        'u.commentMail AS commentMail',
+        'u.commentMail AS "commentMail"',
       ])
       .where('s.id = :sessionId', { sessionId: p.sessionId }),
   );

@@ -58,7 +58,7 @@ export class CommentsService {
     this.ds
       .createQueryBuilder()
       .update(Flight)
-      .set({ commentCount: () => 'commentCount + 1', openComments: () => 'openComments + 1' })
+      .set({ commentCount: () => '"commentCount" + 1', openComments: () => '"openComments" + 1' })
       .where('id = :fid', { fid: p.fid }),
   );
 
@@ -66,7 +66,7 @@ export class CommentsService {
     this.ds
       .createQueryBuilder()
       .update(Flight)
-      .set({ commentCount: () => 'commentCount + 1' })
+      .set({ commentCount: () => '"commentCount" + 1' })
       .where('id = :fid', { fid: p.fid }),
   );
 
@@ -140,9 +140,9 @@ export class CommentsService {
       .update(Flight)
       .set({
         commentCount: () =>
-          '(SELECT COUNT(*) FROM comments c WHERE c.flightId = :fid AND c.deletedAt IS NULL)',
+          '(SELECT COUNT(*) FROM comments c WHERE c."flightId" = :fid AND c."deletedAt" IS NULL)',
         openComments: () =>
-          '(SELECT COUNT(*) FROM comments c WHERE c.flightId = :fid AND c.parentId IS NULL AND c.resolvedAt IS NULL AND c.deletedAt IS NULL)',
+          '(SELECT COUNT(*) FROM comments c WHERE c."flightId" = :fid AND c."parentId" IS NULL AND c."resolvedAt" IS NULL AND c."deletedAt" IS NULL)',
       })
       .where('id = :fid', { fid: flightId })
       .execute();
@@ -301,7 +301,7 @@ export class CommentsService {
             'u.id AS id',
             'u.email AS email',
             'u.name AS name',
-            'u.commentMail AS commentMail',
+            'u.commentMail AS "commentMail"',
           ])
           .where('u.id IN (:...ids)', { ids })
           .getRawMany<{ id: string; email: string; name: string; commentMail: number }>();
@@ -310,7 +310,7 @@ export class CommentsService {
           .getRepository(Flight)
           .createQueryBuilder('f')
           .innerJoin(Aircraft, 'a', 'a.id = f.aircraftId')
-          .select(['a.name AS aircraftName', 'f.fileName AS fileName'])
+          .select(['a.name AS "aircraftName"', 'f.fileName AS "fileName"'])
           .where('f.id = :id', { id: c.flightId })
           .getRawOne<{ aircraftName: string; fileName: string }>();
         const author = byId.get(c.authorId)?.name ?? 'A team member';

@@ -1,11 +1,15 @@
-import { rateLimit } from 'express-rate-limit';
+import { rateLimit, type Store } from 'express-rate-limit';
 import type { Config } from '../config';
 import { AppError } from './errors';
 import { errorCodes } from '../../shared/api/error';
 
-/** Per-address limit for the routes that guess passwords or send mail. */
-export function authRateLimit(config: Pick<Config, 'authRateLimit'>) {
+/**
+ * Per-address limit for the routes that guess passwords or send mail. Pass the shared store
+ * (see rate-limit-store.ts) so the limit holds across server processes.
+ */
+export function authRateLimit(config: Pick<Config, 'authRateLimit'>, store?: Store) {
   return rateLimit({
+    ...(store && { store }),
     windowMs: config.authRateLimit.windowMs,
     limit: config.authRateLimit.limit,
     standardHeaders: 'draft-8',

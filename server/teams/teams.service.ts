@@ -76,7 +76,7 @@ export class TeamsService {
       .getRepository(Membership)
       .createQueryBuilder('m')
       .innerJoin(Team, 't', 't.id = m.teamId')
-      .select(['t.id AS id', 't.name AS name', 'm.role AS role', 't.createdAt AS createdAt'])
+      .select(['t.id AS id', 't.name AS name', 'm.role AS role', 't.createdAt AS "createdAt"'])
       .addSelect(
         (q) => q.select('COUNT(*)').from(Membership, 'mc').where('mc.teamId = t.id'),
         'memberCount',
@@ -128,11 +128,11 @@ export class TeamsService {
       .createQueryBuilder('m')
       .innerJoin(User, 'u', 'u.id = m.userId')
       .select([
-        'u.id AS userId',
+        'u.id AS "userId"',
         'u.name AS name',
         'u.email AS email',
         'm.role AS role',
-        'm.joinedAt AS joinedAt',
+        'm.joinedAt AS "joinedAt"',
       ])
       .where('m.teamId = :teamId', { teamId })
       .orderBy('u.name')

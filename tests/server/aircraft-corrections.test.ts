@@ -5,6 +5,7 @@ import { Aircraft, BenchRunList, ServiceEntry, ServiceLog } from '../../shared/s
 import { Team } from '../../shared/schemas/teams';
 import { kite } from './helpers/fixtures';
 import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
+import { addMember, sql } from './helpers/sql';
 
 type Member = Awaited<ReturnType<typeof signedUpAgent>>;
 
@@ -22,10 +23,7 @@ describe('correcting the aircraft record', () => {
       (await crew.owner.agent.post('/api/teams').send({ name: 'Club crew' }).expect(201)).body,
     ).id;
     for (const role of ['tuner', 'pilot', 'coach', 'viewer'] as const)
-      await t.dataSource.query(
-        'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-        [teamId, crew[role].id, role, Date.now()],
-      );
+      await addMember(t.dataSource, teamId, crew[role].id, role);
     aircraftId = Aircraft.parse(
       (await crew.owner.agent.post(`/api/teams/${teamId}/aircraft`).send(kite).expect(201)).body,
     ).id;
@@ -58,7 +56,7 @@ describe('correcting the aircraft record', () => {
     return (res.body as { id: string }).id;
   }
   const stored = async (table: string, id: string) =>
-    ((await t.dataSource.query(`SELECT id FROM ${table} WHERE id = ?`, [id])) as unknown[]).length;
+    ((await sql(t.dataSource, `SELECT id FROM ${table} WHERE id = ?`, [id])) as unknown[]).length;
   const entryPath = (id: string, onAircraft = aircraftId) =>
     `/api/aircraft/${onAircraft}/service-log/${id}`;
 

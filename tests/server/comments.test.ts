@@ -6,6 +6,7 @@ import { FlightDetail } from '../../shared/schemas/flights';
 import { Comment as CommentEntity } from '../../server/comments/comment.entity';
 import { flightBody, kite } from './helpers/fixtures';
 import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
+import { addMember } from './helpers/sql';
 
 type Agent = Awaited<ReturnType<typeof signedUpAgent>>;
 
@@ -27,10 +28,7 @@ describe('comments', () => {
       [pilot, 'pilot'],
       [coach, 'coach'],
     ] as const) {
-      await t.dataSource.query(
-        'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-        [teamId, u.id, role, Date.now()],
-      );
+      await addMember(t.dataSource, teamId, u.id, role);
     }
     const aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
     flightId = randomUUID();

@@ -1,7 +1,5 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { gzipSync } from 'node:zlib';
-import { readdirSync, existsSync } from 'node:fs';
-import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiErrorBody } from '../../shared/api/error';
@@ -15,18 +13,14 @@ import { Trends } from '../../shared/schemas/aircraft';
 import { FlightPayload } from '../../server/flights/flight-payload.entity';
 import { Flight } from '../../server/flights/flight.entity';
 import { csvLog, flightBody, kite, report, sha256 } from './helpers/fixtures';
+import { storedRaw } from './helpers/engine';
 import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
+import { addMember } from './helpers/sql';
 
 type Agent = Awaited<ReturnType<typeof signedUpAgent>>;
 
-/** Every file under the raw store, staging included. */
-function rawFiles(dir: string): string[] {
-  const root = join(dir, 'raw');
-  if (!existsSync(root)) return [];
-  return readdirSync(root, { recursive: true, withFileTypes: true })
-    .filter((d) => d.isFile())
-    .map((d) => join(d.parentPath, d.name));
-}
+/** Every raw log the store keeps (files under DATA_DIR/raw, staging included, or bucket keys). */
+const rawFiles = (t: TestApp) => storedRaw(t.config);
 
 describe('flights', () => {
   let t: TestApp;
@@ -42,10 +36,7 @@ describe('flights', () => {
     pilot = await signedUpAgent(t.app, 'Jonah');
     outsider = await signedUpAgent(t.app, 'Tess');
     teamId = (await t.services.teams.create(owner.id, 'Club and filming crew')).id;
-    await t.dataSource.query(
-      'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-      [teamId, pilot.id, 'pilot', Date.now()],
-    );
+    await addMember(t.dataSource, teamId, pilot.id, 'pilot');
     aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
   });
   afterAll(() => t.close());
@@ -148,10 +139,7 @@ describe('flights', () => {
     let heronId: string;
     beforeAll(async () => {
       listTeam = (await t.services.teams.create(owner.id, 'List crew')).id;
-      await t.dataSource.query(
-        'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-        [listTeam, pilot.id, 'pilot', Date.now()],
-      );
+      await addMember(t.dataSource, listTeam, pilot.id, 'pilot');
       kiteId = (await t.services.fleet.create(owner.id, listTeam, kite)).id;
       heronId = (await t.services.fleet.create(owner.id, listTeam, { ...kite, name: 'Heron' })).id;
       for (let i = 0; i < 25; i++) {
@@ -319,13 +307,13 @@ describe('flights', () => {
     it('refuses an over-size upload with 413 and stores nothing', async () => {
       const big = 'time,motor1\n' + '0.001,0.5\n'.repeat(2000); // ~20 KB > 10 KB limit
       const id = await newFlight(pilot, big);
-      const before = rawFiles(t.dir);
+      const before = await rawFiles(t);
       const res = await pilot.agent
         .put(`/api/flights/${id}/raw`)
         .attach('file', Buffer.from(big), 'big.csv')
         .expect(413);
       expect(ApiErrorBody.parse(res.body).error.code).toBe('too_large');
-      expect(rawFiles(t.dir)).toEqual(before);
+      expect(await rawFiles(t)).toEqual(before);
       expect((await owner.agent.get(`/api/flights/${id}`)).body.hasRaw).toBe(false);
     });
 
@@ -336,13 +324,13 @@ describe('flights', () => {
         .put(`/api/flights/${id}`)
         .send(flightBody(teamId, aircraftId, { sha256: sha256Buf(png) }))
         .expect(201);
-      const before = rawFiles(t.dir);
+      const before = await rawFiles(t);
       const res = await pilot.agent
         .put(`/api/flights/${id}/raw`)
         .attach('file', png, 'photo.csv')
         .expect(415);
       expect(ApiErrorBody.parse(res.body).error.code).toBe('not_csv');
-      expect(rawFiles(t.dir)).toEqual(before);
+      expect(await rawFiles(t)).toEqual(before);
     });
 
     it('refuses a file whose hash is not the analysed one', async () => {
@@ -366,9 +354,9 @@ describe('flights', () => {
         .put(`/api/flights/${id}/raw`)
         .attach('file', Buffer.from(csv), 'd.csv')
         .expect(201);
-      expect(rawFiles(t.dir).some((f) => f.includes(sha256(csv)))).toBe(true);
+      expect((await rawFiles(t)).some((f: string) => f.includes(sha256(csv)))).toBe(true);
       await pilot.agent.delete(`/api/flights/${id}`).expect(204);
-      expect(rawFiles(t.dir).some((f) => f.includes(sha256(csv)))).toBe(false);
+      expect((await rawFiles(t)).some((f: string) => f.includes(sha256(csv)))).toBe(false);
       await owner.agent.get(`/api/flights/${id}`).expect(404);
       // The report and detail go with it.
       expect(await t.dataSource.getRepository(FlightPayload).countBy({ flightId: id })).toBe(0);

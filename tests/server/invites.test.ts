@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiErrorBody } from '../../shared/api/error';
 import { Invite, InviteList, InvitePreview, Team } from '../../shared/schemas/teams';
 import { PASSWORD, signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
+import { sql } from './helpers/sql';
 
 describe('invitations: withdrawal and state', () => {
   let t: TestApp;
@@ -36,8 +37,9 @@ describe('invitations: withdrawal and state', () => {
     expect(inv.state).toBe('open');
     const before = Date.now();
     await owner.agent.delete(`/api/teams/${teamId}/invites/${inv.id}`).expect(204);
-    const [row] = (await t.dataSource.query(
-      'SELECT withdrawnAt, withdrawnById FROM invites WHERE id = ?',
+    const [row] = (await sql(
+      t.dataSource,
+      'SELECT "withdrawnAt", "withdrawnById" FROM invites WHERE id = ?',
       [inv.id],
     )) as { withdrawnAt: number; withdrawnById: string }[];
     expect(row!.withdrawnById).toBe(owner.id);
@@ -75,7 +77,7 @@ describe('invitations: withdrawal and state', () => {
       inviteToken: inv.token,
     });
     expect(signUp.status).toBe(410);
-    const users = await t.dataSource.query('SELECT id FROM users WHERE email = ?', [
+    const users = await sql(t.dataSource, 'SELECT id FROM users WHERE email = ?', [
       'ines.new@crew.example',
     ]);
     expect(users).toEqual([]);
@@ -120,7 +122,7 @@ describe('invitations: withdrawal and state', () => {
   it('states each invitation plainly: open, accepted, withdrawn or expired', async () => {
     const open = await invite('open@crew.example');
     const expired = await invite('late@crew.example');
-    await t.dataSource.query('UPDATE invites SET expiresAt = ? WHERE id = ?', [
+    await sql(t.dataSource, 'UPDATE invites SET "expiresAt" = ? WHERE id = ?', [
       Date.now() - 1000,
       expired.id,
     ]);

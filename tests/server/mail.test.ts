@@ -12,6 +12,7 @@ import {
   uniqueEmail,
   type TestApp,
 } from './helpers/test-app';
+import { addMember } from './helpers/sql';
 
 /** Mail goes through nodemailer over real SMTP into the local fake server, and is read back over HTTP. */
 describe('e-mail through the fake SMTP server', () => {
@@ -75,10 +76,7 @@ describe('e-mail through the fake SMTP server', () => {
 
   it('delivers a mention to the mentioned member with a link to the comment', async () => {
     const coach = await signedUpAgent(t.app, 'Ines');
-    await t.dataSource.query(
-      'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-      [teamId, coach.id, 'coach', Date.now()],
-    );
+    await addMember(t.dataSource, teamId, coach.id, 'coach');
     const aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
     const flightId = randomUUID();
     await t.services.flights.put(
@@ -112,10 +110,7 @@ describe('e-mail through the fake SMTP server', () => {
 
   it('sends a review request to the chosen coach', async () => {
     const coach = await signedUpAgent(t.app, 'Pia');
-    await t.dataSource.query(
-      'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-      [teamId, coach.id, 'coach', Date.now()],
-    );
+    await addMember(t.dataSource, teamId, coach.id, 'coach');
     const aircraftId = (await t.services.fleet.create(owner.id, teamId, { ...kite, name: 'Heron' }))
       .id;
     const flightId = randomUUID();

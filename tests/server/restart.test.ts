@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CommentList } from '../../shared/schemas/comments';
+import { freshStores, type Stores } from './helpers/engine';
 import { flightBody, kite } from './helpers/fixtures';
 import { spawnServer, type SpawnedServer } from './helpers/spawn-server';
 import { tempDir } from './helpers/temp-dir';
@@ -27,13 +28,19 @@ function client(base: string) {
 
 describe('restart durability', () => {
   const tmp = tempDir();
-  const env = { DATA_DIR: tmp.dir };
+  let env: Record<string, string> = { DATA_DIR: tmp.dir };
+  let stores: Stores | undefined;
   let server: SpawnedServer | undefined;
+  beforeAll(async () => {
+    stores = await freshStores();
+    env = { ...env, ...stores.env };
+  });
   afterAll(async () => {
     if (server && server.child.exitCode === null) {
       server.child.kill('SIGKILL');
       await server.exited;
     }
+    await stores?.cleanup();
     tmp.cleanup();
   });
 

@@ -7,6 +7,7 @@ import { Invite, InviteList, MemberList, Team, TeamList } from '../../shared/sch
 import { TeamThresholds } from '../../shared/schemas/thresholds';
 import { kite, sha256 } from './helpers/fixtures';
 import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
+import { addMember, sql } from './helpers/sql';
 
 describe('teams and fleet', () => {
   let t: TestApp;
@@ -22,10 +23,7 @@ describe('teams and fleet', () => {
       (await owner.agent.post('/api/teams').send({ name: 'Club and filming crew' }).expect(201))
         .body,
     ).id;
-    await t.dataSource.query(
-      'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-      [teamId, tuner.id, 'tuner', Date.now()],
-    );
+    await addMember(t.dataSource, teamId, tuner.id, 'tuner');
   });
   afterAll(() => t.close());
 
@@ -52,10 +50,7 @@ describe('teams and fleet', () => {
 
   it('lets a member leave on their own', async () => {
     const leaver = await signedUpAgent(t.app, 'Cato');
-    await t.dataSource.query(
-      'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-      [teamId, leaver.id, 'viewer', Date.now()],
-    );
+    await addMember(t.dataSource, teamId, leaver.id, 'viewer');
     await leaver.agent.delete(`/api/teams/${teamId}/members/${leaver.id}`).expect(204);
     await leaver.agent.get(`/api/teams/${teamId}`).expect(404);
     const members = MemberList.parse(
@@ -102,7 +97,7 @@ describe('teams and fleet', () => {
     expect(JSON.stringify(res.body)).not.toContain('/invite/');
     const list = await tuner.agent.get(`/api/teams/${teamId}/invites`).expect(403);
     expect(JSON.stringify(list.body)).not.toContain('/invite/');
-    const stored = await t.dataSource.query('SELECT email FROM invites WHERE email = ?', [
+    const stored = await sql(t.dataSource, 'SELECT email FROM invites WHERE email = ?', [
       'ines@crew.example',
     ]);
     expect(stored).toEqual([]);
@@ -118,7 +113,7 @@ describe('teams and fleet', () => {
       ).body,
     );
     const token = created.link!.split('/invite/')[1]!;
-    const rows = (await t.dataSource.query('SELECT * FROM invites WHERE id = ?', [
+    const rows = (await sql(t.dataSource, 'SELECT * FROM invites WHERE id = ?', [
       created.id,
     ])) as Record<string, unknown>[];
     expect(rows).toHaveLength(1);

@@ -20,10 +20,13 @@ function freePort(): Promise<number> {
   });
 }
 
-/** Starts `tsx server/index.ts` as its own process and waits until /api/health answers. */
+/**
+ * Starts `node --import tsx server/index.ts` as its own process (no wrapper that forks, so a
+ * kill reaches the server itself) and waits until /api/health answers.
+ */
 export async function spawnServer(env: Record<string, string>): Promise<SpawnedServer> {
   const port = await freePort();
-  const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'server/index.ts'], {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     env: {
       ...process.env,
       NODE_ENV: 'test',

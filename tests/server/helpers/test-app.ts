@@ -7,6 +7,7 @@ import { parseConfig, type Config } from '../../../server/config';
 import { openDatabase } from '../../../server/db/data-source';
 import { createMemoryMailer, startMailer, type Mailer } from '../../../server/mail/mailer';
 import { createServices, type Services } from '../../../server/services';
+import { freshStores } from './engine';
 import { tempDir } from './temp-dir';
 
 export interface TestApp {
@@ -20,14 +21,17 @@ export interface TestApp {
 }
 
 /**
- * The real app on a fresh SQLite file (schema from the migrations), with the fake SMTP server
- * when `smtp` is set, else an in-memory mailer.
+ * The real app on a fresh SQLite file (schema from the migrations), or on a fresh PostgreSQL
+ * database and bucket in the PostgreSQL leg (see engine.ts), with the fake SMTP server when
+ * `smtp` is set, else an in-memory mailer.
  */
 export async function startTestApp(
   options: { env?: Record<string, string>; smtp?: boolean } = {},
 ): Promise<TestApp> {
   const tmp = tempDir();
+  const stores = await freshStores();
   const config = parseConfig({
+    ...stores.env,
     NODE_ENV: 'test',
     DATA_DIR: tmp.dir,
     PORT: '0',
@@ -51,7 +55,9 @@ export async function startTestApp(
     dir: tmp.dir,
     async close() {
       await mailer.close();
+      await services.rateLimits.close();
       if (dataSource.isInitialized) await dataSource.destroy();
+      await stores.cleanup();
       tmp.cleanup();
     },
   };

@@ -1,0 +1,15 @@
+/** The part of s3rver's API the test services use (the package ships no types). */
+declare module 's3rver' {
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    directory?: string;
+    silent?: boolean;
+    configureBuckets?: { name: string }[];
+  }
+  export default class S3rver {
+    constructor(options: S3rverOptions);
+    run(): Promise<unknown>;
+    close(): Promise<void>;
+  }
+}
