@@ -5,6 +5,10 @@
  * ratios say how much of the machine's request budget a write or a list page costs. Bounded in
  * count and time.
  *
+ * With `--engine postgres` the server keeps its data in PostgreSQL, its raw logs in S3 and its
+ * rate limits in Redis: those of DATABASE_URL, S3_* and REDIS_URL when set, else throwaway ones
+ * it starts (tests/services/local-services.ts) and stops. Same figures, same reference.
+ *
  * Throughput is measured closed-loop with autocannon (10 connections, as fast as the server
  * answers), timed to 50 ms (autocannon only stops on a sample tick, 1 s by default).
  *
@@ -20,6 +24,7 @@
  */
 import { randomUUID } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { Agent, request as httpRequest } from 'node:http';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
@@ -31,8 +36,10 @@ import { findingStats, trendOf } from '../../server/flights/flight-summary';
 import { createMemoryMailer } from '../../server/mail/mailer';
 import { createServices } from '../../server/services';
 import { kite, report } from '../server/helpers/fixtures';
+import { freshStores, type Stores } from '../server/helpers/engine';
 import { spawnServer } from '../server/helpers/spawn-server';
-import type { Bench } from './registry';
+import { servicesDown, servicesUp } from '../services/local-services';
+import type { Bench, BenchOptions } from './registry';
 
 interface Histogram {
   average: number;
@@ -70,8 +77,26 @@ const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
 const FLIGHTS = 10_000;
 const PASSWORD = 'bench passphrase long';
 
-async function seed(dataDir: string) {
-  const config = parseConfig({ NODE_ENV: 'test', DATA_DIR: dataDir });
+/** A fresh database and bucket on PostgreSQL, S3 and Redis; services started when none run. */
+async function postgresStores(log: (s: string) => void): Promise<Stores> {
+  if (process.env.DATABASE_URL) return freshStores();
+  const dir = mkdtempSync(join(tmpdir(), 'hoverprint-bench-services-'));
+  log('starting throwaway PostgreSQL, Redis and S3…');
+  const state = await servicesUp(dir);
+  Object.assign(process.env, state.env);
+  const stores = await freshStores();
+  return {
+    env: stores.env,
+    async cleanup() {
+      await stores.cleanup();
+      await servicesDown(dir);
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+async function seed(dataDir: string, env: Record<string, string>) {
+  const config = parseConfig({ NODE_ENV: 'test', DATA_DIR: dataDir, ...env });
   const { dataSource } = await openDatabase(config);
   const services = createServices(dataSource, config, createMemoryMailer());
   const userId = await services.auth.signUp({
@@ -129,6 +154,7 @@ async function seed(dataDir: string) {
       order: { recordedAt: 'DESC' },
     })
   ).id;
+  await services.rateLimits.close();
   await dataSource.destroy();
   return { teamId: team.id, flightId };
 }
@@ -234,20 +260,26 @@ function check(name: string, r: Result) {
   }
 }
 
-const bench: Bench = async ({ json, dir }) => {
+const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
   const dataDir = mkdtempSync(join(dir, 'api-'));
   const log = (s: string) => {
     if (!json) console.log(s);
   };
+  const stores: Stores =
+    engine === 'postgres' ? await postgresStores(log) : { env: {}, cleanup: async () => undefined };
   const server = await (async () => {
-    log(`seeding ${FLIGHTS} flights…`);
-    const seeded = await seed(dataDir);
+    log(`seeding ${FLIGHTS} flights (${engine})…`);
+    const seeded = await seed(dataDir, stores.env);
     const s = await spawnServer({
+      ...stores.env,
       DATA_DIR: dataDir,
       LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'info',
     });
     return { ...s, ...seeded };
-  })();
+  })().catch(async (err: unknown) => {
+    await stores.cleanup();
+    throw err;
+  });
   try {
     const cookie = await signIn(server.url);
     const headers = { cookie, 'content-type': 'application/json' };
@@ -354,6 +386,7 @@ const bench: Bench = async ({ json, dir }) => {
   } finally {
     server.child.kill('SIGTERM');
     await server.exited;
+    await stores.cleanup();
     rmSync(dataDir, { recursive: true, force: true });
   }
 };

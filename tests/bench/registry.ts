@@ -7,6 +7,8 @@ export interface BenchOptions {
   json: boolean;
   /** Scratch folder for generated files, kept between runs (`.bench/`). */
   dir: string;
+  /** Where the API benchmark keeps its data: the SQLite file, or PostgreSQL + S3 + Redis. */
+  engine: 'sqlite' | 'postgres';
 }
 export type Bench = (options: BenchOptions) => Promise<Record<string, number>>;
 

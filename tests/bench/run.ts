@@ -1,5 +1,5 @@
 /**
- * `npm run bench [-- <name>…] [--json]`: runs the named benchmarks (all when none is named).
+ * `npm run bench [-- <name>…] [--json] [--engine sqlite|postgres]`: runs the named benchmarks (all when none is named).
  * Each benchmark measures its own reference in the same run and reports ratios, so the numbers
  * mean something on any machine. Never imported by tests.
  */
@@ -11,7 +11,13 @@ const benches = await loadBenches();
 
 const args = process.argv.slice(2);
 const json = args.includes('--json');
-const names = args.filter((a) => !a.startsWith('--'));
+const engineAt = args.indexOf('--engine');
+const engine = engineAt >= 0 ? args[engineAt + 1] : 'sqlite';
+if (engine !== 'sqlite' && engine !== 'postgres') {
+  console.error(`Unknown engine: ${engine ?? '(none)'}. Known: sqlite, postgres.`);
+  process.exit(1);
+}
+const names = args.filter((a, i) => !a.startsWith('--') && i !== engineAt + 1);
 const unknown = names.filter((n) => !(n in benches));
 if (unknown.length > 0) {
   console.error(
@@ -31,6 +37,6 @@ const results: Record<string, unknown> = {};
 for (const name of chosen) {
   const bench = benches[name]!;
   if (!json) console.log(`\n== ${name} ==`);
-  results[name] = await bench({ json, dir });
+  results[name] = await bench({ json, dir, engine });
 }
 if (json) console.log(JSON.stringify(chosen.length === 1 ? results[chosen[0]!] : results));
