@@ -1,6 +1,5 @@
 import { createReadStream } from 'node:fs';
-import { mkdirSync } from 'node:fs';
-import { rm } from 'node:fs/promises';
+import { mkdir, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Readable } from 'node:stream';
@@ -8,6 +7,7 @@ import {
   DeleteObjectCommand,
   GetObjectCommand,
   HeadObjectCommand,
+  ListObjectsV2Command,
   S3Client,
 } from '@aws-sdk/client-s3';
 import { Upload } from '@aws-sdk/lib-storage';
@@ -31,6 +31,13 @@ export function createS3Client(s3: S3Config): S3Client {
   });
 }
 
+/**
+ * How old an object must be before a sweep may take it for an orphan. Another process may have
+ * just stored it and not yet written the flight row that refers to it; no upload takes an hour
+ * between the two, so a sweep run by every process at start is harmless.
+ */
+export const SWEEP_MIN_AGE_MS = 3_600_000;
+
 const notFound = (err: unknown) =>
   (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404;
 
@@ -46,10 +53,10 @@ export class S3RawStore implements RawStore {
   constructor(
     private readonly client: S3Client,
     private readonly bucket: string,
-    stagingDir = join(tmpdir(), 'hoverprint-staging'),
+    // One folder per process: clearing it at start never touches another live process's uploads.
+    stagingDir = join(tmpdir(), 'hoverprint-staging', String(process.pid)),
   ) {
     this.stagingDir = stagingDir;
-    mkdirSync(stagingDir, { recursive: true });
   }
 
   /** Keys come from our own hashes; refuse anything that could reach outside the namespace. */
@@ -90,6 +97,27 @@ export class S3RawStore implements RawStore {
 
   async remove(key: string): Promise<void> {
     await this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: this.check(key) }));
+  }
+
+  /** Stored keys old enough to sweep (see SWEEP_MIN_AGE_MS), page by page. */
+  async *keys(now = Date.now()): AsyncIterable<string> {
+    let token: string | undefined;
+    do {
+      const page = await this.client.send(
+        new ListObjectsV2Command({ Bucket: this.bucket, ContinuationToken: token }),
+      );
+      for (const o of page.Contents ?? []) {
+        const age = now - (o.LastModified?.getTime() ?? now);
+        if (o.Key && age >= SWEEP_MIN_AGE_MS) yield o.Key;
+      }
+      token = page.IsTruncated ? page.NextContinuationToken : undefined;
+    } while (token);
+  }
+
+  /** Drops this process's staged uploads (the bucket itself has no staging area). */
+  async clearStaging(): Promise<void> {
+    await rm(this.stagingDir, { recursive: true, force: true });
+    await mkdir(this.stagingDir, { recursive: true });
   }
 
   async exists(key: string): Promise<boolean> {
