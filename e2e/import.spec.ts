@@ -58,6 +58,31 @@ test('an unknown header opens the column map; confirming it reads the flight', a
   await expect(page.getByText(/filter bench could not run|needs a column map/)).toHaveCount(0);
 });
 
+test('µs motor outputs are proposed as µs; read as fractions they are flagged before reading', async ({
+  page,
+}) => {
+  test.setTimeout(120_000);
+  await page.goto('/import');
+  await page.getByLabel('Flight logs').setInputFiles(writeForeignHeaderCsv({ pulses: true }));
+  const step = page.getByRole('region', { name: /Column map for kite-pulses\.csv/ });
+  await expect(step).toBeVisible({ timeout: 30_000 });
+  // Proposed from the first values, which the headers do not name a unit for.
+  for (const h of ['Out0', 'Out1', 'Out2', 'Out3'])
+    await expect(step.getByLabel(`Unit for ${h}`)).toHaveValue('us');
+  await expect(step.getByRole('status')).toHaveCount(0);
+  await step.getByLabel('Unit for Out2').selectOption('frac');
+  await expect(step.getByRole('status')).toContainText('do not look like its unit');
+  await expect(
+    step.getByText(/motor3 \("Out2"\) is read as a 0–1 fraction, but it reaches 1\d{3}/),
+  ).toBeVisible();
+  await step.getByRole('button', { name: 'Read Out2 as a 1000–2000 µs pulse' }).click();
+  await expect(step.getByLabel('Unit for Out2')).toHaveValue('us');
+  await expect(step.getByRole('status')).toHaveCount(0);
+  await step.getByRole('button', { name: 'Read with this map' }).click();
+  await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
+  await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
+});
+
 test('a first-time pilot tries a sample flight and lands on its review', async ({ page }) => {
   test.setTimeout(120_000);
   await page.goto('/import');

@@ -49,11 +49,15 @@ const UNIT_WORDS: Partial<Record<Unit, string>> = {
   mA: 'milliamps',
 };
 
-/** A unit in words: "a 0–1 fraction", "µs", "the 48–2047 range". */
-export function unitWords(unit: Unit, range?: { min?: number; max?: number }): string {
+/** A unit in words for a channel: "a 0–1 fraction", "a 1000–2000 µs pulse", "microseconds". */
+export function describeUnit(
+  unit: Unit,
+  channel: string,
+  range?: { min?: number; max?: number },
+): string {
   if (unit === 'raw' && range?.min !== undefined && range.max !== undefined)
     return `raw values ${range.min}–${range.max}`;
-  if (unit === 'us') return 'a 1000–2000 µs pulse';
+  if (unit === 'us') return channel === 'time' ? 'microseconds' : 'a 1000–2000 µs pulse';
   return UNIT_WORDS[unit] ?? unit;
 }
 
@@ -182,18 +186,17 @@ export function doubtMessage(
   const { finding, likely } = doubt;
   const named = header === channel ? channel : `${channel} ("${header}")`;
   if (source === 'assumed') {
-    const first = `${named} has no unit, so it was read as ${unitWords(unit)}, but ${finding}.`;
+    const first = `${named} has no unit, so it was read as ${describeUnit(unit, channel)}, but ${finding}.`;
     if (!likely) return `${first} Write its unit in the header, or map it in a column map.`;
     if (likely.unit === 'raw')
       return `${first} The ${likely.why}: map it as raw ${likely.min}–${likely.max} in a column map.`;
     return `${first} The ${likely.why}: say so in the header, "${channel} [${likely.unit}]".`;
   }
-  const first = `${named} is read as ${unitWords(unit, range)}, but ${finding}.`;
+  const first = `${named} is read as ${describeUnit(unit, channel, range)}, but ${finding}.`;
   if (!likely)
     return channel === 'time'
       ? `${first} Check that this column is the sample time, and its unit.`
       : `${first} Check its unit.`;
-  const instead =
-    likely.unit === 'raw' ? `raw ${likely.min}–${likely.max}` : unitWords(likely.unit, likely);
+  const instead = describeUnit(likely.unit, channel, likely);
   return `${first} The ${likely.why}: read it as ${instead} instead.`;
 }

@@ -74,6 +74,13 @@ describe('doubtMessage', () => {
     );
   });
 
+  it('names µs on a time column as microseconds, not a pulse', () => {
+    const d = doubtUnit('time', 's', [0, 250, 500, 750])!;
+    expect(doubtMessage('time', 's', d, 'stated', 'stamp')).toMatch(
+      /^time \("stamp"\) is read as seconds, but samples are 250 s apart.*read it as microseconds instead\.$/,
+    );
+  });
+
   it('tells an unmapped header to say its unit, and a raw range to go in a column map', () => {
     const us = doubtUnit('motor1', 'frac', pulse)!;
     expect(doubtMessage('motor1', 'frac', us, 'assumed', 'motor1')).toMatch(

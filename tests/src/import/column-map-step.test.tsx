@@ -106,4 +106,42 @@ describe('column-map step', () => {
     setup({ canSavePreset: false });
     expect(screen.queryByRole('checkbox', { name: 'Save as team preset' })).toBeNull();
   });
+
+  it('flags µs motor columns read as fractions before anything is read, and offers µs', async () => {
+    const { onConfirm, user } = setup();
+    // The proposal had no values to go on, so the motors default to 0–1 fractions.
+    expect(unitOf('Out0').value).toBe('frac');
+    expect(screen.getByRole('status').textContent).toMatch(
+      /The values of 4 columns do not look like their units/,
+    );
+    expect(
+      screen.getByText(/motor1 \("Out0"\) is read as a 0–1 fraction, but it reaches 1100/),
+    ).toBeTruthy();
+    await user.click(screen.getByRole('button', { name: 'Read Out0 as a 1000–2000 µs pulse' }));
+    expect(unitOf('Out0').value).toBe('us');
+    expect(screen.getByRole('status').textContent).toMatch(/The values of 3 columns/);
+    for (const h of ['Out1', 'Out2', 'Out3'])
+      await user.click(screen.getByRole('button', { name: `Read ${h} as a 1000–2000 µs pulse` }));
+    expect(screen.queryByRole('status')).toBeNull();
+    await user.click(screen.getByRole('button', { name: 'Read with this map' }));
+    expect(onConfirm.mock.calls[0]![0].columns.Out3).toEqual({ channel: 'motor4', unit: 'us' });
+  });
+
+  it('offers the digital command range with its raw range filled in', async () => {
+    const { user } = setup({
+      sampleRows: [
+        ['0', '48', '1100', '1100', '1100', '0.5', '16.4', 'x'],
+        ['1', '900', '1100', '1100', '1100', '0.5', '16.4', 'x'],
+        ['2', '2047', '1100', '1100', '1100', '0.5', '16.4', 'x'],
+      ],
+    });
+    await user.click(screen.getByRole('button', { name: 'Read Out0 as raw values 48–2047' }));
+    expect(unitOf('Out0').value).toBe('raw');
+    expect((screen.getByLabelText('Raw value at 0 % for Out0') as HTMLInputElement).value).toBe(
+      '48',
+    );
+    expect((screen.getByLabelText('Raw value at 100 % for Out0') as HTMLInputElement).value).toBe(
+      '2047',
+    );
+  });
 });

@@ -7,7 +7,14 @@ import {
 } from '@tanstack/react-table';
 import type { ColumnMap, ProposedColumnMap } from '../../../../shared/log/column-map';
 import { channelFamily, channelNames } from '../../../../shared/log/channels';
-import { checkDraft, draftFromProposal, type DraftRow } from '../model/column-map-draft';
+import { doubtsAboutMap, type MapUnitDoubt } from '../../../../shared/log/map-unit-doubts';
+import { describeUnit } from '../../../../shared/log/unit-fit';
+import {
+  checkDraft,
+  draftAsFarAsFilled,
+  draftFromProposal,
+  type DraftRow,
+} from '../model/column-map-draft';
 
 export interface ColumnMapStepProps {
   fileName: string;
@@ -22,8 +29,14 @@ export interface ColumnMapStepProps {
   onCancel: () => void;
 }
 
-const helper = createColumnHelper<DraftRow & { index: number }>();
+const helper = createColumnHelper<DraftRow & { index: number; doubt: MapUnitDoubt | null }>();
 const channelOptions = channelNames(8);
+
+/** A unit as the button names it: "µs", "m/s²", "raw 48–2047". */
+const unitLabel = (u: { unit: string; min?: number; max?: number }) =>
+  u.unit === 'raw'
+    ? `raw ${u.min}–${u.max}`
+    : (({ us: 'µs', 'm/s2': 'm/s²' } as Record<string, string>)[u.unit] ?? u.unit);
 
 /**
  * The column-map step: the engine's proposal in a table, one row per column of the file, where
@@ -39,6 +52,19 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
 
   const update = (index: number, patch: Partial<DraftRow>) =>
     setRows((old) => old.map((r, i) => (i === index ? { ...r, ...patch } : r)));
+
+  // Each column's first values against the unit it is about to be read in, as the person edits:
+  // a µs motor read as a fraction imports cleanly and then gives a confident, wrong verdict.
+  const doubts = useMemo(
+    () =>
+      doubtsAboutMap(draftAsFarAsFilled(rows), {
+        headers: rows.map((r) => r.header),
+        sampleRows,
+        // A cell can only hold a comma when commas do not delimit: then it is a decimal comma.
+        delimiter: sampleRows.some((r) => r.some((c) => c.includes(','))) ? ';' : ',',
+      }),
+    [rows, sampleRows],
+  );
 
   const columns = useMemo(
     () => [
@@ -93,39 +119,63 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
         cell: (c) => {
           const r = c.row.original;
           const units = r.channel ? (channelFamily(r.channel)?.units ?? []) : [];
+          const likely = r.doubt?.likely;
           return (
-            <div className="flex items-center gap-1">
-              <select
-                aria-label={`Unit for ${r.header}`}
-                className="w-24 rounded border border-line-strong bg-paper-raised px-1 py-0.5 text-sm disabled:opacity-40"
-                value={r.unit}
-                disabled={units.length === 0}
-                onChange={(e) => update(r.index, { unit: e.target.value })}
-              >
-                {units.length === 0 && <option value="">—</option>}
-                {units.map((u) => (
-                  <option key={u} value={u}>
-                    {u}
-                  </option>
-                ))}
-              </select>
-              {r.unit === 'raw' && (
-                <>
-                  <input
-                    aria-label={`Raw value at 0 % for ${r.header}`}
-                    placeholder="0 %"
-                    className="num w-16 rounded border border-line-strong px-1 py-0.5 text-sm"
-                    value={r.min}
-                    onChange={(e) => update(r.index, { min: e.target.value })}
-                  />
-                  <input
-                    aria-label={`Raw value at 100 % for ${r.header}`}
-                    placeholder="100 %"
-                    className="num w-16 rounded border border-line-strong px-1 py-0.5 text-sm"
-                    value={r.max}
-                    onChange={(e) => update(r.index, { max: e.target.value })}
-                  />
-                </>
+            <div className="flex flex-col gap-1">
+              <div className="flex items-center gap-1">
+                <select
+                  aria-label={`Unit for ${r.header}`}
+                  className="w-24 rounded border border-line-strong bg-paper-raised px-1 py-0.5 text-sm disabled:opacity-40"
+                  value={r.unit}
+                  disabled={units.length === 0}
+                  onChange={(e) => update(r.index, { unit: e.target.value })}
+                >
+                  {units.length === 0 && <option value="">—</option>}
+                  {units.map((u) => (
+                    <option key={u} value={u}>
+                      {u}
+                    </option>
+                  ))}
+                </select>
+                {r.unit === 'raw' && (
+                  <>
+                    <input
+                      aria-label={`Raw value at 0 % for ${r.header}`}
+                      placeholder="0 %"
+                      className="num w-16 rounded border border-line-strong px-1 py-0.5 text-sm"
+                      value={r.min}
+                      onChange={(e) => update(r.index, { min: e.target.value })}
+                    />
+                    <input
+                      aria-label={`Raw value at 100 % for ${r.header}`}
+                      placeholder="100 %"
+                      className="num w-16 rounded border border-line-strong px-1 py-0.5 text-sm"
+                      value={r.max}
+                      onChange={(e) => update(r.index, { max: e.target.value })}
+                    />
+                  </>
+                )}
+              </div>
+              {r.doubt && (
+                <p className="max-w-xs text-xs text-sev-watch">
+                  {r.doubt.message}{' '}
+                  {likely && (
+                    <button
+                      type="button"
+                      aria-label={`Read ${r.header} as ${describeUnit(likely.unit, r.channel, likely)}`}
+                      className="mt-0.5 rounded border border-line-strong px-1.5 py-0.5 text-ink"
+                      onClick={() =>
+                        update(r.index, {
+                          unit: likely.unit,
+                          min: likely.min === undefined ? '' : String(likely.min),
+                          max: likely.max === undefined ? '' : String(likely.max),
+                        })
+                      }
+                    >
+                      Use {unitLabel(likely)}
+                    </button>
+                  )}
+                </p>
               )}
             </div>
           );
@@ -139,7 +189,15 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
     [sampleRows],
   );
 
-  const data = useMemo(() => rows.map((r, index) => ({ ...r, index })), [rows]);
+  const data = useMemo(
+    () =>
+      rows.map((r, index) => ({
+        ...r,
+        index,
+        doubt: doubts.find((d) => d.header === r.header) ?? null,
+      })),
+    [rows, doubts],
+  );
   // The table instance is rebuilt each render by design; nothing downstream memoises on it.
   // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({ data, columns, getCoreRowModel: getCoreRowModel() });
@@ -200,6 +258,15 @@ export function ColumnMapStep(props: ColumnMapStepProps) {
           </tbody>
         </table>
       </div>
+      {doubts.length > 0 && (
+        <p role="status" className="mt-3 text-sm text-sev-watch">
+          {doubts.length === 1
+            ? `The values of "${doubts[0]!.header}" do not look like its unit`
+            : `The values of ${doubts.length} columns do not look like their units`}
+          : see the note under each unit. Read as they are, they would give a confident but wrong
+          verdict.
+        </p>
+      )}
       {problems.length > 0 && (
         <ul role="alert" className="mt-3 list-disc pl-5 text-sm text-sev-act">
           {problems.map((p) => (

@@ -33,11 +33,39 @@ export function draftFromProposal(proposal: ProposedColumnMap, preset?: ColumnMa
       header: e.header,
       channel: e.channel ?? '',
       unit: e.unit ?? (e.channel ? (channelFamily(e.channel)?.units[0] ?? '') : ''),
-      min: '',
-      max: '',
+      min: e.min === undefined ? '' : String(e.min),
+      max: e.max === undefined ? '' : String(e.max),
       reason: e.reason,
     };
   });
+}
+
+/** A raw row's range as numbers, or null while it is missing, not a number, or empty. */
+function rawRange(r: DraftRow): { min: number; max: number } | null {
+  const min = Number(r.min);
+  const max = Number(r.max);
+  if (r.min.trim() === '' || r.max.trim() === '') return null;
+  if (!Number.isFinite(min) || !Number.isFinite(max) || min === max) return null;
+  return { min, max };
+}
+
+/**
+ * The rows as far as they are filled in, as a column map to check the values against while the
+ * person edits (rows left out, or raw without a usable range, are skipped).
+ */
+export function draftAsFarAsFilled(rows: DraftRow[]): ColumnMap {
+  const columns: Record<string, ColumnMapEntry> = {};
+  for (const r of rows) {
+    if (r.channel === '' || r.unit === '') continue;
+    const entry: ColumnMapEntry = { channel: r.channel, unit: r.unit };
+    if (r.unit === 'raw') {
+      const range = rawRange(r);
+      if (!range) continue;
+      Object.assign(entry, range);
+    }
+    columns[r.header] = entry;
+  }
+  return { columns };
 }
 
 export type DraftCheck = { ok: true; map: ColumnMap } | { ok: false; problems: string[] };
@@ -62,20 +90,12 @@ export function checkDraft(rows: DraftRow[]): DraftCheck {
     const entry: ColumnMapEntry = { channel: r.channel };
     if (r.unit !== '') entry.unit = r.unit;
     if (r.unit === 'raw') {
-      const min = Number(r.min);
-      const max = Number(r.max);
-      if (
-        r.min.trim() === '' ||
-        r.max.trim() === '' ||
-        !Number.isFinite(min) ||
-        !Number.isFinite(max) ||
-        min === max
-      ) {
+      const range = rawRange(r);
+      if (!range) {
         problems.push(`"${r.header}" is raw: give the value at 0 % and at 100 % output.`);
         continue;
       }
-      entry.min = min;
-      entry.max = max;
+      Object.assign(entry, range);
     }
     columns[r.header] = entry;
   }

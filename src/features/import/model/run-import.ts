@@ -91,8 +91,9 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
       return {
         kind: 'needs-map',
         headers: error.headers ?? inspected?.headers ?? [],
-        proposal: error.proposal ??
-          inspected?.proposal ?? { entries: [], missing: ['time', 'motor1'] },
+        // The preview's proposal has seen the first rows, so it also offers units from values.
+        proposal: inspected?.proposal ??
+          error.proposal ?? { entries: [], missing: ['time', 'motor1'] },
         sampleRows: inspected?.sampleRows ?? [],
       };
     }
