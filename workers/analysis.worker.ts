@@ -6,10 +6,8 @@ import {
 } from '../shared/analysis/analyze-flight';
 import { benchFilters, type FilterBenchResult } from '../shared/analysis/filters/filter-bench';
 import type { FilterSpec } from '../shared/schemas/filters';
-import type { FlightReport } from '../shared/schemas/report';
 import {
   stripTrace,
-  type DetailHead,
   type DetailPart,
   type DetailParts,
   type Trace,
@@ -17,7 +15,7 @@ import {
 import { findSegments } from '../shared/analysis/segments';
 import { resolveThresholds } from '../shared/schemas/thresholds';
 import type { ParsedLog } from '../shared/log/types';
-import type { LogDelivery } from './parse.worker';
+import { receiveDelivery, type AnalysedHead } from './protocol';
 
 /** Logs kept so the filter bench can rerun without the page resending columns (a 300 s, 4 kHz log is ~100 MB). */
 const CACHE_SIZE = 3;
@@ -38,16 +36,11 @@ class LogNotDeliveredError extends Error {
   override name = 'LogNotDeliveredError';
 }
 
-/** The one message the parse worker posts on a handoff port. */
-function receiveLog(port: MessagePort): Promise<ParsedLog> {
-  return new Promise((resolve, reject) => {
-    port.onmessage = (e: MessageEvent<LogDelivery>) => {
-      port.close();
-      if (e.data.ok) resolve(e.data.log);
-      else reject(new LogNotDeliveredError('No log arrived from the reader.'));
-    };
-    port.start();
-  });
+/** The log the parse worker posts on a hand-off port. */
+async function receiveLog(port: MessagePort): Promise<ParsedLog> {
+  const delivery = await receiveDelivery(port);
+  if (!delivery.ok) throw new LogNotDeliveredError('No log arrived from the reader.');
+  return delivery.log;
 }
 
 function analyse(flightId: string, log: ParsedLog, options: AnalyzeOptions): FlightAnalysis {
@@ -71,7 +64,7 @@ const api = {
     flightId: string,
     port: MessagePort,
     options: AnalyzeOptions = {},
-  ): Promise<{ report: FlightReport; head: DetailHead }> {
+  ): Promise<AnalysedHead> {
     const { report, detail } = analyse(flightId, await receiveLog(port), options);
     const { effort, tracking, power, campbell, spectra, ...head } = detail;
     heldParts.set(flightId, { effort, tracking, power, campbell, spectra });

@@ -1,37 +1,20 @@
-import { expose, transfer } from 'comlink';
-import type { ProposedColumnMap } from '../shared/log/column-map';
+import { expose } from 'comlink';
 import { LogFormatError, ParseCancelledError } from '../shared/log/errors';
 import { gunzip, isGzip, iterateBytes } from '../shared/log/gzip';
-import { inspectHeader, type HeaderPreview } from '../shared/log/header';
+import { inspectHeader } from '../shared/log/header';
 import { parseLogStream, type ReadOptions } from '../shared/log/parse';
 import type { ParsedLog } from '../shared/log/types';
-
-/** An import that did not produce a log, as plain data (comlink drops custom error fields). */
-export interface ParseFailure {
-  /** LogFormatError code, 'cancelled', or 'internal' for a fault of ours. */
-  code: string;
-  message: string;
-  line?: number;
-  column?: number;
-  header?: string;
-  headers?: string[];
-  proposal?: ProposedColumnMap;
-}
-
-export type ParseResult = { ok: true; log: ParsedLog } | { ok: false; error: ParseFailure };
-
-/** A parsed log without its columns: what the page needs once the columns went elsewhere. */
-export type LogSummary = Omit<ParsedLog, 'columns'>;
-export type HandoffResult = { ok: true; summary: LogSummary } | { ok: false; error: ParseFailure };
-
-/** The one message `parseInto` posts on its port: the log, or word that none is coming. */
-export type LogDelivery = { ok: true; log: ParsedLog } | { ok: false };
-export type InspectResult =
-  { ok: true; preview: HeaderPreview } | { ok: false; error: ParseFailure };
+import {
+  postDelivery,
+  type HandoffResult,
+  type InspectResult,
+  type ParseFailure,
+  type ParseProgress,
+} from './protocol';
 
 /** How much of a file the column-map screen needs. */
 const HEAD_BYTES = 64 * 1024;
-/** Progress at most ten times a second (STYLE.md, Workers). */
+/** Progress at most ten times a second: enough for a bar, too few to crowd the page. */
 const PROGRESS_INTERVAL_MS = 100;
 /** How often the parse lets queued messages (a cancel) run, when chunks arrive back to back. */
 const BREAK_INTERVAL_MS = 50;
@@ -52,7 +35,7 @@ function failure(err: unknown): ParseFailure {
   return { code: 'internal', message: `The import stopped on an internal error: ${message}` };
 }
 
-type OnProgress = (p: { bytes: number; totalBytes: number; rows: number }) => void;
+type OnProgress = (p: ParseProgress) => void;
 
 async function parseJob(
   jobId: string,
@@ -87,30 +70,10 @@ async function parseJob(
   }
 }
 
-/** Every buffer behind the log's columns (a buffer may back more than one column). */
-function columnBuffers(log: ParsedLog): ArrayBuffer[] {
-  return [...new Set(Object.values(log.columns).map((c) => c.buffer as ArrayBuffer))];
-}
-
 const api = {
-  /** Parses a dropped file (CSV or .csv.gz) into typed columns, handed back as transferables. */
-  async parseFile(
-    jobId: string,
-    file: Blob,
-    options: ReadOptions,
-    onProgress?: OnProgress,
-  ): Promise<ParseResult> {
-    try {
-      const log = await parseJob(jobId, file, options, onProgress);
-      return transfer({ ok: true as const, log }, columnBuffers(log));
-    } catch (err) {
-      return { ok: false, error: failure(err) };
-    }
-  },
-
   /**
-   * Like parseFile, but the columns go straight to `port` (the analysis worker listens on the
-   * other end) and the page gets only the summary: a 100 MB log never lands on the main
+   * Parses a dropped file (CSV or .csv.gz) into typed columns that go straight to `port` (the
+   * analysis worker listens on the other end); the page gets only the summary: a 100 MB log never lands on the main
    * thread, where its buffers would cost a long garbage collection. Exactly one LogDelivery
    * is posted on the port, also when the read fails, so the listener never waits forever;
    * the listener closes the port once it has it.
@@ -124,18 +87,16 @@ const api = {
   ): Promise<HandoffResult> {
     try {
       const log = await parseJob(jobId, file, options, onProgress);
-      const delivery: LogDelivery = { ok: true, log };
-      port.postMessage(delivery, columnBuffers(log));
+      postDelivery(port, { ok: true, log });
       const { columns: _sent, ...summary } = log;
       return { ok: true, summary };
     } catch (err) {
-      const none: LogDelivery = { ok: false };
-      port.postMessage(none);
+      postDelivery(port, { ok: false });
       return { ok: false, error: failure(err) };
     }
   },
 
-  /** Asks a running parseFile to stop; it ends at the next chunk with code 'cancelled'. */
+  /** Asks a running read to stop; it ends at the next chunk with code 'cancelled'. */
   cancel(jobId: string): void {
     cancelled.add(jobId);
   },

@@ -1,19 +1,18 @@
 import { dehydrate, hydrate, type QueryClient } from '@tanstack/react-query';
+import { aircraftKeys } from '../api/aircraft';
+import { presetKeys } from '../api/presets';
 
 /**
- * Keeps the small team lists (teams, aircraft, import presets) across reloads, so a pilot who
- * opens the app at the field with no network can still pick an aircraft for an import. Flights
- * and reviews are not kept here: flights read on this device live in IndexedDB.
+ * Keeps the small team lists (aircraft, import presets) across reloads, so a pilot who opens
+ * the app at the field with no network can still pick an aircraft for an import. Flights and
+ * reviews are not kept here: flights read on this device live in IndexedDB.
  */
 const KEY = 'hoverprint.query-cache.v1';
-const keptWhole = new Set(['import', 'presets']);
-/** Of these only the lists are kept; details (service log, members, trends…) are read fresh. */
-const keptLists = new Set(['teams', 'aircraft']);
+/** Kept whole, or (aircraft) only the lists: details (service log, trends…) are read fresh. */
+const kept: readonly (readonly string[])[] = [presetKeys.all, aircraftKeys.lists()];
 
 export function isKept(queryKey: readonly unknown[]): boolean {
-  const [root, level] = queryKey;
-  if (typeof root !== 'string') return false;
-  return keptWhole.has(root) || (keptLists.has(root) && level === 'list');
+  return kept.some((prefix) => prefix.every((part, i) => queryKey[i] === part));
 }
 
 export function restoreQueries(client: QueryClient, storage: Storage = localStorage): void {
@@ -54,8 +53,4 @@ export function persistQueries(
       save();
     }
   };
-}
-
-export function forgetPersistedQueries(storage: Storage = localStorage) {
-  storage.removeItem(KEY);
 }

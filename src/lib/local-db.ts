@@ -217,11 +217,6 @@ export async function getRereadMap(flightId: string): Promise<ColumnMap | undefi
   return (await localDb().rereadMaps.get(flightId))?.columnMap;
 }
 
-/** Remove a flight from this device; the caller decides whether that is safe. */
-export async function deleteLocalFlight(id: string): Promise<void> {
-  await localDb().flights.delete(id);
-}
-
 export interface EnqueueInput {
   id: string;
   method: OutboxMethod;

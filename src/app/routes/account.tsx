@@ -1,6 +1,6 @@
 import { PageHeader } from '../../components/ui/page-header';
 import { Panel } from '../../components/ui/panel';
-import { useMe } from '../../features/session/api/session-queries';
+import { useMe } from '../../api/session';
 import {
   PasswordSettings,
   ProfileSettings,

@@ -3,17 +3,14 @@ import { Alert, ErrorNote, describeError } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
 import { Loading } from '../../components/ui/panel';
-import {
-  useDeleteAircraft,
-  useUpdateAircraft,
-} from '../../features/aircraft/api/aircraft-mutations';
-import { useAircraft } from '../../features/aircraft/api/aircraft-queries';
+import { useDeleteAircraft, useUpdateAircraft } from '../../api/aircraft';
+import { useAircraft } from '../../api/aircraft';
 import { AirframeEditor } from '../../features/aircraft/components/airframe-editor';
 import { BenchRunsPanel } from '../../features/aircraft/components/bench-runs-panel';
 import { PartsEditor } from '../../features/aircraft/components/parts-editor';
 import { ServiceLogPanel } from '../../features/aircraft/components/service-log-panel';
 import { TrendsPanel } from '../../features/aircraft/components/trends-panel';
-import { useMe } from '../../features/session/api/session-queries';
+import { useMe } from '../../api/session';
 import { RequireSession } from '../../features/session/components/require-session';
 import { can } from '../../../shared/auth/permissions';
 import type { Aircraft } from '../../../shared/schemas/aircraft';

@@ -1,17 +1,16 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { NavLink, Outlet } from 'react-router-dom';
-import { useDevMailAvailable } from '../../features/mail/api/mail-api';
+import { useDevMailAvailable } from '../../api/mail';
 import { useActiveTeam } from '../../features/session/active-team';
-import { sessionKeys, useMe } from '../../features/session/api/session-queries';
+import { sessionKeys, useMe } from '../../api/session';
 import { AccountMenu } from '../../features/session/components/account-menu';
 import { TeamSwitcher } from '../../features/session/components/team-switcher';
 import { ServerStatus } from '../../features/status/components/server-status';
 import { SyncIndicator } from '../../features/sync/components/sync-indicator';
 import type { SyncPassResult } from '../../features/sync/sync-runner';
 import { useSyncDriver } from '../../features/sync/use-sync';
-import { fleetKeys } from '../../features/fleet/api/fleet-queries';
-import { aircraftKeys } from '../../features/aircraft/api/aircraft-queries';
+import { refreshAfterSync } from '../../api/flights';
 
 const nav = [
   { to: '/', label: 'Fleet', end: true },
@@ -33,11 +32,7 @@ export function AppLayout() {
       // The session ended elsewhere (expired, password changed): let the header find out.
       if (result.stoppedBy === 'signed-out')
         void queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
-      if (result.flightsSynced > 0)
-        void Promise.all([
-          queryClient.invalidateQueries({ queryKey: fleetKeys.lists() }),
-          queryClient.invalidateQueries({ queryKey: aircraftKeys.all }),
-        ]);
+      if (result.flightsSynced > 0) void refreshAfterSync(queryClient);
     },
     [queryClient],
   );

@@ -2,7 +2,7 @@ import { useNavigate, useParams } from 'react-router-dom';
 import { AuthCard } from '../../components/ui/auth-card';
 import { InviteAcceptance } from '../../features/auth/components/invite-acceptance';
 import { setActiveTeamId } from '../../features/session/active-team';
-import { useMe, useSetMe } from '../../features/session/api/session-queries';
+import { useMe, useSetMe } from '../../api/session';
 
 export function InviteRoute() {
   const { token = '' } = useParams();

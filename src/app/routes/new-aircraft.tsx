@@ -1,7 +1,7 @@
 import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
 import { Alert, describeError } from '../../components/ui/alert';
-import { useCreateAircraft } from '../../features/aircraft/api/aircraft-mutations';
+import { useCreateAircraft } from '../../api/aircraft';
 import { AirframeEditor } from '../../features/aircraft/components/airframe-editor';
 import { newAirframeForm } from '../../features/aircraft/model/airframe-form';
 import { useActiveTeam } from '../../features/session/active-team';

@@ -1,14 +1,11 @@
 import { useNavigate } from 'react-router-dom';
 import { AuthCard } from '../../components/ui/auth-card';
 import { setActiveTeamId } from '../../features/session/active-team';
-import { sessionKeys } from '../../features/session/api/session-queries';
 import { RequireSession } from '../../features/session/components/require-session';
 import { CreateTeamForm } from '../../features/team/components/create-team-form';
-import { useQueryClient } from '@tanstack/react-query';
 
 export function NewTeamRoute() {
   const navigate = useNavigate();
-  const queryClient = useQueryClient();
   return (
     <RequireSession>
       <AuthCard
@@ -16,7 +13,6 @@ export function NewTeamRoute() {
         lead="You will be its owner and can invite pilots, tuners, coaches and viewers."
       >
         <CreateTeamForm
-          onTeamsChanged={() => queryClient.invalidateQueries({ queryKey: sessionKeys.me() })}
           onCreated={(team) => {
             setActiveTeamId(team.id);
             navigate('/', { replace: true });

@@ -1,7 +1,7 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { AuthCard } from '../../components/ui/auth-card';
 import { ResetConfirmForm } from '../../features/auth/components/reset-confirm-form';
-import { useSetMe } from '../../features/session/api/session-queries';
+import { useSetMe } from '../../api/session';
 
 export function ResetConfirmRoute() {
   const { token = '' } = useParams();

@@ -1,28 +1,25 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
-import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { reviewQueries, type ReviewFlight } from '../../features/review/api/flight-api';
+import { useQueryClient } from '@tanstack/react-query';
+import { useFlightComments } from '../../api/comments';
+import { flightKeys, useReviewFlight, type ReviewFlight } from '../../api/flights';
 import { ReviewPage } from '../../features/review/components/review-page';
-import { assumedAirframe } from '../../features/review/model/assumed-airframe';
+import { useAircraftAirframe } from '../../features/review/model/use-aircraft-airframe';
 import { defaultSection, isSectionId } from '../../features/review/model/sections';
 import { useCursor } from '../../features/review/model/use-cursor';
-import { commentQueries } from '../../features/comments/api/comment-queries';
 import {
   CommentsRail,
   type CommentsRailHandle,
 } from '../../features/comments/components/comments-rail';
-import {
-  ComparePanel,
-  type CompareCandidate,
-} from '../../features/compare/components/compare-panel';
-import { useMe } from '../../features/session/api/session-queries';
+import { ComparePanel } from '../../features/compare/components/compare-panel';
+import { useMe } from '../../api/session';
 import { useActiveTeam } from '../../features/session/active-team';
 import { AssignAircraft } from '../../features/import/components/assign-aircraft';
-import { listLocalFlights } from '../../lib/local-db';
+import { useCompare } from '../../features/compare/model/use-compare';
 
 export function ReviewRoute() {
   const { flightId = '' } = useParams();
-  const flight = useQuery(reviewQueries.flight(flightId));
+  const flight = useReviewFlight(flightId);
   if (flight.isPending) return <p className="text-sm text-ink-soft">Opening the flight…</p>;
   if (flight.isError)
     return (
@@ -34,31 +31,25 @@ export function ReviewRoute() {
   return <LoadedReview flight={flight.data} />;
 }
 
-const flightLabel = (f: { recordedAt: string | null; fileName: string }) => {
-  const d = f.recordedAt ? new Date(f.recordedAt) : null;
-  return d && !Number.isNaN(d.getTime())
-    ? `${d.toLocaleDateString('en-GB', { day: 'numeric', month: 'short' })} ${d.toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit' })} · ${f.fileName}`
-    : f.fileName;
-};
-
 function LoadedReview({ flight }: { flight: ReviewFlight }) {
   const { section } = useParams();
-  const [params, setParams] = useSearchParams();
+  const [params] = useSearchParams();
   const { report } = flight;
   const [cursorT, setCursor] = useCursor(report.durationS);
   const me = useMe().data ?? null;
   const sectionId = isSectionId(section) ? section : defaultSection(report.findings);
   const signedIn = me !== null;
 
-  const aircraft = useQuery({
-    ...reviewQueries.aircraft(flight.aircraftId ?? ''),
-    enabled: signedIn && flight.aircraftId !== null,
-  });
-  const airframe = aircraft.data?.airframe ?? assumedAirframe(report.motorCount);
+  const aircraft = useAircraftAirframe(flight, signedIn);
+  // The aircraft's name as the team keeps it now (renamed since the flight, say).
+  const shown = useMemo(
+    () => ({ ...flight, aircraftName: aircraft.aircraftName ?? flight.aircraftName }),
+    [flight, aircraft.aircraftName],
+  );
   const role = me?.teams.find((t) => t.id === flight.teamId)?.role ?? null;
 
   const onServer = signedIn && flight.teamId !== null && flight.syncedToTeam;
-  const comments = useQuery({ ...commentQueries.flight(flight.id), enabled: onServer });
+  const comments = useFlightComments(flight.id, onServer);
   const pins = useMemo(
     () =>
       (comments.data?.comments ?? [])
@@ -86,44 +77,7 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
       ?.scrollIntoView({ block: 'nearest', behavior: 'smooth' });
   }, []);
 
-  // Compare: other flights of the same aircraft, from the team server and from this device.
-  const vs = params.get('vs');
-  const serverList = useQuery({
-    ...reviewQueries.aircraftFlights(flight.teamId ?? '', flight.aircraftId ?? ''),
-    enabled: sectionId === 'compare' && onServer && flight.aircraftId !== null,
-  });
-  const localList = useQuery({
-    queryKey: ['review', 'local-flights'],
-    queryFn: listLocalFlights,
-    enabled: sectionId === 'compare',
-  });
-  const candidates: CompareCandidate[] = useMemo(() => {
-    const seen = new Set<string>([flight.id]);
-    const out: CompareCandidate[] = [];
-    for (const f of serverList.data?.flights ?? []) {
-      if (seen.has(f.id)) continue;
-      seen.add(f.id);
-      out.push({ id: f.id, label: flightLabel(f) });
-    }
-    for (const f of localList.data ?? []) {
-      if (seen.has(f.id)) continue;
-      const same =
-        flight.aircraftId !== null
-          ? f.aircraftId === flight.aircraftId
-          : !f.aircraftId && f.report.motorCount === report.motorCount;
-      if (!same) continue;
-      seen.add(f.id);
-      out.push({
-        id: f.id,
-        label: `${flightLabel({ recordedAt: f.recordedAt ?? new Date(f.savedAt).toISOString(), fileName: f.fileName })} (this device)`,
-      });
-    }
-    return out;
-  }, [serverList.data, localList.data, flight.id, flight.aircraftId, report.motorCount]);
-  const other = useQuery({
-    ...reviewQueries.flight(vs ?? ''),
-    enabled: sectionId === 'compare' && vs !== null,
-  });
+  const compare = useCompare(flight, { active: sectionId === 'compare', onServer });
 
   const queryClient = useQueryClient();
   const { team } = useActiveTeam();
@@ -140,9 +94,7 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
       file={flight.file}
       fileName={flight.fileName}
       teamId={flight.teamId ?? team!.id}
-      onDone={() =>
-        void queryClient.invalidateQueries({ queryKey: reviewQueries.flight(flight.id).queryKey })
-      }
+      onDone={() => void queryClient.invalidateQueries({ queryKey: flightKeys.detail(flight.id) })}
     />
   ) : flight.source === 'local' ? (
     <p className="text-xs text-ink-faint">
@@ -155,9 +107,9 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
 
   return (
     <ReviewPage
-      flight={flight}
-      airframe={airframe}
-      airframeAssumed={!aircraft.data}
+      flight={shown}
+      airframe={aircraft.airframe}
+      airframeAssumed={aircraft.assumed}
       section={sectionId}
       cursorT={cursorT}
       onCursor={setCursor}
@@ -183,29 +135,7 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
       compare={
         <ComparePanel
           current={{ label: 'this flight', report: flight.report, detail: flight.detail }}
-          candidates={candidates}
-          otherId={vs}
-          onPick={(id) =>
-            setParams(
-              (old) => {
-                const next = new URLSearchParams(old);
-                next.set('vs', id);
-                return next;
-              },
-              { replace: true },
-            )
-          }
-          other={
-            other.data
-              ? {
-                  label: flightLabel(other.data),
-                  report: other.data.report,
-                  detail: other.data.detail,
-                }
-              : null
-          }
-          loading={other.isFetching}
-          error={other.isError ? other.error.message : null}
+          {...compare}
           emptyReason={
             flight.aircraftId === null
               ? 'This flight was imported without an aircraft; flights of the assumed quad on this device are offered when there are any.'

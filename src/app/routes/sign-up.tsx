@@ -1,7 +1,7 @@
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { AuthCard } from '../../components/ui/auth-card';
 import { SignUpForm } from '../../features/auth/components/sign-up-form';
-import { useSetMe } from '../../features/session/api/session-queries';
+import { useSetMe } from '../../api/session';
 import { safeNext } from './safe-next';
 
 export function SignUpRoute() {

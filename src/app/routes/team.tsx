@@ -1,8 +1,7 @@
-import { useQueryClient } from '@tanstack/react-query';
 import { PageHeader } from '../../components/ui/page-header';
 import { Panel } from '../../components/ui/panel';
 import { useActiveTeam } from '../../features/session/active-team';
-import { sessionKeys, useMe } from '../../features/session/api/session-queries';
+import { useMe } from '../../api/session';
 import { RequireSession } from '../../features/session/components/require-session';
 import { InvitesPanel } from '../../features/team/components/invites-panel';
 import { MembersTable } from '../../features/team/components/members-table';
@@ -24,9 +23,7 @@ export function TeamRoute() {
 function TeamPage() {
   const { team } = useActiveTeam();
   const me = useMe().data;
-  const queryClient = useQueryClient();
   if (!team || !me) return <NoTeam title="Team" />;
-  const refreshSession = () => queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
   return (
     <>
       <PageHeader
@@ -41,7 +38,7 @@ function TeamPage() {
       <div className="space-y-5">
         {can(team.role, 'team.update') && (
           <Panel title="Name">
-            <TeamNameForm teamId={team.id} name={team.name} onTeamsChanged={refreshSession} />
+            <TeamNameForm teamId={team.id} name={team.name} />
           </Panel>
         )}
         <Panel title="Members">

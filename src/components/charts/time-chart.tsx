@@ -98,7 +98,7 @@ export function TimeChart(props: TimeChartProps) {
   const chartRef = useRef<EChartsType | null>(null);
   // Built in two steps, a frame apart: axes and lines first, then legend, tooltip, zoom and
   // marks. A chart's first build runs much of echarts' code for the first time, and in one
-  // step it is the longest task of the review's first paint (PRODUCT.md §10: none over 100 ms).
+  // step it is the longest task of the review's first paint (tests/bench/README.md: none over 100 ms).
   const [complete, setComplete] = useState(false);
   const onCursorRef = useRef(onCursor);
   const onPinRef = useRef(onPin);

@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 /**
  * False on the first render, true once the browser has painted it. Charts wait for this so the
  * page's text (the verdict) paints in one task and each chart builds in a task of its own,
- * keeping every main-thread task short (PRODUCT.md §10: none over 100 ms).
+ * keeping every main-thread task short (tests/bench/README.md: none over 100 ms).
  */
 export function useAfterPaint(): boolean {
   const [ready, setReady] = useState(false);

@@ -1,6 +1,6 @@
 import { useCallback, useSyncExternalStore } from 'react';
 import type { Me } from '../../../shared/schemas/auth';
-import { useMe } from './api/session-queries';
+import { useMe } from '../../api/session';
 
 const KEY = 'hoverprint.active-team';
 const listeners = new Set<() => void>();

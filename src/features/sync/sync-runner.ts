@@ -12,7 +12,7 @@ import {
   type LocalFlight,
 } from '../../lib/local-db';
 import type { FlightPutInput } from '../../../shared/schemas/flights';
-import { flightPath, flightRawPath } from './sync-paths';
+import { flightPath, flightRawPath } from '../../api/flights';
 
 /**
  * One pass over what this device still owes the server: first the flights (summary, then raw

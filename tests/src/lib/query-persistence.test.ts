@@ -2,6 +2,7 @@
 import { QueryClient } from '@tanstack/react-query';
 import { afterEach, describe, expect, it } from 'vitest';
 import { persistQueries, restoreQueries } from '../../../src/app/query-persistence';
+import { presetKeys } from '../../../src/api/presets';
 
 afterEach(() => localStorage.clear());
 
@@ -10,9 +11,7 @@ describe('query persistence', () => {
     const before = new QueryClient();
     const stop = persistQueries(before, localStorage, 0);
     before.setQueryData(['aircraft', 'list', 'team-1'], { aircraft: [{ id: 'a1', name: 'Kite' }] });
-    before.setQueryData(['import', 'aircraft', 'team-1'], {
-      aircraft: [{ id: 'a1', name: 'Kite' }],
-    });
+    before.setQueryData(presetKeys.team('team-1'), { presets: [] });
     before.setQueryData(['aircraft', 'detail', 'a1', 'service-log'], { entries: [] });
     before.setQueryData(['teams', 'detail', 'team-1', 'members'], { members: [] });
     before.setQueryData(['review', 'flight', 'f1'], { big: true });
@@ -24,7 +23,7 @@ describe('query persistence', () => {
     expect(after.getQueryData(['aircraft', 'list', 'team-1'])).toEqual({
       aircraft: [{ id: 'a1', name: 'Kite' }],
     });
-    expect(after.getQueryData(['import', 'aircraft', 'team-1'])).toBeDefined();
+    expect(after.getQueryData(presetKeys.team('team-1'))).toEqual({ presets: [] });
     expect(after.getQueryData(['aircraft', 'detail', 'a1', 'service-log'])).toBeUndefined();
     expect(after.getQueryData(['teams', 'detail', 'team-1', 'members'])).toBeUndefined();
     expect(after.getQueryData(['review', 'flight', 'f1'])).toBeUndefined();

@@ -2,7 +2,7 @@ import 'fake-indexeddb/auto';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { ColumnMap } from '../../../shared/log/column-map';
 import type { ReadOptions } from '../../../shared/log/parse';
-import type { ReviewFlight } from '../../../src/features/review/api/flight-api';
+import type { ReviewFlight } from '../../../src/api/flights';
 import { closeLocalDb, localDb, saveRereadMap } from '../../../src/lib/local-db';
 import { defaultQuadX } from '../../../shared/airframe/presets';
 import { sampleDetail, sampleFile, sampleReport } from '../helpers/flight-fixture';
@@ -17,7 +17,7 @@ let loaded = false;
 const headers = ['Timestamp (s)', 'Out0'];
 const covers = (map: ColumnMap | undefined) => !!map && headers.every((h) => h in map.columns);
 
-vi.mock('../../../src/lib/parse-worker', () => ({
+vi.mock('../../../src/lib/log-pipeline/workers', () => ({
   parseWorker: () => ({
     parseInto: async (_job: string, _file: Blob, options: ReadOptions, port: MessagePort) => {
       reads.push(options);
@@ -31,9 +31,6 @@ vi.mock('../../../src/lib/parse-worker', () => ({
           };
     },
   }),
-}));
-
-vi.mock('../../../src/lib/analysis-worker', () => ({
   analysisWorker: () => ({
     filterBench: async () => {
       if (!loaded) throw Object.assign(new Error('not loaded'), { name: 'FlightNotLoadedError' });

@@ -10,8 +10,8 @@ import { Caution } from '../../../components/ui/caution';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { Empty, Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { useAddBenchRun, useDeleteBenchRun } from '../api/aircraft-mutations';
-import { useBenchRuns } from '../api/aircraft-queries';
+import { useAddBenchRun, useDeleteBenchRun } from '../../../api/aircraft-records';
+import { useBenchRuns } from '../../../api/aircraft-records';
 import { optionalNumber } from '../model/airframe-form';
 import { parseBenchPaste } from '../model/bench-paste';
 

@@ -8,7 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { Caution } from '../../../components/ui/caution';
 import { optionalNumber } from '../model/airframe-form';
-import { useUpdateAircraft } from '../api/aircraft-mutations';
+import { useUpdateAircraft } from '../../../api/aircraft';
 
 const PartsForm = z.object({ components: Components, notes: z.string().trim().max(4000) });
 type PartsForm = z.infer<typeof PartsForm>;

@@ -8,8 +8,8 @@ import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { Empty, Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { useAddServiceEntry, useDeleteServiceEntry } from '../api/aircraft-mutations';
-import { useServiceLog } from '../api/aircraft-queries';
+import { useAddServiceEntry, useDeleteServiceEntry } from '../../../api/aircraft-records';
+import { useServiceLog } from '../../../api/aircraft-records';
 import { optionalNumber } from '../model/airframe-form';
 
 const kindLabels: Record<ServiceKind, string> = {

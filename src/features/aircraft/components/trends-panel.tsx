@@ -3,7 +3,7 @@ import type { ServiceEntry, TrendPoint } from '../../../../shared/schemas/aircra
 import { inkSeries, motorColor } from '../../../components/charts/palette';
 import { ErrorNote } from '../../../components/ui/alert';
 import { Empty, Loading } from '../../../components/ui/panel';
-import { useServiceLog, useTrends } from '../api/aircraft-queries';
+import { useServiceLog, useTrends } from '../../../api/aircraft-records';
 import { TrendChart, type TrendEvent, type TrendSeries } from './trend-chart';
 
 const axisColors = {

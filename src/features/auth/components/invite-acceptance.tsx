@@ -4,7 +4,7 @@ import { Alert, describeError } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Loading } from '../../../components/ui/panel';
 import { roleDescriptions, roleLabels } from '../../../lib/role-labels';
-import { useAcceptInvite, useInvitePreview } from '../api/auth-queries';
+import { useAcceptInvite, useInvitePreview } from '../../../api/invites';
 import { SignUpForm } from './sign-up-form';
 
 /** What an invite link opens: who invites you to which team as what, and the way in. */

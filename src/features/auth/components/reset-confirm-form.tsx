@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
-import { useConfirmReset } from '../api/auth-queries';
+import { useConfirmReset } from '../../../api/auth';
 
 export function ResetConfirmForm({ token, onDone }: { token: string; onDone: (me: Me) => void }) {
   const confirm = useConfirmReset();

@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
-import { useRequestReset } from '../api/auth-queries';
+import { useRequestReset } from '../../../api/auth';
 
 export function ResetRequestForm() {
   const request = useRequestReset();

@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
-import { useSignIn } from '../api/auth-queries';
+import { useSignIn } from '../../../api/auth';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (me: Me) => void }) {
   const signIn = useSignIn();

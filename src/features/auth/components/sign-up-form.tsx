@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
-import { useSignUp } from '../api/auth-queries';
+import { useSignUp } from '../../../api/auth';
 
 /** New account; with an invite token the account joins that team on creation. */
 export function SignUpForm({

@@ -1,13 +1,13 @@
 import { forwardRef, useImperativeHandle, useMemo, useRef, useState } from 'react';
-import { useQuery } from '@tanstack/react-query';
 import type { Role, UserRef } from '../../../../shared/schemas/common';
-import { commentQueries } from '../api/comment-queries';
 import {
   useAddComment,
   useDeleteComment,
-  useRequestReview,
+  useFlightComments,
   useUpdateComment,
-} from '../api/comment-mutations';
+} from '../../../api/comments';
+import { useMembers } from '../../../api/members';
+import { useRequestReview } from '../../../api/reviews';
 import { commentRights } from '../model/permissions';
 import { toThreads } from '../model/threads';
 import { CommentComposer, type ComposerHandle } from './comment-composer';
@@ -52,8 +52,8 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
     } = props;
     const rights = commentRights(role, me?.id ?? null, pilotId);
     const onServer = teamId !== null && me !== null;
-    const comments = useQuery({ ...commentQueries.flight(flightId), enabled: onServer });
-    const membersQ = useQuery({ ...commentQueries.members(teamId ?? ''), enabled: onServer });
+    const comments = useFlightComments(flightId, onServer);
+    const membersQ = useMembers(teamId ?? '', onServer);
     const members: UserRef[] = useMemo(
       () =>
         (membersQ.data?.members ?? [])

@@ -1,4 +1,4 @@
-import type { FlightFilter } from '../api/fleet-api';
+import type { FlightFilter } from '../../../api/flight-list';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 

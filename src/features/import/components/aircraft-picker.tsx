@@ -1,6 +1,5 @@
-import { useQuery } from '@tanstack/react-query';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
-import { importAircraftQueries } from '../api/aircraft-api';
+import { useTeamAircraft } from '../../../api/aircraft';
 
 export interface AircraftPickerProps {
   /** Null when signed out: only the assumed airframe is offered. */
@@ -13,10 +12,7 @@ export const UNKNOWN_AIRCRAFT = '';
 
 /** Which machine flew: a team aircraft (its airframe drives the analysis) or an assumed quad X. */
 export function AircraftPicker({ teamId, value, onChange }: AircraftPickerProps) {
-  const aircraft = useQuery({
-    ...importAircraftQueries.team(teamId ?? ''),
-    enabled: teamId !== null,
-  });
+  const aircraft = useTeamAircraft(teamId ?? '', teamId !== null);
   const list = aircraft.data?.aircraft ?? [];
   return (
     <label className="flex flex-col gap-1 text-sm">

@@ -6,12 +6,16 @@ import { useQuery } from '@tanstack/react-query';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
 import { mapCoveringHeaders } from '../../../../shared/log/column-map';
 import { saveRereadMap } from '../../../lib/local-db';
-import { parseWorker } from '../../../lib/parse-worker';
+import {
+  cancelRead,
+  columnMapNeeded,
+  synthesiseSampleFile,
+} from '../../../lib/log-pipeline/pipeline';
 import { isLogFile, jobsReducer, nextQueued, type ImportJob } from '../model/import-jobs';
 import { runImport } from '../model/run-import';
 import { loadRemapSource } from '../model/remap-source';
-import { synthesiseSampleFile } from '../model/sample-flight';
-import { presetQueries, useSavePreset } from '../api/preset-api';
+import { localKeys } from '../../../api/local';
+import { usePresets, useSavePreset } from '../../../api/presets';
 import { AircraftPicker, UNKNOWN_AIRCRAFT } from './aircraft-picker';
 import { ColumnMapStep } from './column-map-step';
 import { JobRow } from './job-row';
@@ -34,7 +38,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
   const [sampleError, setSampleError] = useState<string | null>(null);
   const cancelled = useRef(new Set<string>());
   const single = useRef<string | null>(null);
-  const presets = useQuery({ ...presetQueries.team(teamId ?? ''), enabled: teamId !== null });
+  const presets = usePresets(teamId ?? '', teamId !== null);
   const savePreset = useSavePreset(teamId ?? '');
 
   // `?remap=<flight id>`: the review's filter bench could not read a kept flight's raw log
@@ -43,11 +47,12 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
   const navigate = useNavigate();
   const remapId = params.get('remap');
   const remap = useQuery({
-    queryKey: ['import', 'remap', remapId],
+    queryKey: localKeys.remapSource(remapId),
     queryFn: () => loadRemapSource(remapId!),
     enabled: remapId !== null,
     staleTime: Infinity,
     retry: false,
+    networkMode: 'always',
   });
   const [remapError, setRemapError] = useState<string | null>(null);
   const endRemap = () =>
@@ -118,25 +123,13 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
 
   const cancel = (id: string) => {
     cancelled.current.add(id);
-    void parseWorker().cancel(id);
+    void cancelRead(id);
     dispatch({ type: 'status', id, status: { kind: 'cancelled' } });
   };
 
   const openMap = async (job: ImportJob) => {
     try {
-      const answer = await parseWorker().inspectHeader(job.file);
-      if (!answer.ok) throw new Error(answer.error.message);
-      const inspected = answer.preview;
-      dispatch({
-        type: 'status',
-        id: job.id,
-        status: {
-          kind: 'needs-map',
-          headers: inspected.headers,
-          proposal: inspected.proposal,
-          sampleRows: inspected.sampleRows,
-        },
-      });
+      dispatch({ type: 'status', id: job.id, status: await columnMapNeeded(job.file) });
     } catch (e) {
       dispatch({
         type: 'status',
@@ -144,10 +137,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
         status: {
           kind: 'failed',
           canMap: false,
-          problem: {
-            code: 'header',
-            message: `The header itself cannot be read: ${e instanceof Error ? e.message : String(e)}`,
-          },
+          problem: { code: 'header', message: e instanceof Error ? e.message : String(e) },
         },
       });
     }

@@ -1,4 +1,5 @@
-import type { ProposedColumnMap, ColumnMap } from '../../../../shared/log/column-map';
+import type { ColumnMap } from '../../../../shared/log/column-map';
+import type { ColumnMapNeeded } from '../../../lib/log-pipeline/pipeline';
 
 /** What the engine said about a file it could not read, as the job row shows it. */
 export interface ImportProblem {
@@ -13,7 +14,7 @@ export type JobStatus =
   | { kind: 'queued' }
   | { kind: 'reading'; bytes: number; rows: number }
   | { kind: 'analysing'; rows: number }
-  | { kind: 'needs-map'; headers: string[]; proposal: ProposedColumnMap; sampleRows: string[][] }
+  | ColumnMapNeeded
   | { kind: 'failed'; problem: ImportProblem; canMap: boolean }
   | { kind: 'cancelled' }
   | { kind: 'done'; flightId: string; findings: number; worst: 'note' | 'watch' | 'act' | null };

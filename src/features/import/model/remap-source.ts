@@ -1,7 +1,7 @@
 import type { HeaderPreview } from '../../../../shared/log/header';
-import { pathTo } from '../../../../shared/api/paths';
+import { fetchRawLog } from '../../../api/flights';
 import { getLocalFlight } from '../../../lib/local-db';
-import { parseWorker } from '../../../lib/parse-worker';
+import { inspectFile } from '../../../lib/log-pipeline/pipeline';
 
 /** A kept flight's raw log and the start of it, for mapping its columns once more. */
 export interface RemapSource {
@@ -22,17 +22,8 @@ export async function loadRemapSource(flightId: string): Promise<RemapSource> {
     file = local.file;
     fileName = local.fileName;
   } else {
-    const res = await fetch(pathTo('flightRaw', { id: flightId }), { credentials: 'same-origin' });
-    if (!res.ok)
-      throw new Error(
-        res.status === 404
-          ? 'The raw log of this flight is not on this device or on the team server.'
-          : `The raw log could not be fetched (HTTP ${res.status}); try again when online and signed in.`,
-      );
-    file = await res.blob();
+    file = await fetchRawLog(flightId);
     fileName = 'the stored log';
   }
-  const answer = await parseWorker().inspectHeader(file);
-  if (!answer.ok) throw new Error(`The header itself cannot be read: ${answer.error.message}`);
-  return { flightId, fileName, preview: answer.preview };
+  return { flightId, fileName, preview: await inspectFile(file) };
 }

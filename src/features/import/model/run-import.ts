@@ -1,14 +1,13 @@
-import { proxy, transfer } from 'comlink';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { ColumnMap } from '../../../../shared/log/column-map';
 import { severityRank, type Severity } from '../../../../shared/schemas/report';
+import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import {
-  DETAIL_PARTS,
-  type DetailParts,
-  type ReviewDetail,
-} from '../../../../shared/analysis/review-detail';
-import { parseWorker } from '../../../lib/parse-worker';
-import { analysisWorker } from '../../../lib/analysis-worker';
+  collectDetail,
+  columnMapNeeded,
+  forgetAnalysed,
+  readAndAnalyse,
+} from '../../../lib/log-pipeline/pipeline';
 import { saveLocalFlight } from '../../../lib/local-db';
 import type { JobStatus } from './import-jobs';
 
@@ -34,12 +33,6 @@ export interface ImportRequest {
   isCancelled: () => boolean;
 }
 
-/** Progress reports arrive from the worker at most ten times a second. */
-export interface ParseProgress {
-  bytes: number;
-  rows: number;
-}
-
 /**
  * One file through the same path every import takes: read in the parse worker, analysed in the
  * analysis worker, kept on this device (IndexedDB) for the sync to send later. The review can
@@ -54,49 +47,27 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   if (poles !== undefined) options.poles = poles;
 
   const flightId = req.flightId ?? crypto.randomUUID();
-  // The parse worker hands the columns straight to the analysis worker over this channel; the
-  // page only ever sees the summary and the (small) analysis.
-  const channel = new MessageChannel();
-  const analysing = analysisWorker().analyzeDelivered(
-    flightId,
-    transfer(channel.port2, [channel.port2]),
-    target.airframe ? { airframe: target.airframe } : {},
-  );
-  // Handled below once the read is known to have worked; a failed read rejects this on purpose.
-  analysing.catch(() => undefined);
-
-  let result;
+  let handed;
   try {
-    result = await parseWorker().parseInto(
+    handed = await readAndAnalyse({
       jobId,
+      flightId,
       file,
       options,
-      transfer(channel.port1, [channel.port1]),
-      proxy((p: ParseProgress) => {
+      analyse: target.airframe ? { airframe: target.airframe } : {},
+      onProgress: (p) => {
         if (!isCancelled()) onStatus({ kind: 'reading', bytes: p.bytes, rows: p.rows });
-      }),
-    );
+      },
+    });
   } catch (e) {
     if (isCancelled()) return { kind: 'cancelled' };
     return failed('worker', e);
   }
+  const { read: result, received: analysing } = handed;
   if (!result.ok) {
     const { error } = result;
     if (error.code === 'cancelled' || isCancelled()) return { kind: 'cancelled' };
-    if (error.code === 'needs-column-map') {
-      const answer = await parseWorker()
-        .inspectHeader(file)
-        .catch(() => null);
-      const inspected = answer?.ok ? answer.preview : null;
-      return {
-        kind: 'needs-map',
-        headers: error.headers ?? inspected?.headers ?? [],
-        // The preview's proposal has seen the first rows, so it also offers units from values.
-        proposal: inspected?.proposal ??
-          error.proposal ?? { entries: [], missing: ['time', 'motor1'] },
-        sampleRows: inspected?.sampleRows ?? [],
-      };
-    }
+    if (error.code === 'needs-column-map') return columnMapNeeded(file, error);
     return {
       kind: 'failed',
       canMap:
@@ -120,17 +91,14 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
     return failed('analysis', e);
   }
   if (isCancelled()) {
-    void analysisWorker().forget(flightId);
+    void forgetAnalysed(flightId);
     return { kind: 'cancelled' };
   }
   const { report, head } = analysed;
   let detail: ReviewDetail;
   try {
     // One part per message, so no single task on this thread reads the whole detail.
-    const parts: Partial<DetailParts> = {};
-    for (const key of DETAIL_PARTS)
-      Object.assign(parts, await analysisWorker().detailPart(flightId, key));
-    detail = { ...head, ...completeParts(parts) };
+    detail = await collectDetail(flightId, head);
   } catch (e) {
     return failed('analysis', e);
   }
@@ -155,12 +123,6 @@ export async function runImport(req: ImportRequest): Promise<JobStatus> {
   for (const f of report.findings)
     if (worst === null || severityRank(f.severity) > severityRank(worst)) worst = f.severity;
   return { kind: 'done', flightId, findings: report.findings.length, worst };
-}
-
-function completeParts(parts: Partial<DetailParts>): DetailParts {
-  const missing = DETAIL_PARTS.filter((k) => !(k in parts));
-  if (missing.length > 0) throw new Error(`the analysis sent no ${missing.join(', ')}`);
-  return parts as DetailParts;
 }
 
 function failed(stage: 'worker' | 'analysis' | 'storage', e: unknown): JobStatus {

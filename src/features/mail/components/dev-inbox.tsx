@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { DevMail } from '../../../../shared/schemas/mail';
 import { Empty, Loading } from '../../../components/ui/panel';
 import { ErrorNote } from '../../../components/ui/alert';
-import { useDevMail } from '../api/mail-api';
+import { useDevMail } from '../../../api/mail';
 
 /** Links in a plain-text body, made clickable; everything else stays text (no HTML is rendered). */
 function Linked({ text }: { text: string }) {

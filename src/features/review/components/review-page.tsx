@@ -2,7 +2,7 @@ import { startTransition, useEffect, useMemo, useRef, useState, type ReactNode }
 import type { Finding } from '../../../../shared/schemas/report';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import type { TimePin } from '../../../components/charts/time-chart';
-import type { ReviewFlight } from '../api/flight-api';
+import type { ReviewFlight } from '../../../api/flights';
 import { cursorStep } from '../model/use-cursor';
 import { drawnAirframe } from '../model/drawn-airframe';
 import { useStripTrace } from '../model/use-strip';

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import type { ReviewDetail, Trace } from '../../../../shared/analysis/review-detail';
-import { analysisWorker } from '../../../lib/analysis-worker';
+import { localKeys } from '../../../api/local';
+import { thinStrip } from '../../../lib/log-pipeline/pipeline';
 
 /**
  * The flight strip's thinned throttle and collective. Flights analysed by this version carry
@@ -12,9 +13,9 @@ export function useStripTrace(flightId: string, detail: ReviewDetail): Trace | u
   // The detail is fixed for a flight id; the strip is keyed by that id like other worker results.
   // eslint-disable-next-line @tanstack/query/exhaustive-deps
   const thinned = useQuery({
-    queryKey: ['analysis', 'strip', flightId],
+    queryKey: localKeys.strip(flightId),
     queryFn: () =>
-      analysisWorker().strip({
+      thinStrip({
         t: effort.t,
         series: Object.fromEntries(
           ['throttle', 'collective'].flatMap((k) =>
@@ -24,6 +25,7 @@ export function useStripTrace(flightId: string, detail: ReviewDetail): Trace | u
       }),
     enabled: detail.strip === undefined,
     staleTime: Infinity,
+    networkMode: 'always',
   });
   return detail.strip ?? thinned.data;
 }

@@ -1,13 +1,11 @@
-import { transfer } from 'comlink';
 import type { FilterSpec } from '../../../../shared/schemas/filters';
 import { mapCoveringHeaders } from '../../../../shared/log/column-map';
 import type { ReadOptions } from '../../../../shared/log/parse';
 import type { Airframe } from '../../../../shared/schemas/airframe';
-import type { ParseFailure } from '../../../../workers/parse.worker';
-import { analysisWorker } from '../../../lib/analysis-worker';
 import { getRereadMap } from '../../../lib/local-db';
-import { parseWorker } from '../../../lib/parse-worker';
-import { fetchRawLog, fetchTeamPresets, type ReviewFlight } from '../api/flight-api';
+import { benchFilters, readIntoAnalysis } from '../../../lib/log-pipeline/pipeline';
+import { fetchRawLog, type ReviewFlight } from '../../../api/flights';
+import { fetchPresets } from '../../../api/presets';
 
 /** The raw log's headers need a column map that neither this device nor the team has. */
 export class NeedsColumnMapError extends Error {
@@ -15,30 +13,6 @@ export class NeedsColumnMapError extends Error {
 }
 
 const loading = new Map<string, Promise<void>>();
-
-/** A team preset that maps every one of these headers (the rule the import uses too). */
-/** Reads the file in the parse worker straight into the analysis worker's cache; null when kept. */
-async function readInto(
-  flight: ReviewFlight,
-  file: Blob,
-  options: ReadOptions,
-  airframe: Airframe,
-): Promise<ParseFailure | null> {
-  const channel = new MessageChannel();
-  const kept = analysisWorker().loadDelivered(flight.id, transfer(channel.port2, [channel.port2]), {
-    airframe,
-  });
-  kept.catch(() => undefined); // a failed read says why through its own result
-  const read = await parseWorker().parseInto(
-    `bench-${flight.id}`,
-    file,
-    options,
-    transfer(channel.port1, [channel.port1]),
-  );
-  if (!read.ok) return read.error;
-  await kept;
-  return null;
-}
 
 /**
  * The analysis worker keeps a log only for the tab that imported it. After a reload, or for a
@@ -52,13 +26,18 @@ async function loadIntoWorker(flight: ReviewFlight, airframe: Airframe): Promise
   const base: ReadOptions = poles !== undefined ? { poles } : {};
   const kept =
     flight.readOptions.columnMap ?? (await getRereadMap(flight.id).catch(() => undefined));
-  let failure = await readInto(flight, file, kept ? { ...base, columnMap: kept } : base, airframe);
+  let failure = await readIntoAnalysis(
+    flight.id,
+    file,
+    kept ? { ...base, columnMap: kept } : base,
+    { airframe },
+  );
   if (!failure) return;
   if (failure.code === 'needs-column-map' && !kept) {
     const presets =
       flight.teamId === null
         ? []
-        : await fetchTeamPresets(flight.teamId).then(
+        : await fetchPresets(flight.teamId).then(
             (r) => r.presets,
             () => [], // offline or signed out: no presets to try
           );
@@ -68,7 +47,7 @@ async function loadIntoWorker(flight: ReviewFlight, airframe: Airframe): Promise
         'The raw log’s columns need a column map to be read again, and none is kept for this flight or among the team’s import presets.',
       );
     }
-    failure = await readInto(flight, file, { ...base, columnMap: preset }, airframe);
+    failure = await readIntoAnalysis(flight.id, file, { ...base, columnMap: preset }, { airframe });
     if (!failure) return;
   }
   throw new Error(`The raw log could not be read again: ${failure.message}`);
@@ -82,7 +61,7 @@ export async function runFilterBench(
   specs: FilterSpec,
 ) {
   try {
-    return await analysisWorker().filterBench(flight.id, channel, specs);
+    return await benchFilters(flight.id, channel, specs);
   } catch {
     // Not loaded in this tab's worker (a reload, or a team flight): read the raw log again.
     let pending = loading.get(flight.id);
@@ -91,6 +70,6 @@ export async function runFilterBench(
       loading.set(flight.id, pending);
     }
     await pending;
-    return analysisWorker().filterBench(flight.id, channel, specs);
+    return benchFilters(flight.id, channel, specs);
   }
 }

@@ -1,7 +1,7 @@
 import { Link, useNavigate } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
-import { useSignOut } from '../api/session-mutations';
-import { useMe } from '../api/session-queries';
+import { useSignOut } from '../../../api/session';
+import { useMe } from '../../../api/session';
 
 /** Who is signed in, with sign-out; or the way in. */
 export function AccountMenu() {

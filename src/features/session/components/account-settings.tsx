@@ -8,7 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
 import { plainMessages } from '../../../lib/plain-messages';
-import { useChangePassword, useUpdateMe } from '../api/account-api';
+import { useChangePassword, useUpdateMe } from '../../../api/session';
 
 const ProfileForm = z.object({ name: PersonName, commentMail: z.boolean() });
 

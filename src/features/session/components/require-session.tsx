@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { Link, Navigate, useLocation } from 'react-router-dom';
 import { Alert, describeError } from '../../../components/ui/alert';
 import { Loading } from '../../../components/ui/panel';
-import { useMe } from '../api/session-queries';
+import { useMe } from '../../../api/session';
 
 /**
  * Team pages need a signed-in user; import and review do not, so they are never wrapped in this.

@@ -1,9 +1,8 @@
-import { useQuery } from '@tanstack/react-query';
-import { statusQueries } from '../api/status-queries';
+import { useHealth } from '../../../api/health';
 
 /** Whether the team server answers; the app keeps working offline either way. */
 export function ServerStatus() {
-  const health = useQuery(statusQueries.health());
+  const health = useHealth();
   const online = health.data?.ok === true;
   const label = health.isPending
     ? 'Checking server…'

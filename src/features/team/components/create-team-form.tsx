@@ -7,16 +7,10 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
-import { useCreateTeam } from '../api/team-mutations';
+import { useCreateTeam } from '../../../api/teams';
 
-export function CreateTeamForm({
-  onTeamsChanged,
-  onCreated,
-}: {
-  onTeamsChanged: () => Promise<unknown>;
-  onCreated: (team: Team) => void;
-}) {
-  const create = useCreateTeam(onTeamsChanged);
+export function CreateTeamForm({ onCreated }: { onCreated: (team: Team) => void }) {
+  const create = useCreateTeam();
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,

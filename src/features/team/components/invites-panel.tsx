@@ -10,8 +10,8 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
 import { roleLabels } from '../../../lib/role-labels';
-import { useCreateInvite, useWithdrawInvite } from '../api/team-mutations';
-import { useInvites } from '../api/team-queries';
+import { useCreateInvite, useWithdrawInvite } from '../../../api/invites';
+import { useInvites } from '../../../api/invites';
 
 /** Invite by e-mail with a role; the link in the message works once and expires. */
 export function InvitesPanel({ teamId }: { teamId: string }) {

@@ -4,8 +4,8 @@ import { ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Loading } from '../../../components/ui/panel';
 import { roleDescriptions, roleLabels } from '../../../lib/role-labels';
-import { useChangeRole, useRemoveMember } from '../api/team-mutations';
-import { useMembers } from '../api/team-queries';
+import { useChangeRole, useRemoveMember } from '../../../api/members';
+import { useMembers } from '../../../api/members';
 
 /** Who is in the team and as what; the owner changes roles and removes members here. */
 export function MembersTable({

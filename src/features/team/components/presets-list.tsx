@@ -1,8 +1,8 @@
 import { ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Empty, Loading } from '../../../components/ui/panel';
-import { useDeletePreset } from '../api/team-mutations';
-import { usePresets } from '../api/team-queries';
+import { useDeletePreset } from '../../../api/presets';
+import { usePresets } from '../../../api/presets';
 
 /** Column maps the team saved while importing logs with unfamiliar headers. */
 export function PresetsList({ teamId, canDelete }: { teamId: string; canDelete: boolean }) {

@@ -7,18 +7,10 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { applyServerError } from '../../../lib/form-errors';
-import { useRenameTeam } from '../api/team-mutations';
+import { useRenameTeam } from '../../../api/teams';
 
-export function TeamNameForm({
-  teamId,
-  name,
-  onTeamsChanged,
-}: {
-  teamId: string;
-  name: string;
-  onTeamsChanged: () => Promise<unknown>;
-}) {
-  const rename = useRenameTeam(teamId, onTeamsChanged);
+export function TeamNameForm({ teamId, name }: { teamId: string; name: string }) {
+  const rename = useRenameTeam(teamId);
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,

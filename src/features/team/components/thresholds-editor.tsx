@@ -8,8 +8,8 @@ import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { useSaveThresholds } from '../api/team-mutations';
-import { useThresholds } from '../api/team-queries';
+import { useSaveThresholds } from '../../../api/thresholds';
+import { useThresholds } from '../../../api/thresholds';
 
 type Key = keyof Thresholds;
 interface Row {

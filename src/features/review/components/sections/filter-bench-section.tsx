@@ -12,7 +12,8 @@ import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { XyChart } from '../../../../components/charts/xy-chart';
 import { inkSeries } from '../../../../components/charts/palette';
-import type { ReviewFlight } from '../../api/flight-api';
+import type { ReviewFlight } from '../../../../api/flights';
+import { localKeys } from '../../../../api/local';
 import { runFilterBench } from '../../model/worker-flight';
 
 const kindLabel: Record<FilterStage['kind'], string> = {
@@ -79,11 +80,13 @@ export function FilterBenchSection({
   // The flight and airframe are fixed for a flight id; the worker keys its log by that id.
   // eslint-disable-next-line @tanstack/query/exhaustive-deps
   const bench = useQuery({
-    queryKey: ['analysis', 'filter-bench', flight.id, channel, applied],
+    queryKey: localKeys.filterBench(flight.id, channel, applied),
     queryFn: () => runFilterBench(flight, airframe, channel, applied ?? []),
     enabled: applied !== null && gyros.length > 0,
     staleTime: Infinity,
     retry: false,
+    // Read on this device; a stored flight's raw log is fetched inside when needed.
+    networkMode: 'always',
   });
 
   if (gyros.length === 0)
