@@ -118,4 +118,29 @@ test('a coach comments at the moment of a finding; the pilot is mailed a link to
   await expect(viewerPage.getByRole('article', { name: /Comment by Dev Heron/ })).toBeVisible();
   await expect(viewerPage.getByRole('combobox', { name: 'Comment at the cursor' })).toHaveCount(0);
   await expect(viewerPage.getByRole('button', { name: 'Resolve' })).toHaveCount(0);
+  await expect(viewerPage.getByRole('button', { name: 'Mark reviewed' })).toHaveCount(0);
+
+  // The coach asks for changes with a note; the pilot is mailed it.
+  await coachPage
+    .getByLabel('Note to the pilot (optional)')
+    .fill('Swap motor 3, then fly it again.');
+  await coachPage.getByRole('button', { name: 'Ask for changes' }).click();
+  await expect(coachPage.getByTestId('review-state')).toHaveText('Review: Changes asked for');
+  const changes = await mailTo(pilot.context.request, pilot.email, /requests changes/);
+  expect(changes.text).toContain('Swap motor 3, then fly it again.');
+
+  // On the device that imported it the pilot sees where the review stands and asks again.
+  await pilotPage.goto(`/flights/${flightId}`);
+  await expect(pilotPage.getByTestId('review-state')).toHaveText('Review: Changes asked for');
+  await pilotPage.getByRole('button', { name: 'Request review' }).click();
+  await expect(pilotPage.getByTestId('review-state')).toHaveText('Review: Awaiting review');
+
+  // The coach closes the review; the pilot is mailed and the fleet's filter finds it reviewed.
+  await coachPage.reload();
+  await expect(coachPage.getByTestId('review-state')).toHaveText('Review: Awaiting review');
+  await coachPage.getByRole('button', { name: 'Mark reviewed' }).click();
+  await expect(coachPage.getByTestId('review-state')).toHaveText('Review: Reviewed');
+  await mailTo(pilot.context.request, pilot.email, /reviewed/);
+  await coachPage.goto('/?review=reviewed');
+  await expect(coachPage.getByRole('table', { name: 'Flights' })).toContainText('Kite');
 });

@@ -37,16 +37,28 @@ test('a log imported offline is kept on the device and synced when the network i
   await expect(page).toHaveURL(/\/flights\/[0-9a-f-]{36}/, { timeout: 60_000 });
   const flightId = page.url().match(/flights\/([0-9a-f-]{36})/)![1]!;
   await expect(page.getByTestId('sync-state')).toHaveText('Offline · 1 flight not synced');
+  // The review opens from this device with no network and no reload: it never waits for one.
+  await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible({ timeout: 10_000 });
+  await expect(page.getByText('Opening the flight…')).toHaveCount(0);
+  // One story in the header: no network, so no "Server online" beside "Offline".
+  await expect(page.getByRole('status').filter({ hasText: 'Server' })).toHaveText(
+    'Server out of reach',
+  );
 
   // Still offline, a reload gets the shell from the service worker and the flight from IndexedDB.
   await page.reload();
   await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
   await expect(page.getByTestId('sync-state')).toHaveText('Offline · 1 flight not synced');
+  await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
+  await expect(page.getByText('kept on this device · syncs to the team when online')).toBeVisible();
   // The team's aircraft are remembered, so the next log can be filed without a network too.
   await page.goto('/import');
   await expect(
     page.getByLabel('Aircraft').locator('option', { hasText: 'Kite · 4 motors' }),
   ).toHaveCount(1);
+  // Back on the review, which follows the sync state live once the network returns.
+  await page.goBack();
+  await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
 
   // Back online: the sync runner sends it without anyone asking.
   await context.setOffline(false);
@@ -56,6 +68,7 @@ test('a log imported offline is kept on the device and synced when the network i
     .catch(async (error: unknown) => {
       throw new Error(`${String(error)}\nlocal store: ${await localSyncErrors(page)}`);
     });
+  await expect(page.getByText('kept on this device · stored by the team')).toBeVisible();
 
   const stored = await page.request.get(`/api/flights/${flightId}`);
   expect(stored.status()).toBe(200);

@@ -153,6 +153,18 @@ export async function loadDemo(
     }
     if (c.resolvedBy) await services.comments.patch(idOf(c.resolvedBy), rootId, { resolved: true });
   }
+  // Reviews asked for and closed, so a coach finds one waiting and the loop shows its end.
+  for (const flight of demoFlights) {
+    if (!flight.review) continue;
+    const id = flightIds[flight.index]!;
+    const coachId = idOf(flight.review.coach);
+    await services.flights.requestReview(idOf(flight.pilot), id, { userIds: [coachId] });
+    if (flight.review.outcome)
+      await services.flights.setReview(coachId, id, {
+        state: flight.review.outcome,
+        ...(flight.review.note ? { note: flight.review.note } : {}),
+      });
+  }
   return { loaded: true, flights: flightIds.length, comments };
 }
 

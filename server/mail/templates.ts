@@ -110,7 +110,7 @@ export const commentMail = (
       : a.kind === 'reply'
         ? `${a.author} replied on ${a.flightName}`
         : `New comment on ${a.flightName}`;
-  const settingsUrl = `${l.publicUrl}/settings`;
+  const settingsUrl = `${l.publicUrl}/account`;
   return render({
     to: a.to,
     subject,

@@ -3,7 +3,7 @@ import { FlightReport as FlightReportSchema, type FlightReport } from '../../sha
 import type { ReviewDetail } from '../../shared/analysis/review-detail';
 import { pathTo } from '../../shared/api/paths';
 import type { ColumnMap } from '../../shared/log/column-map';
-import { FlightDetail, ReviewDetailLoose } from '../../shared/schemas/flights';
+import { FlightDetail, ReviewDetailLoose, type ReviewState } from '../../shared/schemas/flights';
 import { ApiError, apiFetch } from '../lib/api-fetch';
 import { getLocalFlight } from '../lib/local-db';
 import { aircraftKeys } from './aircraft';
@@ -31,6 +31,8 @@ export interface ReviewFlight {
   readOptions: { columnMap?: ColumnMap; poles?: number };
   /** The team server has the flight (comments live there). */
   syncedToTeam: boolean;
+  /** Where its review stands, as the team server said; null when read from this device. */
+  reviewState: ReviewState | null;
 }
 
 export class FlightNotFoundError extends Error {
@@ -73,6 +75,7 @@ async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
         ...(local.poles !== undefined ? { poles: local.poles } : {}),
       },
       syncedToTeam: local.syncState === 'synced' || local.summarySynced === true,
+      reviewState: null,
     };
   }
   try {
@@ -95,6 +98,7 @@ async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
       file: null,
       readOptions: {},
       syncedToTeam: true,
+      reviewState: stored.reviewState,
     };
   } catch (e) {
     if (e instanceof ApiError && (e.status === 404 || e.status === 401 || e.status === 403)) {

@@ -25,6 +25,8 @@ export const router = createBrowserRouter([
     path: '/',
     element: <AppLayout />,
     errorElement: <RouteError />,
+    // Shown while a lazy screen's code loads on the first page of a visit.
+    hydrateFallbackElement: <p className="p-4 text-sm text-ink-soft">Opening Hoverprint…</p>,
     children: [
       { index: true, element: <FleetRoute /> },
       { path: 'import', lazy: lazyImport },

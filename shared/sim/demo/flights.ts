@@ -18,6 +18,8 @@ export interface DemoFlight {
   rateHz: number;
   /** Name the log file would have had on the pilot's card. */
   fileName: string;
+  /** The pilot asked this coach (member key) for a review; `outcome` once the coach closed it. */
+  review?: { coach: string; outcome?: 'reviewed' | 'changes-requested'; note?: string };
 }
 
 /** Kite's motor 3 bearings wear: thrust per output² falls session by session until it is replaced. */
@@ -137,6 +139,11 @@ const drafts: Draft[] = [
     pilot: 'tobin',
     date: '2026-10-11T09:20:00Z',
     title: 'Freestyle session, motor felt hot after',
+    review: {
+      coach: 'wren',
+      outcome: 'reviewed',
+      note: 'Motor 3 is the one working hard; swap it before the next session.',
+    },
     faults: kiteMotor3(0.87),
     seed: 111,
     seconds: 36,
@@ -157,6 +164,7 @@ const drafts: Draft[] = [
     pilot: 'tobin',
     date: '2026-10-17T10:00:00Z',
     title: 'Shake-down with the new motor 3',
+    review: { coach: 'wren' },
     faults: kiteMotor3(1),
     seed: 113,
     seconds: 36,

@@ -1,16 +1,14 @@
-import { useMemo } from 'react';
-import { Link, useSearchParams } from 'react-router-dom';
-import { FlightListQuery } from '../../../shared/schemas/flights';
+import { Link } from 'react-router-dom';
 import { ErrorNote } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
 import { Empty, Loading, Panel } from '../../components/ui/panel';
 import { useTeamAircraft } from '../../api/aircraft';
 import { AircraftCards } from '../../features/aircraft/components/aircraft-cards';
-import type { FlightFilter } from '../../api/flight-list';
 import { useAwaitingReview, useFlightList } from '../../api/flight-list';
-import { FlightFilters } from '../../features/fleet/components/flight-filters';
-import { FlightTable } from '../../features/fleet/components/flight-table';
+import { FlightFilters } from '../../features/flight-list/components/flight-filters';
+import { useFilterParams } from '../../features/flight-list/model/use-filter-params';
+import { FlightTable } from '../../features/flight-list/components/flight-table';
 import { useActiveTeam } from '../../features/session/active-team';
 import { RequireSession } from '../../features/session/components/require-session';
 import { useMembers } from '../../api/members';
@@ -18,49 +16,9 @@ import { LocalFlightsPanel } from '../../features/sync/components/local-flights-
 import { can } from '../../../shared/auth/permissions';
 import { NoTeam } from './no-team';
 
-const filterKeys = [
-  'aircraftId',
-  'pilotId',
-  'severity',
-  'review',
-  'openComments',
-  'from',
-  'to',
-] as const;
-
-/** The list filter lives in the address so a filtered view can be bookmarked and shared. */
-function useFilterParams(): [FlightFilter, (next: FlightFilter) => void] {
-  const [params, setParams] = useSearchParams();
-  const filter = useMemo(() => {
-    const raw: Record<string, string> = {};
-    for (const k of filterKeys) {
-      const v = params.get(k);
-      if (v) raw[k] = v;
-    }
-    // Anything malformed in a hand-edited address is dropped rather than sent.
-    const parsed = FlightListQuery.pick({
-      aircraftId: true,
-      pilotId: true,
-      severity: true,
-      review: true,
-      from: true,
-      to: true,
-    }).safeParse(raw);
-    const f: FlightFilter = parsed.success ? { ...parsed.data } : {};
-    if (raw.openComments === 'true' || raw.openComments === 'false')
-      f.openComments = raw.openComments;
-    return f;
-  }, [params]);
-  const set = (next: FlightFilter) => {
-    const p = new URLSearchParams();
-    for (const k of filterKeys) {
-      const v = next[k];
-      if (v !== undefined && v !== '') p.set(k, String(v));
-    }
-    setParams(p, { replace: true });
-  };
-  return [filter, set];
-}
+/** What the fleet says for a team list it has never fetched, while there is no network. */
+const offlineNote =
+  'Offline: the team’s list opens when the network is back. Flights on this device are listed under “On this device”.';
 
 export function FleetRoute() {
   return (
@@ -111,7 +69,9 @@ function TeamFleet({
         }
       />
       <div className="space-y-6">
-        {aircraft.isPending ? (
+        {aircraft.isPending && aircraft.fetchStatus === 'paused' ? (
+          <Empty>{offlineNote}</Empty>
+        ) : aircraft.isPending ? (
           <Loading what="aircraft" />
         ) : aircraft.isError ? (
           <ErrorNote error={aircraft.error} />
@@ -132,7 +92,9 @@ function TeamFleet({
 
         <div className="grid gap-4 md:grid-cols-2">
           <Panel title="Awaiting review">
-            {awaiting.isPending ? (
+            {awaiting.isPending && awaiting.fetchStatus === 'paused' ? (
+              <p className="text-sm text-ink-soft">{offlineNote}</p>
+            ) : awaiting.isPending ? (
               <Loading what="flights awaiting review" />
             ) : awaiting.isError ? (
               <ErrorNote error={awaiting.error} />
@@ -171,7 +133,9 @@ function TeamFleet({
               pilots={pilotOptions}
               onChange={setFilter}
             />
-            {flights.isPending ? (
+            {flights.isPending && flights.fetchStatus === 'paused' ? (
+              <Empty>{offlineNote}</Empty>
+            ) : flights.isPending ? (
               <Loading what="flights" />
             ) : flights.isError ? (
               <ErrorNote error={flights.error} />

@@ -2,6 +2,7 @@ import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
 import { ImportPanel } from '../../features/import/components/import-panel';
 import { useActiveTeam } from '../../features/session/active-team';
+import { can } from '../../../shared/auth/permissions';
 
 export function ImportRoute() {
   const navigate = useNavigate();
@@ -14,7 +15,7 @@ export function ImportRoute() {
       />
       <ImportPanel
         teamId={team?.id ?? null}
-        canSavePreset={team?.role === 'owner' || team?.role === 'tuner' || team?.role === 'pilot'}
+        canSavePreset={can(team?.role, 'presets.write')}
         onOpenFlight={(id) => navigate(`/flights/${id}`)}
       />
     </>

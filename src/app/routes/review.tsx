@@ -2,6 +2,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
 import { useFlightComments } from '../../api/comments';
+import { useAircraftFlights } from '../../api/flight-list';
 import { flightKeys, useReviewFlight, type ReviewFlight } from '../../api/flights';
 import { ReviewPage } from '../../features/review/components/review-page';
 import { useAircraftAirframe } from '../../features/review/model/use-aircraft-airframe';
@@ -16,6 +17,8 @@ import { useMe } from '../../api/session';
 import { useActiveTeam } from '../../features/session/active-team';
 import { AssignAircraft } from '../../features/import/components/assign-aircraft';
 import { useCompare } from '../../features/compare/model/use-compare';
+import { can } from '../../../shared/auth/permissions';
+import { ReviewDecision, ReviewStateLine } from '../../features/review/components/review-decision';
 
 export function ReviewRoute() {
   const { flightId = '' } = useParams();
@@ -41,11 +44,6 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
   const signedIn = me !== null;
 
   const aircraft = useAircraftAirframe(flight, signedIn);
-  // The aircraft's name as the team keeps it now (renamed since the flight, say).
-  const shown = useMemo(
-    () => ({ ...flight, aircraftName: aircraft.aircraftName ?? flight.aircraftName }),
-    [flight, aircraft.aircraftName],
-  );
   const role = me?.teams.find((t) => t.id === flight.teamId)?.role ?? null;
 
   const onServer = signedIn && flight.teamId !== null && flight.syncedToTeam;
@@ -70,12 +68,15 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
       document.getElementById(`comment-${linked}`)?.scrollIntoView({ block: 'nearest' });
   }, [linked, linkedTS]);
   const rail = useRef<CommentsRailHandle>(null);
-  const onPin = useCallback((id: string) => {
-    setSelected(id);
-    document
-      .getElementById(`comment-${id}`)
-      ?.scrollIntoView({ block: 'nearest', behavior: 'smooth' });
-  }, []);
+  const onPin = useCallback(
+    (id: string) => {
+      setSelected(id);
+      document
+        .getElementById(`comment-${id}`)
+        ?.scrollIntoView({ block: 'nearest', behavior: 'smooth' });
+    },
+    [setSelected],
+  );
 
   const compare = useCompare(flight, { active: sectionId === 'compare', onServer });
 
@@ -86,8 +87,7 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
     flight.source === 'local' &&
     flight.aircraftId === null &&
     team !== undefined &&
-    team.role !== 'viewer' &&
-    team.role !== 'coach';
+    can(team.role, 'flights.upload');
   const status = canFile ? (
     <AssignAircraft
       flightId={flight.id}
@@ -99,15 +99,37 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
   ) : flight.source === 'local' ? (
     <p className="text-xs text-ink-faint">
       kept on this device
-      {flight.teamId ? ' · syncs to the team when online' : ' · not in a team yet'}
+      {flight.syncedToTeam
+        ? ' · stored by the team'
+        : !can(role ?? team?.role, 'flights.upload')
+          ? ' · not synced (your role reads flights but does not add them)'
+          : flight.teamId
+            ? ' · syncs to the team when online'
+            : ' · not in a team yet'}
     </p>
   ) : (
     <p className="text-xs text-ink-faint">stored by the team</p>
   );
+  // Read from this device, the flight's review state comes from the team's list of its aircraft.
+  const listed = useAircraftFlights(
+    flight.teamId ?? '',
+    flight.aircraftId ?? '',
+    onServer && flight.reviewState === null && flight.aircraftId !== null,
+  );
+  const reviewState =
+    flight.reviewState ?? listed.data?.flights.find((f) => f.id === flight.id)?.reviewState ?? null;
+  const review =
+    onServer && reviewState !== null ? (
+      can(role, 'flights.review') ? (
+        <ReviewDecision flightId={flight.id} state={reviewState} />
+      ) : (
+        <ReviewStateLine state={reviewState} />
+      )
+    ) : null;
 
   return (
     <ReviewPage
-      flight={shown}
+      flight={flight}
       airframe={aircraft.airframe}
       airframeAssumed={aircraft.assumed}
       section={sectionId}
@@ -116,7 +138,12 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
       pins={pins}
       onPin={onPin}
       onCommentAtCursor={() => rail.current?.composeAtCursor()}
-      status={status}
+      status={
+        <>
+          {status}
+          {review}
+        </>
+      }
       rail={
         <CommentsRail
           ref={rail}

@@ -1,20 +1,28 @@
 import type { Severity } from '../../../shared/schemas/report';
 
-const styles: Record<Severity, string> = {
-  note: 'border-sev-note/40 text-sev-note',
-  watch: 'border-sev-watch/50 text-sev-watch',
-  act: 'border-sev-act/50 bg-sev-act/5 text-sev-act',
+/** Solid for what needs doing, outlined for a note: the word carries the meaning, not the colour. */
+const tone: Record<Severity, string> = {
+  act: 'bg-sev-act text-paper',
+  watch: 'bg-sev-watch text-paper',
+  note: 'bg-sev-note/15 text-sev-note',
 };
 
-/** Worst severity of a verdict; null means the verdict found nothing to report. */
-export function SeverityBadge({ severity }: { severity: Severity | null }) {
-  if (!severity)
-    return (
-      <span className="rounded-sm border border-ok/40 px-1.5 py-0.5 text-xs text-ok">clear</span>
-    );
-  return (
-    <span className={'rounded-sm border px-1.5 py-0.5 text-xs font-medium ' + styles[severity]}>
-      {severity}
-    </span>
-  );
+const word: Record<Severity, string> = { act: 'Act', watch: 'Watch', note: 'Note' };
+
+/**
+ * A finding's severity, or a verdict's worst one; null means the verdict found nothing to report.
+ * `fixed` gives every badge one width, so a column of findings lines up.
+ */
+export function SeverityBadge({
+  severity,
+  fixed = false,
+}: {
+  severity: Severity | null;
+  fixed?: boolean;
+}) {
+  const base =
+    'inline-block h-fit shrink-0 rounded-sm px-1.5 py-0.5 text-center text-[11px] font-semibold uppercase tracking-wide ' +
+    (fixed ? 'w-14 self-start ' : '');
+  if (!severity) return <span className={base + 'border border-ok/40 text-ok'}>clear</span>;
+  return <span className={base + tone[severity]}>{word[severity]}</span>;
 }

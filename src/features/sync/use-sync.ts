@@ -1,6 +1,6 @@
 import { useEffect, useSyncExternalStore } from 'react';
 import { localDb } from '../../lib/local-db';
-import { useLiveQuery } from '../../lib/use-live-query';
+import { useLiveQuery } from 'dexie-react-hooks';
 import { useOnline } from '../../lib/use-online';
 import { onSyncPass, setSyncTeam, syncEngine } from './sync-engine';
 import type { SyncPassResult } from './sync-runner';

@@ -51,6 +51,24 @@ describe('demo loader', () => {
     expect(page.flights).toHaveLength(demoFlights.length);
   });
 
+  it('gives the coach a flight awaiting review and shows one review closed', async () => {
+    const { agent, teamId } = await signedIn('wren');
+    const list = async (review: string) =>
+      FlightPage.parse(
+        (await agent.get(`/api/teams/${teamId}/flights?review=${review}`).expect(200)).body,
+      ).flights.map((f) => f.id);
+    const asked = demoFlights.filter((f) => f.review && !f.review.outcome);
+    const closed = demoFlights.filter((f) => f.review?.outcome === 'reviewed');
+    expect(asked.length).toBeGreaterThan(0);
+    expect(closed.length).toBeGreaterThan(0);
+    expect(await list('requested')).toEqual(
+      expect.arrayContaining(asked.map((f) => demoId('flight', f.index))),
+    );
+    expect(await list('reviewed')).toEqual(
+      expect.arrayContaining(closed.map((f) => demoId('flight', f.index))),
+    );
+  });
+
   it("tells Kite's story: the worn motor 3 is named before its replacement", async () => {
     const { agent } = await signedIn('tobin');
     const worn = demoFlights.filter(

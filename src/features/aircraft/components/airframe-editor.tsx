@@ -1,14 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
-import {
-  useFieldArray,
-  useForm,
-  useWatch,
-  type Control,
-  type FieldErrors,
-  type UseFormRegister,
-} from 'react-hook-form';
+import { useFieldArray, useForm } from 'react-hook-form';
 import {
   layoutPresets,
   presetAirframe,
@@ -18,10 +11,9 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Caution } from '../../../components/ui/caution';
-import { motorColor } from '../../../components/charts/palette';
-import { AirframeForm, optionalNumber, presetIds, sharesOrNull } from '../model/airframe-form';
-import { MM_PER_INCH, overlappingProps } from '../model/top-view-geometry';
-import { AirframeTopView } from './airframe-top-view';
+import { AirframeForm, optionalNumber, presetIds } from '../model/airframe-form';
+import { AirframePreview } from './airframe-preview';
+import { MotorTable } from './motor-table';
 
 const num = { setValueAs: optionalNumber };
 const round1 = (v: number) => Math.round(v * 10) / 10;
@@ -256,137 +248,8 @@ export function AirframeEditor({
           </Button>
         )}
       </fieldset>
-      <LivePreview control={control} cg={typeof cg === 'string' ? undefined : cg} />
+      <AirframePreview control={control} cg={typeof cg === 'string' ? undefined : cg} />
     </form>
-  );
-}
-
-function MotorTable({
-  control,
-  register,
-  fields,
-  errors,
-  readOnly,
-  onMove,
-  onRemove,
-  cg,
-}: {
-  control: Control<AirframeForm>;
-  register: UseFormRegister<AirframeForm>;
-  fields: { id: string }[];
-  errors: NonNullable<FieldErrors<AirframeForm>['airframe']>['motors'];
-  readOnly: boolean;
-  onMove: (from: number, to: number) => void;
-  onRemove: (index: number) => void;
-  cg: { x: number; y: number } | undefined;
-}) {
-  const airframe = useWatch({ control, name: 'airframe' });
-  // Expected shares are about the design CG: an offset CG loads the motors nearer to it.
-  const { cg: _formCg, ...rest } = airframe;
-  const shares = sharesOrNull(cg ? { ...rest, cg } : rest);
-  return (
-    <table className="w-full text-sm" aria-label="Motors">
-      <thead>
-        <tr className="border-b border-line text-left text-xs text-ink-soft">
-          <th className="py-1 pr-2 font-medium">Motor</th>
-          <th className="py-1 pr-2 font-medium">x forward (mm)</th>
-          <th className="py-1 pr-2 font-medium">y right (mm)</th>
-          <th className="py-1 pr-2 font-medium">Spin (from above)</th>
-          <th className="py-1 pr-2 text-right font-medium">Hover share</th>
-          {!readOnly && <th className="py-1" />}
-        </tr>
-      </thead>
-      <tbody>
-        {fields.map((field, i) => {
-          const n = i + 1;
-          const rowError = errors?.[i];
-          return (
-            <tr key={field.id} className="border-b border-line/60" data-testid={`motor-row-${n}`}>
-              <td className="py-1 pr-2">
-                <span className="inline-flex items-center gap-1.5 font-mono font-semibold">
-                  <span
-                    aria-hidden
-                    className="h-2.5 w-2.5 rounded-full"
-                    style={{ background: motorColor(n) }}
-                  />
-                  {n}
-                </span>
-              </td>
-              <td className="py-1 pr-2">
-                <input
-                  aria-label={`Motor ${n} x (mm)`}
-                  aria-invalid={rowError?.x ? true : undefined}
-                  title={rowError?.x?.message}
-                  inputMode="decimal"
-                  className={
-                    'num w-24 rounded border bg-paper-raised px-2 py-1 ' +
-                    (rowError?.x ? 'border-sev-act' : 'border-line')
-                  }
-                  {...register(`airframe.motors.${i}.x`, num)}
-                />
-              </td>
-              <td className="py-1 pr-2">
-                <input
-                  aria-label={`Motor ${n} y (mm)`}
-                  aria-invalid={rowError?.y ? true : undefined}
-                  title={rowError?.y?.message}
-                  inputMode="decimal"
-                  className={
-                    'num w-24 rounded border bg-paper-raised px-2 py-1 ' +
-                    (rowError?.y ? 'border-sev-act' : 'border-line')
-                  }
-                  {...register(`airframe.motors.${i}.y`, num)}
-                />
-              </td>
-              <td className="py-1 pr-2">
-                <select
-                  aria-label={`Motor ${n} spin`}
-                  className="rounded border border-line bg-paper-raised px-2 py-1"
-                  {...register(`airframe.motors.${i}.spin`)}
-                >
-                  <option value="cw">clockwise</option>
-                  <option value="ccw">counter-clockwise</option>
-                </select>
-              </td>
-              <td className="num py-1 pr-2 text-right text-ink-soft">
-                {shares?.[i] !== undefined ? `${(shares[i]! * 100).toFixed(1)} %` : '–'}
-              </td>
-              {!readOnly && (
-                <td className="py-1 text-right whitespace-nowrap">
-                  <Button
-                    size="sm"
-                    tone="quiet"
-                    aria-label={`Move motor ${n} up`}
-                    disabled={i === 0}
-                    onClick={() => onMove(i, i - 1)}
-                  >
-                    ↑
-                  </Button>
-                  <Button
-                    size="sm"
-                    tone="quiet"
-                    aria-label={`Move motor ${n} down`}
-                    disabled={i === fields.length - 1}
-                    onClick={() => onMove(i, i + 1)}
-                  >
-                    ↓
-                  </Button>
-                  <Button
-                    size="sm"
-                    tone="quiet"
-                    aria-label={`Remove motor ${n}`}
-                    disabled={fields.length <= 3}
-                    onClick={() => onRemove(i)}
-                  >
-                    ✕
-                  </Button>
-                </td>
-              )}
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
   );
 }
 
@@ -398,44 +261,4 @@ function readCg(x: string, y: string): { x: number; y: number } | undefined | st
   if (x.trim() === '' || y.trim() === '' || !Number.isFinite(nx) || !Number.isFinite(ny))
     return 'give both CG coordinates in mm, or neither for the frame centre';
   return { x: nx, y: ny };
-}
-
-function LivePreview({
-  control,
-  cg,
-}: {
-  control: Control<AirframeForm>;
-  cg: { x: number; y: number } | undefined;
-}) {
-  const airframe = useWatch({ control, name: 'airframe' });
-  const motors = (airframe.motors ?? []).map((m) => ({
-    x: Number(m?.x),
-    y: Number(m?.y),
-    spin: m?.spin === 'cw' ? ('cw' as const) : ('ccw' as const),
-  }));
-  const diameter = Number(airframe.prop?.diameterIn);
-  const overlaps = Number.isFinite(diameter)
-    ? overlappingProps(motors, (diameter * MM_PER_INCH) / 2)
-    : [];
-  const cw = motors.filter((m) => m.spin === 'cw').length;
-  return (
-    <aside className="space-y-2 lg:sticky lg:top-4 lg:self-start">
-      <AirframeTopView motors={motors} propDiameterIn={diameter} cg={cg} />
-      <p className="text-xs text-ink-soft">
-        <span className="num">{motors.length}</span> motors · <span className="num">{cw}</span>{' '}
-        clockwise · <span className="num">{motors.length - cw}</span> counter-clockwise
-      </p>
-      {cw !== motors.length - cw && (
-        <Alert tone="info">
-          Unequal numbers of clockwise and counter-clockwise props: yaw will need uneven effort.
-        </Alert>
-      )}
-      {overlaps.length > 0 && (
-        <Alert tone="error">
-          Prop discs overlap: {overlaps.map(([a, b]) => `${a}–${b}`).join(', ')}. Check the
-          positions or the prop size.
-        </Alert>
-      )}
-    </aside>
-  );
 }

@@ -1,6 +1,12 @@
 import type { Motor } from '../../../../shared/schemas/airframe';
 import { motorColor } from '../../../components/charts/palette';
-import { MM_PER_INCH, scaleBarMm, spinArc, toScreen, viewExtent } from '../model/top-view-geometry';
+import {
+  MM_PER_INCH,
+  scaleBarMm,
+  spinArc,
+  toScreen,
+  viewExtent,
+} from '../../../components/airframe/top-view-geometry';
 
 /**
  * The airframe seen from above, drawn from its geometry: arms, prop discs in each motor's

@@ -126,7 +126,7 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
             }
           />
         )}
-        {onServer && !rights.canComment && role === 'viewer' && (
+        {onServer && !rights.canComment && role !== null && (
           <p className="text-xs text-ink-faint">
             You can read this review; your role does not comment.
           </p>

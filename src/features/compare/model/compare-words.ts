@@ -1,7 +1,11 @@
 import type { FlightReport } from '../../../../shared/schemas/report';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 
-const signedPct = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(Math.round(v))} %`;
+/** Whole percent with its sign; what rounds to zero reads 0 %, never +0 % or −0 %. */
+const signedPct = (v: number) => {
+  const r = Math.round(v);
+  return r === 0 ? '0 %' : `${r > 0 ? '+' : '−'}${Math.abs(r)} %`;
+};
 
 /** Smallest change worth a sentence, in the unit of each figure (common practice: below these, flight-to-flight noise). */
 export const compareThresholds = {
@@ -11,6 +15,15 @@ export const compareThresholds = {
   bandRmsRel: 0.15,
   sagV: 0.05,
 } as const;
+
+/**
+ * A signed quantity's change in words by the sign, not the size: rose (up), fell (down), or
+ * moved when it crossed zero, where up and down would both mislead.
+ */
+function signedChange(before: number, after: number): 'rose' | 'fell' | 'moved' {
+  if (Math.sign(before) * Math.sign(after) < 0) return 'moved';
+  return after > before ? 'rose' : 'fell';
+}
 
 /**
  * The differences between an earlier flight (`before`) and this one (`after`) as sentences a
@@ -27,7 +40,7 @@ export function describeDifferences(before: FlightReport, after: FlightReport): 
       const b = before.balance.deviationPct[i];
       if (b === undefined || !Number.isFinite(a) || !Number.isFinite(b)) return;
       if (Math.abs(a - b) < compareThresholds.deviationPts) return;
-      const verb = Math.abs(a) < Math.abs(b) ? 'fell' : 'rose';
+      const verb = signedChange(b, a);
       out.push(`Motor ${i + 1} deviation ${verb} from ${signedPct(b)} to ${signedPct(a)}.`);
     });
   }

@@ -60,8 +60,8 @@ export function AssignAircraft({ flightId, file, fileName, teamId, onDone }: Ass
   return (
     <div className="flex flex-wrap items-end gap-2 rounded border border-accent/50 bg-accent-soft/40 px-3 py-2 text-sm">
       <p className="w-full text-xs text-ink-soft">
-        This flight waits on this device: pick the aircraft that flew it to judge it against that
-        aircraft&apos;s geometry and send it to the team.
+        This flight needs an aircraft before it can sync to the team. Pick the aircraft that flew
+        it: the log is judged again against that aircraft&apos;s geometry and then sent.
       </p>
       <AircraftPicker
         teamId={teamId}

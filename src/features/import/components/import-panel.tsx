@@ -1,18 +1,14 @@
 import { Caution } from '../../../components/ui/caution';
-import { useCallback, useEffect, useReducer, useRef, useState } from 'react';
+import { useCallback, useState } from 'react';
 import { useDropzone } from 'react-dropzone';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
 import { mapCoveringHeaders } from '../../../../shared/log/column-map';
 import { saveRereadMap } from '../../../lib/local-db';
-import {
-  cancelRead,
-  columnMapNeeded,
-  synthesiseSampleFile,
-} from '../../../lib/log-pipeline/pipeline';
-import { isLogFile, jobsReducer, nextQueued, type ImportJob } from '../model/import-jobs';
-import { runImport } from '../model/run-import';
+import { synthesiseSampleFile } from '../../../lib/log-pipeline/pipeline';
+import { isLogFile } from '../model/import-jobs';
+import { useImportQueue } from '../model/use-import-queue';
 import { loadRemapSource } from '../model/remap-source';
 import { localKeys } from '../../../api/local';
 import { usePresets, useSavePreset } from '../../../api/presets';
@@ -30,15 +26,18 @@ export interface ImportPanelProps {
 }
 
 export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanelProps) {
-  const [jobs, dispatch] = useReducer(jobsReducer, []);
   const [aircraftId, setAircraftId] = useState(UNKNOWN_AIRCRAFT);
   const [aircraft, setAircraft] = useState<Aircraft | null>(null);
   const [rejected, setRejected] = useState<string[]>([]);
   const [sampleBusy, setSampleBusy] = useState(false);
   const [sampleError, setSampleError] = useState<string | null>(null);
-  const cancelled = useRef(new Set<string>());
-  const single = useRef<string | null>(null);
   const presets = usePresets(teamId ?? '', teamId !== null);
+  const { jobs, dispatch, addFiles, cancel, openMap } = useImportQueue({
+    teamId,
+    aircraft,
+    presets: presets.data?.presets,
+    onOpenFlight,
+  });
   const savePreset = useSavePreset(teamId ?? '');
 
   // `?remap=<flight id>`: the review's filter bench could not read a kept flight's raw log
@@ -65,13 +64,6 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
       { replace: true },
     );
 
-  const addFiles = useCallback((files: File[]) => {
-    const items = files.map((file) => ({ id: crypto.randomUUID(), file }));
-    dispatch({ type: 'add', items });
-    // A single file opens its review when done; from a batch the pilot picks.
-    single.current = items.length === 1 ? items[0]!.id : null;
-  }, []);
-
   const onDrop = useCallback(
     (accepted: File[], refused: { file: File }[]) => {
       const good = accepted.filter(isLogFile);
@@ -86,62 +78,6 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
     noClick: true,
     multiple: true,
   });
-
-  // Run queued jobs one at a time.
-  const next = nextQueued(jobs);
-  useEffect(() => {
-    if (!next) return;
-    const job: ImportJob = next;
-    cancelled.current.delete(job.id);
-    // The review's charts come next: load their code while the workers read the log, when
-    // this thread is idle, rather than in the review's first paint.
-    void import('../../../components/charts/echarts');
-    void runImport({
-      jobId: job.id,
-      file: job.file,
-      ...(job.columnMap ? { columnMap: job.columnMap } : {}),
-      ...(job.poles !== undefined ? { poles: job.poles } : {}),
-      target: {
-        ...(aircraft ? { airframe: aircraft.airframe } : {}),
-        ...(teamId ? { teamId } : {}),
-        ...(aircraft ? { aircraftId: aircraft.id } : {}),
-      },
-      onStatus: (status) => dispatch({ type: 'status', id: job.id, status }),
-      isCancelled: () => cancelled.current.has(job.id),
-    }).then((status) => {
-      dispatch({ type: 'status', id: job.id, status });
-      if (status.kind === 'needs-map') {
-        const preset = mapCoveringHeaders(presets.data?.presets, status.headers);
-        // A team preset that covers every header is applied without asking again.
-        if (preset && !job.columnMap) dispatch({ type: 'map', id: job.id, columnMap: preset });
-      }
-      if (status.kind === 'done' && single.current === job.id) onOpenFlight(status.flightId);
-    });
-    // `next` changes identity on every status update; only a new job id should start work.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [next?.id, next?.status.kind]);
-
-  const cancel = (id: string) => {
-    cancelled.current.add(id);
-    void cancelRead(id);
-    dispatch({ type: 'status', id, status: { kind: 'cancelled' } });
-  };
-
-  const openMap = async (job: ImportJob) => {
-    try {
-      dispatch({ type: 'status', id: job.id, status: await columnMapNeeded(job.file) });
-    } catch (e) {
-      dispatch({
-        type: 'status',
-        id: job.id,
-        status: {
-          kind: 'failed',
-          canMap: false,
-          problem: { code: 'header', message: e instanceof Error ? e.message : String(e) },
-        },
-      });
-    }
-  };
 
   const trySample = async () => {
     setSampleBusy(true);

@@ -1,4 +1,5 @@
 import type { Airframe } from '../../../../shared/schemas/airframe';
+import { MM_PER_INCH, toScreen } from '../../../components/airframe/top-view-geometry';
 import { motorColor } from '../../../components/charts/palette';
 import { signedFixed } from '../model/format';
 
@@ -42,11 +43,11 @@ function topViewSummary(
  * number and a bar, and the motors the verdict names are ringed.
  */
 export function TopView({ airframe, deviationPct, cg, flagged }: TopViewProps) {
-  const propR = (airframe.prop.diameterIn * 25.4) / 2;
+  const propR = (airframe.prop.diameterIn * MM_PER_INCH) / 2;
   const reach = Math.max(...airframe.motors.map((m) => Math.hypot(m.x, m.y))) + propR;
   const pad = propR * 0.9 + 40;
-  const sx = (m: { x: number; y: number }) => m.y;
-  const sy = (m: { x: number; y: number }) => -m.x;
+  const sx = (m: { x: number; y: number }) => toScreen(m).sx;
+  const sy = (m: { x: number; y: number }) => toScreen(m).sy;
   const design = airframe.cg ?? { x: 0, y: 0 };
   const body = Math.max(18, reach * 0.16);
   const font = (reach + pad) / 11;

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { Finding } from '../../../../shared/schemas/report';
 import { rankFindings, sectionForFinding, sections } from '../model/sections';
-import { SeverityBadge } from './severity-badge';
+import { SeverityBadge } from '../../../components/ui/severity-badge';
 import { MotorMarker } from '../../../components/ui/motor-marker';
 
 export interface VerdictListProps {
@@ -49,7 +49,7 @@ export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictLis
                 key={`${f.code}-${f.motor ?? ''}-${f.axis ?? ''}-${i}`}
                 className="flex gap-3 px-4 py-2.5"
               >
-                <SeverityBadge severity={f.severity} />
+                <SeverityBadge severity={f.severity} fixed />
                 <div className="min-w-0 flex-1">
                   <p className="text-sm text-ink">
                     {f.motor !== undefined && (

@@ -1,9 +1,4 @@
-import {
-  mostSevereFirst,
-  type Finding,
-  type FindingCode,
-  type Severity,
-} from '../../../../shared/schemas/report';
+import { mostSevereFirst, type Finding, type FindingCode } from '../../../../shared/schemas/report';
 
 export type SectionId =
   | 'effort'
@@ -101,12 +96,6 @@ export function rankFindings(findings: readonly Finding[]): Finding[] {
     .sort((a, b) => mostSevereFirst(a.f, b.f) || a.i - b.i)
     .map((x) => x.f);
 }
-
-export const severityLabel: Record<Severity, string> = {
-  act: 'Act',
-  watch: 'Watch',
-  note: 'Note',
-};
 
 /** The section to open when the link names none: the evidence of the worst finding. */
 export function defaultSection(findings: readonly Finding[]): SectionId {

@@ -5,7 +5,7 @@ import {
   retryFailed,
   type LocalFlight,
 } from '../../../lib/local-db';
-import { useLiveQuery } from '../../../lib/use-live-query';
+import { useLiveQuery } from 'dexie-react-hooks';
 import { Button } from '../../../components/ui/button';
 import { syncEngine } from '../sync-engine';
 import { useSyncSummary } from '../use-sync';

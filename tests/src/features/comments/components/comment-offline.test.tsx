@@ -1,0 +1,74 @@
+// @vitest-environment jsdom
+import 'fake-indexeddb/auto';
+import { cleanup, render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { CommentsRail } from '../../../../../src/features/comments/components/comments-rail';
+import { closeLocalDb, listOutbox, localDb } from '../../../../../src/lib/local-db';
+
+const teamId = '0b7e6d1a-2f43-4c1e-9d7a-5a3c2b1e0f01';
+const flightId = '7d2f1c3b-4e5a-4b6c-8d7e-9f0a1b2c3d4e';
+const pilot = { id: '11111111-1111-4111-8111-111111111111', name: 'Rosa Kite' };
+
+beforeEach(() => {
+  // The list and members came in while online; the comment is written after the link dropped.
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+      const url = String(input);
+      if ((init?.method ?? 'GET') === 'PUT') throw new TypeError('Failed to fetch');
+      const body = url.endsWith('/comments') ? { comments: [] } : { members: [] };
+      return new Response(JSON.stringify(body), {
+        status: 200,
+        headers: { 'Content-Type': 'application/json' },
+      });
+    }),
+  );
+});
+
+afterEach(async () => {
+  cleanup();
+  vi.unstubAllGlobals();
+  await localDb().delete();
+  await closeLocalDb();
+});
+
+describe('comment written offline', () => {
+  it('stays in the thread and waits in the outbox with its own id and moment', async () => {
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    render(
+      <QueryClientProvider client={client}>
+        <CommentsRail
+          flightId={flightId}
+          teamId={teamId}
+          me={pilot}
+          role="pilot"
+          pilotId={pilot.id}
+          cursorT={7.5}
+          onSeek={vi.fn()}
+          selectedId={null}
+          onSelect={vi.fn()}
+        />
+      </QueryClientProvider>,
+    );
+    const user = userEvent.setup();
+    await screen.findByText('No comments yet.');
+    await user.type(
+      screen.getByRole('combobox', { name: 'Comment at the cursor' }),
+      'Props chipped on landing',
+    );
+    await user.click(screen.getByRole('button', { name: 'Comment' }));
+
+    expect(await screen.findByText(/Offline: your comment is kept/)).toBeTruthy();
+    expect(screen.getByText('Props chipped on landing')).toBeTruthy();
+    const [entry, ...rest] = await listOutbox();
+    expect(rest).toHaveLength(0);
+    expect(entry).toMatchObject({
+      method: 'PUT',
+      state: 'pending',
+      body: { flightId, tS: 7.5, body: 'Props chipped on landing', mentions: [] },
+    });
+    expect(entry!.path).toBe(`/api/comments/${entry!.id}`);
+  });
+});
