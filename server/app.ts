@@ -11,6 +11,7 @@ import { fleetRouter } from './fleet/fleet.router';
 import { flightsRouter } from './flights/flights.router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { healthRouter } from './http/health.router';
+import { limitJsonDepth } from './http/json-depth';
 import { clientCacheHeaders } from './http/client-cache';
 import { createLogger, requestLogger } from './http/logger';
 import { originCheck } from './http/origin-check';
@@ -19,6 +20,9 @@ import { devMailRouter } from './mail/dev-mail.router';
 import { createMemoryMailer, type Mailer } from './mail/mailer';
 import { createServices, type Services } from './services';
 import { teamsRouter } from './teams/teams.router';
+
+/** Where `npm run dev` serves the client (Vite's default port), proxying /api to us. */
+const devServerOrigins = ['http://localhost:5173', 'http://127.0.0.1:5173'];
 
 export interface AppDeps {
   dataSource: DataSource;
@@ -44,6 +48,8 @@ export function createApp(deps: AppDeps): Express {
 
   app.use(
     helmet({
+      // Browsers remember HSTS for a year; promise HTTPS only where PUBLIC_URL serves it.
+      strictTransportSecurity: config.publicUrl.startsWith('https:'),
       contentSecurityPolicy: {
         useDefaults: true,
         directives: {
@@ -57,8 +63,14 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use(requestLogger(logger));
   // A flight PUT carries its report and downsampled review detail (bounded at 6 MB).
-  app.use('/api', express.json({ limit: '8mb' }));
-  app.use('/api', originCheck([config.publicUrl]));
+  app.use('/api', express.json({ limit: '8mb', verify: limitJsonDepth }));
+  app.use(
+    '/api',
+    originCheck(
+      config.env === 'development' ? [config.publicUrl, ...devServerOrigins] : [config.publicUrl],
+      config.trustProxy !== undefined,
+    ),
+  );
   app.use('/api', sessionMiddleware(services.auth.lucia));
 
   app.use(healthRouter(dataSource));

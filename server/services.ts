@@ -7,6 +7,8 @@ import { FlightsService } from './flights/flights.service';
 import { openRawStore } from './flights/open-raw-store';
 import type { RawStore } from './flights/raw-store';
 import { createRateLimitStores, type RateLimitStores } from './http/rate-limit-store';
+import { HOUR_MS, limits } from './limits';
+import { MailQuota } from './mail/mail-quota';
 import type { Mailer } from './mail/mailer';
 import { PresetsService } from './presets/presets.service';
 import { TeamsService } from './teams/teams.service';
@@ -36,16 +38,34 @@ export function createServices(
   rawStore: RawStore = openRawStore(config),
 ): Services {
   const teams = new TeamsService(dataSource, config, mailer);
-  const flights = new FlightsService(dataSource, config, teams, mailer, rawStore);
+  const rateLimits = createRateLimitStores(config);
+  const flights = new FlightsService(
+    dataSource,
+    config,
+    teams,
+    mailer,
+    rawStore,
+    new MailQuota(
+      limits.reviewRequestMailsPerPersonPerHour,
+      HOUR_MS,
+      rateLimits.store('review-request-mail'),
+    ),
+  );
   return {
     auth: new AuthService(dataSource, config, mailer),
     teams,
     thresholds: new ThresholdsService(dataSource, teams),
-    fleet: new FleetService(dataSource, teams),
+    fleet: new FleetService(dataSource, teams, (key) => flights.releaseRaw(key)),
     flights,
-    comments: new CommentsService(dataSource, config, flights, mailer),
+    comments: new CommentsService(
+      dataSource,
+      config,
+      flights,
+      mailer,
+      new MailQuota(limits.mentionMailsPerPersonPerHour, HOUR_MS, rateLimits.store('mention-mail')),
+    ),
     presets: new PresetsService(dataSource, teams),
     mailer,
-    rateLimits: createRateLimitStores(config),
+    rateLimits,
   };
 }

@@ -11,7 +11,7 @@ import {
   type OkResponse,
 } from '../../shared/schemas/auth';
 import type { Config } from '../config';
-import { authRateLimit } from '../http/rate-limit';
+import { authRateLimit, signInRateLimit } from '../http/rate-limit';
 import { requireUser, setSessionCookie } from '../http/session';
 import type { Services } from '../services';
 
@@ -24,10 +24,14 @@ export function authRouter({ auth, teams, rateLimits }: Services, config: Config
     authRateLimit(config, rateLimits.store('sign-up')),
     async (req, res) => {
       const input = SignUpInput.parse(req.body);
-      // Check the invite before creating the account, so a bad link does not leave a half-done sign-up.
-      if (input.inviteToken) await teams.previewInvite(input.inviteToken);
-      const userId = await auth.signUp(input);
-      if (input.inviteToken) await teams.acceptInvite(userId, input.inviteToken);
+      const token = input.inviteToken;
+      // Check the invite first (a bad link costs no password hashing), then spend it in the
+      // transaction that creates the account.
+      if (token) await teams.previewInvite(token);
+      const userId = await auth.signUp(
+        input,
+        token ? (em, id) => teams.spendInvite(em, id, token).then(() => undefined) : undefined,
+      );
       setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
       res.status(201).json(await me(userId));
     },
@@ -35,7 +39,7 @@ export function authRouter({ auth, teams, rateLimits }: Services, config: Config
 
   router.post(
     paths.signIn,
-    authRateLimit(config, rateLimits.store('sign-in')),
+    signInRateLimit(config, rateLimits.store('sign-in')),
     async (req, res) => {
       const userId = await auth.signIn(SignInInput.parse(req.body));
       setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { IsNull, type DataSource } from 'typeorm';
+import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 import type {
   ChangePasswordInput,
   Me,
@@ -17,6 +17,7 @@ import {
   UnauthenticatedError,
 } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
+import { isDuplicateKey } from '../db/duplicate-key';
 import { resetMail } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
 import { Team } from '../teams/team.entity';
@@ -29,6 +30,11 @@ import { User } from './user.entity';
 
 const RESET_TTL_MS = 60 * 60 * 1000;
 const WRONG_CREDENTIALS = 'E-mail or password is wrong.';
+const emailTaken = () =>
+  new ConflictError(
+    'An account with this e-mail already exists. Sign in or reset the password.',
+    'email_taken',
+  );
 
 export class AuthService {
   readonly lucia;
@@ -45,23 +51,36 @@ export class AuthService {
     return this.ds.getRepository(User);
   }
 
-  /** Creates the account; returns the new user's id. */
-  async signUp(input: SignUpInput): Promise<string> {
+  /**
+   * Creates the account; returns the new user's id. `join` runs in the same transaction before
+   * the account is written (spending an invite), so a spent or withdrawn invite leaves no account
+   * behind and a refused account leaves the invite open. Two sign-ups racing for one address:
+   * the unique e-mail lets one win, the other answers 409.
+   */
+  async signUp(
+    input: SignUpInput,
+    join?: (em: EntityManager, userId: string) => Promise<void>,
+  ): Promise<string> {
     const existing = await this.users.findOneBy({ email: input.email });
-    if (existing)
-      throw new ConflictError(
-        'An account with this e-mail already exists. Sign in or reset the password.',
-        'email_taken',
-      );
+    if (existing) throw emailTaken();
     const id = randomUUID();
-    await this.users.insert({
-      id,
-      email: input.email,
-      name: input.name,
-      passwordHash: await hashPassword(input.password),
-      commentMail: true,
-      createdAt: Date.now(),
-    });
+    const passwordHash = await hashPassword(input.password);
+    try {
+      await this.ds.transaction(async (em) => {
+        await em.getRepository(User).insert({
+          id,
+          email: input.email,
+          name: input.name,
+          passwordHash,
+          commentMail: true,
+          createdAt: Date.now(),
+        });
+        await join?.(em, id);
+      });
+    } catch (err) {
+      if (isDuplicateKey(err)) throw emailTaken();
+      throw err;
+    }
     return id;
   }
 
@@ -152,6 +171,7 @@ export class AuthService {
       { id: reset.userId },
       { passwordHash: await hashPassword(input.password) },
     );
+    await this.endResetLinks(reset.userId);
     await this.lucia.invalidateUserSessions(reset.userId);
     return reset.userId;
   }
@@ -167,7 +187,18 @@ export class AuthService {
       { id: userId },
       { passwordHash: await hashPassword(input.newPassword) },
     );
+    await this.endResetLinks(userId);
     await this.lucia.invalidateUserSessions(userId);
+  }
+
+  /**
+   * Spends every unused reset link of the user: once the password is set anew, an older link
+   * (perhaps in a mailbox someone else can read) must not set it again.
+   */
+  private async endResetLinks(userId: string): Promise<void> {
+    await this.ds
+      .getRepository(PasswordReset)
+      .update({ userId, usedAt: IsNull() }, { usedAt: Date.now() });
   }
 
   async signOut(sessionId: string): Promise<void> {

@@ -32,4 +32,6 @@ export class Comment {
   @Column('integer', { nullable: true }) editedAt!: number | null;
   @Column('integer', { nullable: true }) deletedAt!: number | null;
   @Column('integer') createdAt!: number;
+  /** Adds one on every write; `If-Match` names it. */
+  @Column('integer', { default: 1 }) version!: number;
 }

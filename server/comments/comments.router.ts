@@ -8,6 +8,7 @@ import {
 } from '../../shared/schemas/comments';
 import { IdParam } from '../../shared/schemas/common';
 import { requireUser } from '../http/session';
+import { expectedVersion, sendVersion } from '../http/versions';
 import type { Services } from '../services';
 
 export function commentsRouter({ comments }: Services) {
@@ -31,7 +32,13 @@ export function commentsRouter({ comments }: Services) {
   router.patch(paths.comment, async (req, res) => {
     const user = requireUser(req);
     const { id } = IdParam.parse(req.params);
-    res.json((await comments.patch(user.id, id, CommentPatch.parse(req.body))) satisfies Comment);
+    const comment = await comments.patch(
+      user.id,
+      id,
+      CommentPatch.parse(req.body),
+      expectedVersion(req),
+    );
+    sendVersion(res, comment.version).json(comment satisfies Comment);
   });
 
   router.delete(paths.comment, async (req, res) => {

@@ -4,31 +4,24 @@ import {
   CommentPutInput,
   type Comment as CommentDto,
 } from '../../shared/schemas/comments';
-import type { UserRef } from '../../shared/schemas/common';
+import type { Role, UserRef } from '../../shared/schemas/common';
 import { User } from '../auth/user.entity';
 import type { Config } from '../config';
 import { Aircraft } from '../fleet/aircraft.entity';
 import { Flight } from '../flights/flight.entity';
 import type { FlightsService } from '../flights/flights.service';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from '../http/errors';
+import type { MailQuota } from '../mail/mail-quota';
 import type { Mailer } from '../mail/mailer';
 import { commentMail, type CommentMailKind } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
+import { assertCan } from '../teams/permissions';
 import { can } from '../../shared/auth/permissions';
 import { iso, isoOrNull } from '../util';
+import { isDuplicateKey } from '../db/duplicate-key';
 import { cachedQuery, insertSql } from '../db/sql';
+import { VersionConflictError } from '../http/versions';
 import { Comment } from './comment.entity';
-
-/** Primary or unique key violation, as SQLite and PostgreSQL report it. */
-function isDuplicateKey(err: unknown): boolean {
-  const driver = (err as { driverError?: { code?: string } }).driverError;
-  const code = driver?.code ?? (err as { code?: string }).code;
-  return (
-    code === 'SQLITE_CONSTRAINT_PRIMARYKEY' ||
-    code === 'SQLITE_CONSTRAINT_UNIQUE' ||
-    code === '23505'
-  );
-}
 
 export class CommentsService {
   constructor(
@@ -36,6 +29,7 @@ export class CommentsService {
     private readonly config: Pick<Config, 'publicUrl'>,
     private readonly flights: FlightsService,
     private readonly mailer: Mailer,
+    private readonly mentionQuota: MailQuota,
   ) {}
 
   private get repo() {
@@ -99,6 +93,7 @@ export class CommentsService {
       resolvedBy: c.resolvedById ? ref(c.resolvedById) : null,
       editedAt: isoOrNull(c.editedAt),
       createdAt: iso(c.createdAt),
+      version: c.version,
     };
   }
 
@@ -182,6 +177,7 @@ export class CommentsService {
       editedAt: null,
       deletedAt: null,
       createdAt: Date.now(),
+      version: 1,
     };
     // Insert first and treat a key clash as the retry it almost always is: one query fewer on
     // the path every comment takes.
@@ -207,7 +203,7 @@ export class CommentsService {
     }
     // A new comment only adds to the counters; resolve and delete recount.
     await (parentId === null ? this.bumpRoot : this.bumpReply)({ fid: input.flightId });
-    this.notify(comment, flight.pilotId, parent?.authorId ?? null, mentions);
+    this.notify(comment, flight.teamId, flight.pilotId, parent?.authorId ?? null, mentions);
     const names = mentions.length > 0 ? await this.names(mentions) : new Map<string, string>();
     names.set(userId, flight.userName);
     return { comment: this.toDto(comment, names), created: true };
@@ -228,7 +224,13 @@ export class CommentsService {
     return { comment, flight };
   }
 
-  async patch(userId: string, id: string, body: CommentPatch): Promise<CommentDto> {
+  /** `expected`: the version the editor saw (If-Match); a newer one answers 412. */
+  async patch(
+    userId: string,
+    id: string,
+    body: CommentPatch,
+    expected?: number,
+  ): Promise<CommentDto> {
     const input = CommentPatch.parse(body);
     const { comment, flight } = await this.open(userId, id);
     if (comment.deletedAt !== null) throw new ConflictError('This comment was deleted.', 'deleted');
@@ -237,6 +239,11 @@ export class CommentsService {
     if (input.body !== undefined || input.mentions !== undefined) {
       if (comment.authorId !== userId)
         throw new ForbiddenError('Only the author can edit a comment.');
+      assertCan(
+        flight.role,
+        'comments.editOwn',
+        'Your role in this team no longer allows editing.',
+      );
       if (input.body !== undefined) changes.body = input.body;
       if (input.mentions !== undefined) {
         changes.mentions = await this.checkMentions(flight.teamId, input.mentions);
@@ -254,18 +261,33 @@ export class CommentsService {
       changes.resolvedAt = input.resolved ? (comment.resolvedAt ?? Date.now()) : null;
       changes.resolvedById = input.resolved ? (comment.resolvedById ?? userId) : null;
     }
-    await this.repo.update({ id }, changes);
+    if (expected !== undefined && expected !== comment.version)
+      throw new VersionConflictError(comment.version, 'This comment');
+    const done = await this.repo.update(
+      { id, version: comment.version },
+      { ...changes, version: comment.version + 1 },
+    );
+    if (!done.affected) {
+      // Another write landed between our read and this one.
+      const now = await this.repo.findOneByOrFail({ id });
+      if (expected !== undefined) throw new VersionConflictError(now.version, 'This comment');
+      return this.patch(userId, id, body);
+    }
     if (input.resolved !== undefined) await this.refreshCounts(comment.flightId);
-    const updated = { ...comment, ...changes };
-    if (newMentions.length > 0) this.notify(updated, flight.pilotId, null, newMentions, true);
+    const updated = { ...comment, ...changes, version: comment.version + 1 };
+    if (newMentions.length > 0)
+      this.notify(updated, flight.teamId, flight.pilotId, null, newMentions, true);
     return this.dto(updated);
   }
 
   /** Author deletes their own, the owner any. The thread keeps its place for the replies. */
   async remove(userId: string, id: string): Promise<void> {
     const { comment, flight } = await this.open(userId, id);
-    if (comment.authorId !== userId && !can(flight.role, 'comments.deleteAny')) {
-      throw new ForbiddenError('Only the author or the team owner can delete a comment.');
+    const own = comment.authorId === userId && can(flight.role, 'comments.deleteOwn');
+    if (!own && !can(flight.role, 'comments.deleteAny')) {
+      throw new ForbiddenError(
+        'Only the author (while their role allows comments) or the team owner can delete a comment.',
+      );
     }
     if (comment.deletedAt !== null) return;
     await this.repo.update({ id }, { deletedAt: Date.now(), body: '', mentions: [] });
@@ -274,10 +296,12 @@ export class CommentsService {
 
   /**
    * One mail per person: a mention beats a reply, a reply beats "comment on your flight".
-   * Comment and reply mail respect the user's preference; mentions always go out.
+   * Comment and reply mail respect the user's preference; mentions go out up to the author's
+   * hourly mention quota (the comment itself is always kept).
    */
   private notify(
     c: Comment,
+    teamId: string,
     pilotId: string,
     parentAuthorId: string | null,
     mentions: string[],
@@ -294,18 +318,28 @@ export class CommentsService {
     this.mailer.track(
       (async () => {
         const ids = [...plan.keys(), c.authorId];
+        // Membership and role as they are now, not when the comment was written: someone
+        // removed from the team in between gets nothing about its flights.
         const users = await this.ds
           .getRepository(User)
           .createQueryBuilder('u')
+          .innerJoin(Membership, 'm', 'm.userId = u.id AND m.teamId = :teamId', { teamId })
           .select([
             'u.id AS id',
             'u.email AS email',
             'u.name AS name',
             'u.commentMail AS "commentMail"',
+            'm.role AS role',
           ])
           .where('u.id IN (:...ids)', { ids })
-          .getRawMany<{ id: string; email: string; name: string; commentMail: number }>();
-        const byId = new Map(users.map((u) => [u.id, u]));
+          .getRawMany<{
+            id: string;
+            email: string;
+            name: string;
+            commentMail: number;
+            role: Role;
+          }>();
+        const byId = new Map(users.filter((u) => can(u.role, 'team.read')).map((u) => [u.id, u]));
         const f = await this.ds
           .getRepository(Flight)
           .createQueryBuilder('f')
@@ -317,6 +351,7 @@ export class CommentsService {
         for (const [uid, kind] of plan) {
           const u = byId.get(uid);
           if (!u || (kind !== 'mention' && !u.commentMail)) continue;
+          if (kind === 'mention' && !(await this.mentionQuota.take(c.authorId))) continue;
           this.mailer.queue(
             commentMail(this.config, {
               kind,

@@ -18,4 +18,6 @@ export class Aircraft {
   @Column('text', { default: '' }) notes!: string;
   @Column('integer') createdAt!: number;
   @Column('integer') updatedAt!: number;
+  /** Adds one on every write; `If-Match` names it. */
+  @Column('integer', { default: 1 }) version!: number;
 }

@@ -20,6 +20,7 @@ import {
   TeamIdParam,
 } from '../../shared/schemas/common';
 import { requireUser } from '../http/session';
+import { expectedVersion, sendVersion } from '../http/versions';
 import type { Services } from '../services';
 
 export function fleetRouter({ fleet }: Services) {
@@ -47,7 +48,14 @@ export function fleetRouter({ fleet }: Services) {
   router.patch(paths.aircraft, async (req, res) => {
     const user = requireUser(req);
     const { id } = IdParam.parse(req.params);
-    res.json((await fleet.update(user.id, id, AircraftPatch.parse(req.body))) satisfies Aircraft);
+    const aircraft = await fleet.update(
+      user.id,
+      id,
+      AircraftPatch.parse(req.body),
+      expectedVersion(req),
+    );
+    // No ETag on GET: the answer also carries flight counts that change without a new version.
+    sendVersion(res, aircraft.version).json(aircraft satisfies Aircraft);
   });
   router.delete(paths.aircraft, async (req, res) => {
     const user = requireUser(req);

@@ -13,6 +13,7 @@ import { AircraftInput, BenchRunInput, ServiceEntryInput } from '../../shared/sc
 import type { Role } from '../../shared/schemas/common';
 import { User } from '../auth/user.entity';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../http/errors';
+import { VersionConflictError } from '../http/versions';
 import { Flight } from '../flights/flight.entity';
 import { severityName } from '../flights/flight-summary';
 import { can, canDeleteServiceEntry, type Action } from '../../shared/auth/permissions';
@@ -27,6 +28,8 @@ export class FleetService {
   constructor(
     private readonly ds: DataSource,
     private readonly teams: TeamsService,
+    /** Removes a raw log no flight refers to any more (the flights service's rule). */
+    private readonly releaseRaw: (key: string) => Promise<void>,
   ) {}
 
   /** Loads an aircraft and checks the caller may do `action` in its team (404 for outsiders). */
@@ -90,6 +93,7 @@ export class FleetService {
         teamId: a.teamId,
         name: a.name,
         airframe: a.airframe,
+        version: a.version,
         components: a.components,
         notes: a.notes,
         flightCount: flightCount.get(a.id) ?? 0,
@@ -127,6 +131,7 @@ export class FleetService {
       ...parsed,
       createdAt: now,
       updatedAt: now,
+      version: 1,
     };
     await this.ds.getRepository(Aircraft).insert(aircraft);
     return (await this.toDtos([aircraft]))[0]!;
@@ -137,26 +142,54 @@ export class FleetService {
     return (await this.toDtos([aircraft]))[0]!;
   }
 
-  async update(userId: string, id: string, patch: AircraftPatch): Promise<AircraftDto> {
+  /** `expected`: the version the editor saw (If-Match); a newer one answers 412. */
+  async update(
+    userId: string,
+    id: string,
+    patch: AircraftPatch,
+    expected?: number,
+  ): Promise<AircraftDto> {
     const { aircraft } = await this.access(userId, id, 'aircraft.update');
-    const next: Aircraft = { ...aircraft, ...patch, updatedAt: Date.now() };
-    await this.ds.getRepository(Aircraft).update(
-      { id },
+    if (expected !== undefined && expected !== aircraft.version)
+      throw new VersionConflictError(aircraft.version, 'This aircraft');
+    const next: Aircraft = {
+      ...aircraft,
+      ...patch,
+      updatedAt: Date.now(),
+      version: aircraft.version + 1,
+    };
+    const done = await this.ds.getRepository(Aircraft).update(
+      { id, version: aircraft.version },
       {
         name: next.name,
         airframe: next.airframe,
         components: next.components,
         notes: next.notes,
         updatedAt: next.updatedAt,
+        version: next.version,
       },
     );
+    if (!done.affected) {
+      const now = await this.ds.getRepository(Aircraft).findOneByOrFail({ id });
+      if (expected !== undefined) throw new VersionConflictError(now.version, 'This aircraft');
+      return this.update(userId, id, patch);
+    }
     return (await this.toDtos([next]))[0]!;
   }
 
   /** Deletes the aircraft with its flights, comments, service log and bench runs. */
   async remove(userId: string, id: string): Promise<void> {
     await this.access(userId, id, 'aircraft.delete');
+    const raws = await this.ds
+      .getRepository(Flight)
+      .createQueryBuilder('f')
+      .select('DISTINCT f.rawKey', 'rawKey')
+      .where('f.aircraftId = :id AND f.rawKey IS NOT NULL', { id })
+      .getRawMany<{ rawKey: string }>();
+    // Its flights go with it (foreign key cascade); then their raw logs, unless another flight
+    // of the team holds the same file.
     await this.ds.getRepository(Aircraft).delete({ id });
+    for (const { rawKey } of raws) await this.releaseRaw(rawKey);
   }
 
   async serviceLog(userId: string, aircraftId: string): Promise<ServiceEntryDto[]> {

@@ -1,5 +1,6 @@
 import { rm } from 'node:fs/promises';
 import type { DataSource } from 'typeorm';
+import { errorCodes } from '../../shared/api/error';
 import type { Role } from '../../shared/schemas/common';
 import {
   FlightPutInput,
@@ -25,6 +26,7 @@ import {
   ForbiddenError,
   NotFoundError,
 } from '../http/errors';
+import type { MailQuota } from '../mail/mail-quota';
 import type { Mailer } from '../mail/mailer';
 import { reviewDoneMail, reviewRequestMail } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
@@ -141,6 +143,7 @@ export class FlightsService {
     private readonly teams: TeamsService,
     private readonly mailer: Mailer,
     readonly rawStore: RawStore,
+    private readonly reviewRequestQuota: MailQuota,
   ) {}
 
   private get repo() {
@@ -310,9 +313,10 @@ export class FlightsService {
   /** Owner deletes any flight; the pilot who uploaded it deletes their own. */
   async remove(userId: string, id: string): Promise<void> {
     const f = await this.access(userId, id, 'team.read');
-    if (f.pilotId !== userId && !can(f.role, 'flights.deleteAny')) {
+    const own = f.pilotId === userId && can(f.role, 'flights.deleteOwn');
+    if (!own && !can(f.role, 'flights.deleteAny')) {
       throw new ForbiddenError(
-        'Only the pilot who uploaded this flight, or the team owner, can delete it.',
+        'Only the pilot who uploaded this flight (while their role allows uploads), or the team owner, can delete it.',
       );
     }
     const row = await this.repo.findOneOrFail({
@@ -323,10 +327,31 @@ export class FlightsService {
     if (row.rawKey) await this.releaseRaw(row.rawKey);
   }
 
-  /** Removes a stored raw log once no flight refers to it. */
-  private async releaseRaw(key: string) {
+  /** Removes a stored raw log once no flight refers to it (keys are per team). */
+  async releaseRaw(key: string) {
     const users = await this.repo.countBy({ rawKey: key });
     if (users === 0) await this.rawStore.remove(key);
+  }
+
+  /**
+   * Startup sweep: removes stored raw logs no flight refers to (left by a crash between a
+   * delete and its file removal, or by older versions) and staged uploads nobody finished.
+   */
+  async sweepRaw(): Promise<number> {
+    await this.rawStore.clearStaging();
+    const rows = await this.repo
+      .createQueryBuilder('f')
+      .select('DISTINCT f.rawKey', 'rawKey')
+      .where('f.rawKey IS NOT NULL')
+      .getRawMany<{ rawKey: string }>();
+    const used = new Set(rows.map((r) => r.rawKey));
+    let removed = 0;
+    for await (const key of this.rawStore.keys()) {
+      if (used.has(key)) continue;
+      await this.rawStore.remove(key);
+      removed++;
+    }
+    return removed;
   }
 
   /** One cached SQL text per combination of filters (and page size) a client uses. */
@@ -412,7 +437,7 @@ export class FlightsService {
           'hash_mismatch',
         );
       }
-      const key = rawKey(staged.sha256, staged.gzip);
+      const key = rawKey(f.teamId, staged.sha256, staged.gzip);
       const { stored } = await this.rawStore.put(staged.path, key);
       await this.repo.update({ id }, { rawKey: key, rawGzip: staged.gzip, sizeBytes: staged.size });
       return { sha256: staged.sha256, sizeBytes: staged.size, gzip: staged.gzip, stored };
@@ -459,6 +484,15 @@ export class FlightsService {
       .getRawMany<{ id: string; email: string }>();
     if (reviewers.length !== new Set(input.userIds).size)
       throw new BadRequestError('Every reviewer must be a member of the team.');
+    const mails = reviewers.filter((r) => r.id !== userId).length;
+    if (!(await this.reviewRequestQuota.fits(userId, mails))) {
+      throw new AppError(
+        429,
+        errorCodes.rateLimited,
+        `You have asked for ${this.reviewRequestQuota.limit} reviews by mail in the last hour; try again later.`,
+      );
+    }
+    await this.reviewRequestQuota.take(userId, mails);
     await this.repo.update({ id }, { reviewState: 'requested', updatedAt: Date.now() });
     const summary = await this.summary(id);
     const from = await this.ds.getRepository(User).findOneByOrFail({ id: userId });
@@ -483,7 +517,9 @@ export class FlightsService {
     const f = await this.access(userId, id, 'flights.review');
     await this.repo.update({ id }, { reviewState: input.state, updatedAt: Date.now() });
     const summary = await this.summary(id);
-    if (f.pilotId !== userId) {
+    // Only while the pilot is still in the team (a former member gets no team mail).
+    const pilotRole = await this.teams.roleIn(f.pilotId, f.teamId).catch(() => null);
+    if (f.pilotId !== userId && can(pilotRole, 'team.read')) {
       const [by, pilot] = await Promise.all([
         this.ds.getRepository(User).findOneByOrFail({ id: userId }),
         this.ds.getRepository(User).findOneByOrFail({ id: f.pilotId }),

@@ -1,7 +1,9 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { errorCodes, type ApiErrorBody } from '../../shared/api/error';
+import { isDuplicateKey } from '../db/duplicate-key';
 import { AppError, NotFoundError } from './errors';
+import { sendVersion, VersionConflictError } from './versions';
 
 function body(
   code: string,
@@ -41,8 +43,23 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
       );
     return;
   }
+  if (err instanceof VersionConflictError) {
+    const b = body(err.code, err.message);
+    b.error.currentVersion = err.currentVersion;
+    sendVersion(res, err.currentVersion).status(412).json(b);
+    return;
+  }
   if (err instanceof AppError) {
     res.status(err.status).json(body(err.code, err.message));
+    return;
+  }
+  if (isDuplicateKey(err)) {
+    // Two requests raced to create the same thing; the other one won.
+    res
+      .status(409)
+      .json(
+        body(errorCodes.conflict, 'That was just created by another request. Reload and retry.'),
+      );
     return;
   }
   // body-parser and friends mark client errors with a status (malformed JSON 400, too big 413).
@@ -60,7 +77,9 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
         ? 'The request body is too large.'
         : (err as { type?: string }).type === 'entity.parse.failed'
           ? 'The request body is not valid JSON.'
-          : 'The request could not be read.';
+          : (err as { type?: string }).type === 'entity.too.deep'
+            ? (err as Error).message
+            : 'The request could not be read.';
     res.status(status).json(body(code, message));
     return;
   }

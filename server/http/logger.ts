@@ -3,6 +3,8 @@ import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Config } from '../config';
 
+const safeRequestId = /^[A-Za-z0-9._:-]{1,128}$/;
+
 export function createLogger(config: Pick<Config, 'logLevel'>): Logger {
   return pino({ level: config.logLevel, base: undefined });
 }
@@ -12,7 +14,9 @@ export function requestLogger(logger: Logger) {
   return pinoHttp({
     logger,
     genReqId: (req, res) => {
-      const id = (req.headers['x-request-id'] as string | undefined) ?? randomUUID();
+      const given = req.headers['x-request-id'];
+      // A caller's id is kept only when short and plain; anything else could forge log lines.
+      const id = typeof given === 'string' && safeRequestId.test(given) ? given : randomUUID();
       res.setHeader('x-request-id', id);
       return id;
     },

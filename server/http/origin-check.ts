@@ -8,8 +8,12 @@ const safe = new Set(['GET', 'HEAD', 'OPTIONS']);
  * Origin on cross-site POST/PUT/PATCH/DELETE; the session cookie is SameSite=Lax as a second
  * line. Requests without Origin or Referer come from non-browser clients (CLI, scripts) that
  * cannot ride on a victim's cookie.
+ *
+ * The allowed origins are PUBLIC_URL's (plus the Vite dev server's in development). The Host
+ * header is the client's to choose, so it counts only behind a proxy we were told to trust
+ * (TRUST_PROXY), where Express reads the proxy's X-Forwarded-Host.
  */
-export function originCheck(allowedOrigins: string[]): RequestHandler {
+export function originCheck(allowedOrigins: string[], trustProxy: boolean): RequestHandler {
   const allowed = new Set(allowedOrigins.map((o) => new URL(o).origin));
   return (req, _res, next) => {
     if (safe.has(req.method)) {
@@ -27,8 +31,7 @@ export function originCheck(allowedOrigins: string[]): RequestHandler {
     } catch {
       throw new ForbiddenError('The request came from an unreadable origin.');
     }
-    const host = req.headers['x-forwarded-host'] ?? req.headers.host;
-    const own = host ? `${req.protocol}://${String(host)}` : null;
+    const own = trustProxy && req.host ? `${req.protocol}://${req.host}` : null;
     if (origin === own || allowed.has(origin)) {
       next();
       return;

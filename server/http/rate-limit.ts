@@ -1,7 +1,20 @@
-import { rateLimit, type Store } from 'express-rate-limit';
+import { ipKeyGenerator, rateLimit, type Options, type Store } from 'express-rate-limit';
+import { HOUR_MS, limits } from '../limits';
 import type { Config } from '../config';
 import { AppError } from './errors';
 import { errorCodes } from '../../shared/api/error';
+
+const tooMany =
+  (what: string): Options['handler'] =>
+  (_req, _res, next, options) => {
+    next(
+      new AppError(
+        429,
+        errorCodes.rateLimited,
+        `${what} Try again in ${Math.ceil(options.windowMs / 60_000)} minutes.`,
+      ),
+    );
+  };
 
 /**
  * Per-address limit for the routes that guess passwords or send mail. Pass the shared store
@@ -14,14 +27,58 @@ export function authRateLimit(config: Pick<Config, 'authRateLimit'>, store?: Sto
     limit: config.authRateLimit.limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, _res, next, options) => {
-      next(
-        new AppError(
-          429,
-          errorCodes.rateLimited,
-          `Too many attempts. Try again in ${Math.ceil(options.windowMs / 60_000)} minutes.`,
-        ),
-      );
-    },
+    handler: tooMany('Too many attempts.'),
   });
+}
+
+/**
+ * Failed sign-ins per client address and account: good sign-ins are not counted, so a crew
+ * signing in all day from one field router is never locked out, and guessing one account's
+ * password from one address stops at the limit.
+ */
+export function signInRateLimit(config: Pick<Config, 'authRateLimit'>, store?: Store) {
+  return rateLimit({
+    ...(store && { store }),
+    windowMs: config.authRateLimit.windowMs,
+    limit: config.authRateLimit.limit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    skipSuccessfulRequests: true,
+    keyGenerator: (req) => {
+      const email = (req.body as { email?: unknown } | undefined)?.email;
+      const account = typeof email === 'string' ? email.trim().toLowerCase() : '';
+      return `${ipKeyGenerator(req.ip ?? '')}|${account}`;
+    },
+    handler: tooMany('Too many failed sign-ins.'),
+  });
+}
+
+/**
+ * Invitations per inviter and per team per hour. Refused requests (not a member, not the
+ * owner, bad input) are not counted, so nobody can use up another team's allowance.
+ */
+export function inviteRateLimits(stores: { store(name: string): Store | undefined }) {
+  const perInviter = stores.store('invites-per-inviter');
+  const perTeam = stores.store('invites-per-team');
+  const common = {
+    windowMs: HOUR_MS,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    skipFailedRequests: true,
+    handler: tooMany('Too many invitations sent in the last hour.'),
+  } as const;
+  return [
+    rateLimit({
+      ...common,
+      ...(perInviter && { store: perInviter }),
+      limit: limits.invitesPerInviterPerHour,
+      keyGenerator: (req) => `inviter:${req.auth?.user.id ?? 'anonymous'}`,
+    }),
+    rateLimit({
+      ...common,
+      ...(perTeam && { store: perTeam }),
+      limit: limits.invitesPerTeamPerHour,
+      keyGenerator: (req) => `team:${String(req.params.teamId)}`,
+    }),
+  ];
 }

@@ -16,4 +16,6 @@ export class ImportPreset {
   @Column('text') createdById!: string;
   @Column('integer') createdAt!: number;
   @Column('integer') updatedAt!: number;
+  /** Adds one on every write; `If-Match` names it. */
+  @Column('integer', { default: 1 }) version!: number;
 }

@@ -3,6 +3,7 @@ import type { DataSource } from 'typeorm';
 import { PresetInput, PresetPatch, type Preset as PresetDto } from '../../shared/schemas/presets';
 import { User } from '../auth/user.entity';
 import { ConflictError, NotFoundError } from '../http/errors';
+import { VersionConflictError } from '../http/versions';
 import type { TeamsService } from '../teams/teams.service';
 import { iso } from '../util';
 import { ImportPreset } from './preset.entity';
@@ -36,6 +37,7 @@ export class PresetsService {
       createdBy: { id: p.createdById, name: names.get(p.createdById) ?? 'former member' },
       createdAt: iso(p.createdAt),
       updatedAt: iso(p.updatedAt),
+      version: p.version,
     }));
   }
 
@@ -62,6 +64,7 @@ export class PresetsService {
       createdById: userId,
       createdAt: now,
       updatedAt: now,
+      version: 1,
     };
     await this.repo.insert(preset);
     return (await this.toDtos([preset]))[0]!;
@@ -76,15 +79,33 @@ export class PresetsService {
     return preset;
   }
 
-  async update(userId: string, id: string, body: PresetPatch): Promise<PresetDto> {
+  /** `expected`: the version the editor saw (If-Match); a newer one answers 412. */
+  async update(
+    userId: string,
+    id: string,
+    body: PresetPatch,
+    expected?: number,
+  ): Promise<PresetDto> {
     const preset = await this.load(userId, id, 'presets.write');
+    if (expected !== undefined && expected !== preset.version)
+      throw new VersionConflictError(preset.version, 'This preset');
     const patch = PresetPatch.parse(body);
     if (patch.name) await this.nameFree(preset.teamId, patch.name, id);
-    const next = { ...preset, ...patch, updatedAt: Date.now() };
-    await this.repo.update(
-      { id },
-      { name: next.name, columnMap: next.columnMap, updatedAt: next.updatedAt },
+    const next = { ...preset, ...patch, updatedAt: Date.now(), version: preset.version + 1 };
+    const done = await this.repo.update(
+      { id, version: preset.version },
+      {
+        name: next.name,
+        columnMap: next.columnMap,
+        updatedAt: next.updatedAt,
+        version: next.version,
+      },
     );
+    if (!done.affected) {
+      const now = await this.repo.findOneByOrFail({ id });
+      if (expected !== undefined) throw new VersionConflictError(now.version, 'This preset');
+      return this.update(userId, id, body);
+    }
     return (await this.toDtos([next]))[0]!;
   }
 

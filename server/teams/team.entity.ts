@@ -8,4 +8,6 @@ export class Team {
   @Column('text', { nullable: true }) thresholds!: string | null;
   @Column('integer', { nullable: true }) thresholdsUpdatedAt!: number | null;
   @Column('integer') createdAt!: number;
+  /** Adds one on every thresholds write; `If-Match` names it. */
+  @Column('integer', { default: 1 }) thresholdsVersion!: number;
 }

@@ -28,10 +28,12 @@ import {
   type TeamList,
 } from '../../shared/schemas/teams';
 import { ThresholdsInput, type TeamThresholds } from '../../shared/schemas/thresholds';
+import { inviteRateLimits } from '../http/rate-limit';
 import { requireUser } from '../http/session';
+import { expectedVersion, sendVersion } from '../http/versions';
 import type { Services } from '../services';
 
-export function teamsRouter({ teams, thresholds, presets }: Services) {
+export function teamsRouter({ teams, thresholds, presets, rateLimits }: Services) {
   const router = Router();
 
   router.get(paths.teams, async (req, res) => {
@@ -84,12 +86,11 @@ export function teamsRouter({ teams, thresholds, presets }: Services) {
       invites: await teams.invites(user.id, TeamIdParam.parse(req.params).teamId),
     } satisfies InviteList);
   });
-  router.post(paths.invites, async (req, res) => {
+  router.post(paths.invites, ...inviteRateLimits(rateLimits), async (req, res) => {
     const user = requireUser(req);
     const { teamId } = TeamIdParam.parse(req.params);
-    res
-      .status(201)
-      .json((await teams.invite(user.id, teamId, InviteInput.parse(req.body))) satisfies Invite);
+    const { invite, created } = await teams.invite(user.id, teamId, InviteInput.parse(req.body));
+    res.status(created ? 201 : 200).json(invite satisfies Invite);
   });
   router.delete(paths.teamInvite, async (req, res) => {
     const user = requireUser(req);
@@ -111,23 +112,19 @@ export function teamsRouter({ teams, thresholds, presets }: Services) {
 
   router.get(paths.thresholds, async (req, res) => {
     const user = requireUser(req);
-    res.json(
-      (await thresholds.get(
-        user.id,
-        TeamIdParam.parse(req.params).teamId,
-      )) satisfies TeamThresholds,
-    );
+    const t = await thresholds.get(user.id, TeamIdParam.parse(req.params).teamId);
+    sendVersion(res, t.version).json(t satisfies TeamThresholds);
   });
   router.put(paths.thresholds, async (req, res) => {
     const user = requireUser(req);
     const { teamId } = TeamIdParam.parse(req.params);
-    res.json(
-      (await thresholds.put(
-        user.id,
-        teamId,
-        ThresholdsInput.parse(req.body),
-      )) satisfies TeamThresholds,
+    const t = await thresholds.put(
+      user.id,
+      teamId,
+      ThresholdsInput.parse(req.body),
+      expectedVersion(req),
     );
+    sendVersion(res, t.version).json(t satisfies TeamThresholds);
   });
 
   router.get(paths.presets, async (req, res) => {
@@ -146,7 +143,13 @@ export function teamsRouter({ teams, thresholds, presets }: Services) {
   router.patch(paths.preset, async (req, res) => {
     const user = requireUser(req);
     const { id } = IdParam.parse(req.params);
-    res.json((await presets.update(user.id, id, PresetPatch.parse(req.body))) satisfies Preset);
+    const preset = await presets.update(
+      user.id,
+      id,
+      PresetPatch.parse(req.body),
+      expectedVersion(req),
+    );
+    sendVersion(res, preset.version).json(preset satisfies Preset);
   });
   router.delete(paths.preset, async (req, res) => {
     const user = requireUser(req);

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { In, IsNull, type DataSource } from 'typeorm';
+import { In, IsNull, type DataSource, type EntityManager } from 'typeorm';
 import type { Role } from '../../shared/schemas/common';
 import type {
   Invite as InviteDto,
@@ -18,6 +18,7 @@ import { inviteMail, inviteUrl } from '../mail/templates';
 import { iso, isoOrNull } from '../util';
 import { cachedQuery } from '../db/sql';
 import { withUserNames } from '../db/with-user-names';
+import { limits } from '../limits';
 import { Invite } from './invite.entity';
 import { Membership } from './membership.entity';
 import type { Action } from '../../shared/auth/permissions';
@@ -177,7 +178,12 @@ export class TeamsService {
     await repo.delete({ teamId, userId });
   }
 
-  async invite(actorId: string, teamId: string, input: InviteInput): Promise<InviteDto> {
+  /** Invites an address; `created` is false when it already had an open invitation. */
+  async invite(
+    actorId: string,
+    teamId: string,
+    input: InviteInput,
+  ): Promise<{ invite: InviteDto; created: boolean }> {
     await this.authorize(actorId, teamId, 'invites.manage');
     const existing = await this.ds
       .getRepository(Membership)
@@ -187,8 +193,27 @@ export class TeamsService {
       .getCount();
     if (existing > 0)
       throw new ConflictError(`${input.email} is already in this team.`, 'already_member');
-    const token = newToken();
     const now = Date.now();
+    const invites = this.ds.getRepository(Invite);
+    const openWhere =
+      'i.teamId = :teamId AND i.acceptedAt IS NULL AND i.withdrawnAt IS NULL AND i.expiresAt > :now';
+    // A second invite to an address that has an open one would only mail it again: answer
+    // with the open one and send nothing.
+    const pending = await withUserNames(
+      invites
+        .createQueryBuilder('i')
+        .where(`${openWhere} AND i.email = :email`, { teamId, now, email: input.email }),
+      'i.invitedById',
+    );
+    if (pending[0]) return { invite: this.inviteDto(pending[0][0], pending[0][1]), created: false };
+    const open = await invites.createQueryBuilder('i').where(openWhere, { teamId, now }).getCount();
+    if (open >= limits.openInvitesPerTeam) {
+      throw new ConflictError(
+        `This team already has ${limits.openInvitesPerTeam} open invitations. Withdraw some or wait until they are used.`,
+        'too_many_invites',
+      );
+    }
+    const token = newToken();
     const invite: Invite = {
       id: randomUUID(),
       teamId,
@@ -203,7 +228,7 @@ export class TeamsService {
       withdrawnById: null,
       createdAt: now,
     };
-    await this.ds.getRepository(Invite).insert(invite);
+    await invites.insert(invite);
     const team = await this.ds.getRepository(Team).findOneByOrFail({ id: teamId });
     const by = await this.ds.getRepository(User).findOneByOrFail({ id: actorId });
     this.mailer.queue(
@@ -217,7 +242,10 @@ export class TeamsService {
       }),
     );
     // The one moment the token is known in the clear; the owner may pass the link on by hand.
-    return { ...this.inviteDto(invite, by.name), link: inviteUrl(this.config, token) };
+    return {
+      invite: { ...this.inviteDto(invite, by.name), link: inviteUrl(this.config, token) },
+      created: true,
+    };
   }
 
   private inviteDto(
@@ -287,8 +315,8 @@ export class TeamsService {
   }
 
   /** The invite behind a link, if it still lets someone in; otherwise says plainly why not. */
-  private async openInvite(token: string): Promise<Invite> {
-    const invite = await this.ds.getRepository(Invite).findOneBy({ tokenHash: hashToken(token) });
+  private async openInvite(token: string, em: EntityManager = this.ds.manager): Promise<Invite> {
+    const invite = await em.getRepository(Invite).findOneBy({ tokenHash: hashToken(token) });
     const state = invite ? inviteState(invite) : null;
     if (invite && state === 'open') return invite;
     if (state === 'withdrawn')
@@ -322,25 +350,32 @@ export class TeamsService {
 
   /** Joins the team with the invited role; the link works once. */
   async acceptInvite(userId: string, token: string): Promise<TeamDto> {
-    const invite = await this.openInvite(token);
-    const already = await this.ds
-      .getRepository(Membership)
-      .findOneBy({ teamId: invite.teamId, userId });
+    const invite = await this.ds.transaction((em) => this.spendInvite(em, userId, token));
+    return this.toDto(invite.teamId, invite.role as Role);
+  }
+
+  /**
+   * Spends the invite and adds the membership inside the caller's transaction (sign-up runs it
+   * with the new account, so either both happen or neither).
+   */
+  async spendInvite(em: EntityManager, userId: string, token: string): Promise<Invite> {
+    const invite = await this.openInvite(token, em);
+    const already = await em.getRepository(Membership).findOneBy({ teamId: invite.teamId, userId });
     if (already) throw new ConflictError('You are already in this team.', 'already_member');
     // Spent only if still open: a withdrawal or another acceptance in between wins.
-    const spent = await this.ds
+    const spent = await em
       .getRepository(Invite)
       .update(
         { id: invite.id, acceptedAt: IsNull(), withdrawnAt: IsNull() },
         { acceptedAt: Date.now(), acceptedById: userId },
       );
     if (!spent.affected) {
-      await this.openInvite(token); // throws why it is no longer open
+      await this.openInvite(token, em); // throws why it is no longer open
       throw new BadRequestError('This invitation was just used.', 'invalid_token');
     }
-    await this.ds
+    await em
       .getRepository(Membership)
       .insert({ teamId: invite.teamId, userId, role: invite.role, joinedAt: Date.now() });
-    return this.toDto(invite.teamId, invite.role as Role);
+    return invite;
   }
 }

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { resolveThresholds, type Thresholds } from '../../shared/schemas/thresholds';
 import type { TeamThresholds } from '../../shared/schemas/thresholds';
+import { VersionConflictError } from '../http/versions';
 import { isoOrNull } from '../util';
 import { Team } from './team.entity';
 import type { TeamsService } from './teams.service';
@@ -22,17 +23,36 @@ export class ThresholdsService {
       thresholds: resolveThresholds(stored),
       isDefault: stored === undefined,
       updatedAt: isoOrNull(team.thresholdsUpdatedAt),
+      version: team.thresholdsVersion,
     };
   }
 
-  async put(userId: string, teamId: string, thresholds: Thresholds): Promise<TeamThresholds> {
+  /** `expected`: the version the editor saw (If-Match); a newer one answers 412. */
+  async put(
+    userId: string,
+    teamId: string,
+    thresholds: Thresholds,
+    expected?: number,
+  ): Promise<TeamThresholds> {
     await this.teams.authorize(userId, teamId, 'thresholds.update');
-    await this.ds
-      .getRepository(Team)
-      .update(
-        { id: teamId },
-        { thresholds: JSON.stringify(thresholds), thresholdsUpdatedAt: Date.now() },
-      );
+    const teams = this.ds.getRepository(Team);
+    const { thresholdsVersion: current } = await teams.findOneByOrFail({ id: teamId });
+    if (expected !== undefined && expected !== current)
+      throw new VersionConflictError(current, "The team's thresholds");
+    const done = await teams.update(
+      { id: teamId, thresholdsVersion: current },
+      {
+        thresholds: JSON.stringify(thresholds),
+        thresholdsUpdatedAt: Date.now(),
+        thresholdsVersion: current + 1,
+      },
+    );
+    if (!done.affected) {
+      const now = await teams.findOneByOrFail({ id: teamId });
+      if (expected !== undefined)
+        throw new VersionConflictError(now.thresholdsVersion, "The team's thresholds");
+      return this.put(userId, teamId, thresholds);
+    }
     return this.get(userId, teamId);
   }
 }

@@ -8,6 +8,8 @@ export const ApiErrorBody = z.object({
     issues: z
       .array(z.object({ path: z.array(z.union([z.string(), z.number()])), message: z.string() }))
       .optional(),
+    /** With 412 (version_conflict): the version the server holds now. */
+    currentVersion: z.number().int().optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof ApiErrorBody>;
@@ -20,6 +22,7 @@ export const errorCodes = {
   conflict: 'conflict',
   tooLarge: 'too_large',
   rateLimited: 'rate_limited',
+  versionConflict: 'version_conflict',
   internal: 'internal',
 } as const;
 export type ErrorCode = (typeof errorCodes)[keyof typeof errorCodes];

@@ -29,12 +29,17 @@ export const permissions = {
   'flights.upload': ['owner', 'tuner', 'pilot'],
   'flights.replaceAny': ['owner'],
   'flights.deleteAny': ['owner'],
+  // Own work follows the current role: a pilot demoted to viewer no longer deletes their flights.
+  'flights.deleteOwn': ['owner', 'tuner', 'pilot'],
   'flights.requestReview': ['owner', 'tuner', 'pilot'],
   'flights.review': ['owner', 'coach'],
   'comments.create': ['owner', 'tuner', 'pilot', 'coach'],
   'comments.resolveAny': ['owner', 'tuner', 'coach'],
   'comments.resolveOnOwnFlight': ['pilot'],
   'comments.deleteAny': ['owner'],
+  // Editing or deleting one's own comment needs a role that may still write comments.
+  'comments.editOwn': ['owner', 'tuner', 'pilot', 'coach'],
+  'comments.deleteOwn': ['owner', 'tuner', 'pilot', 'coach'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof permissions;

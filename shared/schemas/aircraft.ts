@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { Airframe } from './airframe';
-import { Id, IsoDate, IsoDateTime, UserRef } from './common';
+import { DisplayName, Id, IsoDate, IsoDateTime, UserRef } from './common';
 import { Severity } from './report';
 
 const Text = (max: number) => z.string().trim().max(max);
@@ -23,7 +23,7 @@ export const Components = z.object({
 });
 export type Components = z.infer<typeof Components>;
 
-export const AircraftName = z.string().trim().min(1, 'enter a name').max(80);
+export const AircraftName = DisplayName(80);
 
 export const AircraftInput = z.object({
   name: AircraftName,
@@ -50,6 +50,8 @@ export const Aircraft = z.object({
   airframe: Airframe,
   components: Components,
   notes: z.string(),
+  /** Adds one on every write; send it back in If-Match to refuse overwriting a newer one. */
+  version: z.number().int().positive(),
   flightCount: z.number().int(),
   /** Most recent flight, for the fleet card: when, worst severity, open comment threads. */
   lastFlight: z

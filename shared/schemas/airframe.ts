@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DisplayName } from './common';
 
 /** Spin seen from above. A cw prop pushes the frame ccw: a negative yaw moment in FRD. */
 export const Spin = z.enum(['cw', 'ccw']);
@@ -20,7 +21,7 @@ export const Prop = z.object({
 export type Prop = z.infer<typeof Prop>;
 
 export const Airframe = z.object({
-  name: z.string().trim().min(1).max(120),
+  name: DisplayName(120),
   motors: z.array(Motor).min(3).max(16),
   massG: z.number().positive().max(100_000),
   prop: Prop,

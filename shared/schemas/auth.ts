@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, IsoDateTime } from './common';
+import { DisplayName, Id, IsoDateTime } from './common';
 
 export const Email = z
   .string()
@@ -14,7 +14,7 @@ export const Password = z
   .min(10, 'use at least 10 characters')
   .max(256, 'use at most 256 characters');
 
-export const PersonName = z.string().trim().min(1, 'enter a name').max(80);
+export const PersonName = DisplayName(80);
 
 export const SignUpInput = z.object({
   email: Email,

@@ -43,6 +43,8 @@ export const Comment = z.object({
   resolvedBy: UserRef.nullable(),
   editedAt: IsoDateTime.nullable(),
   createdAt: IsoDateTime,
+  /** Adds one on every write; send it back in If-Match to refuse overwriting a newer one. */
+  version: z.number().int().positive(),
 });
 export type Comment = z.infer<typeof Comment>;
 

@@ -25,6 +25,24 @@ export const IsoDate = z.iso.date({ message: 'expected a date as YYYY-MM-DD' });
 export const Role = z.enum(['owner', 'tuner', 'pilot', 'coach', 'viewer']);
 export type Role = z.infer<typeof Role>;
 
+/**
+ * Characters a name shown in mail subjects and lists must not carry: control characters
+ * (C0, C1), line and paragraph separators, and the bidirectional marks, embeddings, overrides
+ * and isolates that can make "Mara" read as something else (Unicode TR #9, §2).
+ */
+const unsafeInName =
+  // eslint-disable-next-line no-control-regex
+  /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]+/g;
+
+/** A name of a person, team, aircraft or preset: unsafe characters become one space, then trimmed. */
+export const DisplayName = (max: number, empty = 'enter a name') =>
+  z
+    .string()
+    .overwrite((v) => v.replace(unsafeInName, ' ').replace(/ {2,}/g, ' '))
+    .trim()
+    .min(1, empty)
+    .max(max);
+
 /** Who did something, as lists show it. */
 export const UserRef = z.object({ id: Id, name: z.string() });
 export type UserRef = z.infer<typeof UserRef>;

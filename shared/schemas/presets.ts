@@ -1,10 +1,10 @@
 import { z } from 'zod';
 import { ColumnMap } from '../log/column-map';
-import { Id, IsoDateTime, UserRef } from './common';
+import { DisplayName, Id, IsoDateTime, UserRef } from './common';
 
 /** An import preset: a saved column map for a log layout the team meets often. */
 export const PresetInput = z.object({
-  name: z.string().trim().min(1, 'name the preset').max(80),
+  name: DisplayName(80, 'name the preset'),
   columnMap: ColumnMap,
 });
 export type PresetInput = z.infer<typeof PresetInput>;
@@ -22,6 +22,8 @@ export const Preset = z.object({
   createdBy: UserRef,
   createdAt: IsoDateTime,
   updatedAt: IsoDateTime,
+  /** Adds one on every write; send it back in If-Match to refuse overwriting a newer one. */
+  version: z.number().int().positive(),
 });
 export type Preset = z.infer<typeof Preset>;
 export const PresetList = z.object({ presets: z.array(Preset) });

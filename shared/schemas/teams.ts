@@ -1,8 +1,8 @@
 import { z } from 'zod';
 import { Email } from './auth';
-import { Id, IsoDateTime, Role } from './common';
+import { DisplayName, Id, IsoDateTime, Role } from './common';
 
-export const TeamName = z.string().trim().min(1, 'enter a team name').max(80);
+export const TeamName = DisplayName(80, 'enter a team name');
 
 export const TeamInput = z.object({ name: TeamName });
 export type TeamInput = z.infer<typeof TeamInput>;

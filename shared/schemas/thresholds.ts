@@ -111,5 +111,7 @@ export const TeamThresholds = z.object({
   /** True while the team has never saved its own. */
   isDefault: z.boolean(),
   updatedAt: IsoDateTime.nullable(),
+  /** Adds one on every write; send it back in If-Match to refuse overwriting a newer one. */
+  version: z.number().int().positive(),
 });
 export type TeamThresholds = z.infer<typeof TeamThresholds>;

@@ -70,6 +70,7 @@ function optimistic(input: NewComment, author: UserRef): Comment {
     resolvedBy: null,
     editedAt: null,
     createdAt: new Date().toISOString(),
+    version: 1,
   };
 }
 

@@ -384,8 +384,7 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
     );
     return figures;
   } finally {
-    server.child.kill('SIGTERM');
-    await server.exited;
+    await server.stop();
     await stores.cleanup();
     rmSync(dataDir, { recursive: true, force: true });
   }

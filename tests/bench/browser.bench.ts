@@ -10,12 +10,12 @@
  * DevTools CPU throttling): on a quiet machine the long tasks a busy or slower one would see
  * show up. The default, 1, measures the machine as it is.
  */
-import { execFileSync, spawn } from 'node:child_process';
+import { execFileSync } from 'node:child_process';
 import { closeSync, existsSync, mkdtempSync, openSync, rmSync, statSync, writeSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { tmpdir } from 'node:os';
-import { chromium, type Page } from '@playwright/test';
+import { chromium, type Browser, type Page } from '@playwright/test';
+import { freePort, spawnServer } from '../server/helpers/spawn-server';
 import { scenarios } from '../../shared/sim/scenarios';
 import { simulate } from '../../shared/sim/simulate';
 import { writeCanonicalCsvBytes } from '../../shared/sim/csv-writer';
@@ -55,17 +55,6 @@ function ensureLog(dir: string): string {
   return path;
 }
 
-function freePort(): Promise<number> {
-  return new Promise((res, rej) => {
-    const s = createServer();
-    s.once('error', rej);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as { port: number };
-      s.close(() => res(port));
-    });
-  });
-}
-
 const bench: Bench = async ({ json, dir }) => {
   const say = (s: string) => {
     if (!json) console.log(s);
@@ -96,56 +85,32 @@ const bench: Bench = async ({ json, dir }) => {
 
   const port = await freePort();
   const dataDir = mkdtempSync(join(tmpdir(), 'hoverprint-bench-browser-'));
-  const server = spawn(
-    process.execPath,
-    [
-      join(root, 'node_modules/tsx/dist/cli.mjs'),
-      '--tsconfig',
-      join(root, 'tsconfig.json'),
-      resolve(root, 'server/index.ts'),
-    ],
-    {
-      cwd: site,
-      env: {
-        ...process.env,
-        NODE_ENV: 'production',
-        PORT: String(port),
-        HOST: '127.0.0.1',
-        DATA_DIR: dataDir,
-        PUBLIC_URL: `http://127.0.0.1:${port}`,
-        LOG_LEVEL: 'silent',
-      },
-      stdio: ['ignore', 'ignore', 'pipe'],
-    },
-  );
-  let stderr = '';
-  server.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
   const base = `http://127.0.0.1:${port}`;
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  // The server process itself, in the site folder so it serves that build; stopped (and its
+  // port checked closed) in the finally below whatever happens in between.
+  const server = await spawnServer(
+    {
+      NODE_ENV: 'production',
+      DATA_DIR: dataDir,
+      PUBLIC_URL: base,
+      LOG_LEVEL: 'silent',
+    },
+    { cwd: site, port },
+  );
+  let browser: Browser | undefined;
   try {
-    for (let i = 0; ; i++) {
-      if (server.exitCode !== null) throw new Error(`server exited before listening:\n${stderr}`);
-      if (
-        await fetch(`${base}/api/health`).then(
-          (r) => r.ok,
-          () => false,
-        )
-      )
-        break;
-      if (i > 600) throw new Error('server did not answer within 60 s');
-      await new Promise((r) => setTimeout(r, 100));
-    }
+    browser = await chromium.launch({
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: [
+        '--headless',
+        '--no-sandbox',
+        '--disable-gpu',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
+    });
     const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
     await slowDown(page, slowdown);
     await page.addInitScript(() => {
@@ -234,8 +199,8 @@ const bench: Bench = async ({ json, dir }) => {
       cpuSlowdown: slowdown,
     };
   } finally {
-    await browser.close();
-    server.kill('SIGTERM');
+    await browser?.close();
+    await server.stop();
     rmSync(dataDir, { recursive: true, force: true });
     rmSync(site, { recursive: true, force: true });
   }

@@ -72,7 +72,7 @@ describe('parseConfig', () => {
 
 describe('starting the server with a bad environment', () => {
   it('exits non-zero with a message naming PORT', async () => {
-    const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'server/index.ts'], {
+    const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
       env: { ...process.env, PORT: 'abc', NODE_ENV: 'test' },
       stdio: ['ignore', 'pipe', 'pipe'],
     });

@@ -22,6 +22,7 @@ describe('migrations', () => {
       'Initial1764633600000',
       'InviteWithdrawal1764720000000',
       'FlightListIndexes1764806400000',
+      'Versions1764892800000',
     ]);
     const pending = await ds.driver.createSchemaBuilder().log();
     expect(pending.upQueries.map((q) => q.query)).toEqual([]);

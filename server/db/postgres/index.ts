@@ -2,6 +2,7 @@ import type { MigrationInterface } from 'typeorm';
 import { FlightListIndexes1764806400000 } from '../migrations/1764806400000-flight-list-indexes';
 import { Initial1764633600000 } from './1764633600000-initial';
 import { InviteWithdrawal1764720000000 } from './1764720000000-invite-withdrawal';
+import { Versions1764892800000 } from './1764892800000-versions';
 
 /**
  * Every PostgreSQL migration in the order it must run. Each has the name of its SQLite twin in
@@ -12,4 +13,5 @@ export const postgresMigrations: (new () => MigrationInterface)[] = [
   Initial1764633600000,
   InviteWithdrawal1764720000000,
   FlightListIndexes1764806400000,
+  Versions1764892800000,
 ];

@@ -25,6 +25,7 @@ function comment(over: Partial<Comment> & Pick<Comment, 'id' | 'tS' | 'body'>): 
     resolvedBy: null,
     editedAt: null,
     createdAt: '2026-05-02T10:00:00.000Z',
+    version: 1,
     ...over,
   };
 }

@@ -89,6 +89,7 @@ function servePresets(presets: { columnMap: ColumnMap }[]) {
         createdBy: { id: '00000000-0000-4000-8000-0000000000bb', name: 'Mara Quill' },
         createdAt: '2026-04-01T10:00:00.000Z',
         updatedAt: '2026-04-01T10:00:00.000Z',
+        version: 1,
       })),
     }),
   );

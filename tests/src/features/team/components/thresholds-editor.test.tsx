@@ -25,6 +25,7 @@ function stubServer() {
         thresholds,
         isDefault: body === undefined,
         updatedAt: body ? '2026-04-12T09:30:00.000Z' : null,
+        version: body ? 2 : 1,
       });
     }),
   );

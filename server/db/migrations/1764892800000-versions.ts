@@ -1,0 +1,23 @@
+import type { MigrationInterface, QueryRunner } from 'typeorm';
+
+/**
+ * A version on every record two people may edit at once (comments, aircraft, import presets,
+ * a team's thresholds): every write adds one, and a write naming an older one is refused.
+ */
+export class Versions1764892800000 implements MigrationInterface {
+  name = 'Versions1764892800000';
+
+  async up(q: QueryRunner): Promise<void> {
+    await q.query('ALTER TABLE "comments" ADD COLUMN "version" integer NOT NULL DEFAULT 1');
+    await q.query('ALTER TABLE "aircraft" ADD COLUMN "version" integer NOT NULL DEFAULT 1');
+    await q.query('ALTER TABLE "import_presets" ADD COLUMN "version" integer NOT NULL DEFAULT 1');
+    await q.query('ALTER TABLE "teams" ADD COLUMN "thresholdsVersion" integer NOT NULL DEFAULT 1');
+  }
+
+  async down(q: QueryRunner): Promise<void> {
+    await q.query('ALTER TABLE "teams" DROP COLUMN "thresholdsVersion"');
+    await q.query('ALTER TABLE "import_presets" DROP COLUMN "version"');
+    await q.query('ALTER TABLE "aircraft" DROP COLUMN "version"');
+    await q.query('ALTER TABLE "comments" DROP COLUMN "version"');
+  }
+}
