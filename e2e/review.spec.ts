@@ -133,7 +133,7 @@ test('compare states what changed against another flight of the same aircraft', 
   const value = await pick.locator('option', { hasText: 'clean-quad-x.csv' }).getAttribute('value');
   await pick.selectOption(value!);
   const changed = page.getByRole('region', { name: 'What changed' });
-  await expect(changed).toContainText(/Motor 3 deviation rose from [+−]\d+ % to \+\d+ %/);
+  await expect(changed).toContainText(/Motor 3 deviation rose from (?:[+−]\d+|0) % to \+\d+ %/);
   // Both flights say which geometry they were judged against (here the assumed quad X).
   await expect(page.getByText(/Judged against Unknown quad X .*\(assumed\)/)).toHaveCount(2);
   await expect(page.getByRole('img', { name: /spectra of both flights/ })).toBeVisible();
