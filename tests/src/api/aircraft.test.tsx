@@ -26,6 +26,7 @@ function kite(airframe: Aircraft['airframe'], name = 'Kite'): Aircraft {
     flightCount: 1,
     lastFlight: null,
     awaitingReview: 0,
+    version: 1,
     createdAt: '2026-11-01T10:00:00.000Z',
     updatedAt: '2026-11-01T10:00:00.000Z',
   };
