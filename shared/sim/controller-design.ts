@@ -3,10 +3,16 @@ import type { Airframe } from '../schemas/airframe';
 import { physicalHoverThrusts, reactionYawSign, type Plant } from './plant';
 import type { BuildParams } from './types';
 
+/** Share of the plant inverse the feedforward supplies (roll and pitch; yaw). */
+const FF_SHARE = 0.85;
+const FF_SHARE_YAW = 0;
+
 /** A rate PI per axis, proportional and integral gains in output per rad/s (and per rad). */
 export interface AxisGains {
   kp: number;
   ki: number;
+  /** Feedforward, output per rad/s² of commanded angular acceleration at hover. */
+  ff: number;
 }
 
 /** The flight controller and the pilot's feel for this aircraft, fixed before take-off. */
@@ -72,7 +78,9 @@ export function designController(
     }
     const wc = (a < 2 ? 0.5 : 0.25) / build.motorTauS; // crossover, rad/s
     const kp = (wc * inertia[a]!) / b;
-    return { kp, ki: (kp * wc) / 4 };
+    // Feedforward short of the full plant inverse, less on yaw, whose authority is small: a
+    // tune that asks for every bit of a stick move saturates the motors (common practice).
+    return { kp, ki: (kp * wc) / 4, ff: ((a < 2 ? FF_SHARE : FF_SHARE_YAW) * inertia[a]!) / b };
   });
 
   // The pilot knows how this machine hovers (faults included) and flies around that throttle.

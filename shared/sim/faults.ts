@@ -11,12 +11,14 @@ export interface FaultEffects {
   tiltRad: number[];
   unbalanceGmm: number[];
   cgOffset: { x: number; y: number };
-  resonance: { hz: number; q: number; rmsDegS: number } | null;
+  resonance: { hz: number; q: number; rmsDegS: number; axis: 'roll' | 'pitch' | 'both' } | null;
   resistanceScale: number;
   capacityScale: number;
   escMaxA: number | null;
   maxThrustScale: number;
   delayMs: number;
+  /** Scale on the rate loop's gains and feedforward. */
+  loopGainScale: number;
 }
 
 function checkMotor(fault: Fault & { motor: number }, n: number) {
@@ -52,6 +54,7 @@ export function applyFaults(
     escMaxA: airframe.escMaxA ?? null,
     maxThrustScale: 1,
     delayMs: 0,
+    loopGainScale: 1,
   };
   for (const f of faults) {
     switch (f.kind) {
@@ -86,7 +89,7 @@ export function applyFaults(
         break;
       case 'frame-resonance':
         positive(f.hz, 'frame-resonance: hz');
-        fx.resonance = { hz: f.hz, q: f.q ?? 12, rmsDegS: f.rmsDegS ?? 4 };
+        fx.resonance = { hz: f.hz, q: f.q ?? 12, rmsDegS: f.rmsDegS ?? 4, axis: f.axis ?? 'both' };
         positive(fx.resonance.q, 'frame-resonance: q');
         break;
       case 'tired-battery':
@@ -107,6 +110,11 @@ export function applyFaults(
         if (!(f.delayMs >= 0 && f.delayMs <= 1000))
           throw new RangeError('tracking-delay: delayMs must be within 0–1000');
         fx.delayMs += f.delayMs;
+        break;
+      case 'slow-loop':
+        if (!(f.gainScale > 0 && f.gainScale <= 1))
+          throw new RangeError('slow-loop: gainScale must be in (0, 1]');
+        fx.loopGainScale *= f.gainScale;
         break;
       default: {
         const never: never = f;

@@ -99,6 +99,22 @@ export const scenarios: Record<string, Scenario> = {
       faults: [{ kind: 'tracking-delay', delayMs: 40 }],
     },
   ),
+  'slow-loop': scenario(
+    'slow-loop',
+    'A soft tune: rate-loop gains and feedforward at 70 % of a good tune, so the aircraft trails the sticks by 15–20 ms.',
+    {
+      airframe: kite5,
+      faults: [{ kind: 'slow-loop', gainScale: 0.7 }],
+    },
+  ),
+  'quiet-frame-line': scenario(
+    'quiet-frame-line',
+    'A 260 Hz frame mode on the roll axis, under the absolute gyro limit yet most of that axis’s vibration: a loose camera plate.',
+    {
+      airframe: kite5,
+      faults: [{ kind: 'frame-resonance', hz: 260, q: 20, rmsDegS: 3, axis: 'roll' }],
+    },
+  ),
   'wide-front-healthy': scenario(
     'wide-front-healthy',
     'Healthy wide-front cinematic quad, front arms 1.2× the rear: unequal expected outputs that are not a fault.',
@@ -121,6 +137,15 @@ export const scenarios: Record<string, Scenario> = {
     faults: [],
     rateHz: 500,
   }),
+  'hex-weak-motor': scenario(
+    'hex-weak-motor',
+    'Hex survey rig whose motor 5 prop makes 15 % less thrust per rpm² (a chipped blade pair): the hex spreads the correction, so its output rises only a few %.',
+    {
+      airframe: presetAirframe('hex-x', { name: 'Hex X survey rig' }),
+      faults: [{ kind: 'weak-motor', motor: 5, efficiency: 0.85, cause: 'prop' }],
+      rateHz: 500,
+    },
+  ),
   'octo-clean': scenario('octo-clean', 'Healthy 4.5 kg octo X on 12-inch props, 6S.', {
     airframe: presetAirframe('octo-x', { name: 'Octo X heavy lift' }),
     faults: [],

@@ -3,7 +3,7 @@ import type { ParsedLog } from '../log/types';
 import type { Airframe } from '../schemas/airframe';
 import { cellOpenCircuitV, terminalVoltage } from './battery';
 import { defaultBuild } from './build';
-import { designController } from './controller-design';
+import { designController, type AxisGains } from './controller-design';
 import { addRotorVibration, FrameMode, pilotWobble, type SensorVibration } from './disturbances';
 import { applyFaults } from './faults';
 import { Mixer } from './mixer';
@@ -11,6 +11,7 @@ import { allocateColumns, assembleLog } from './log-columns';
 import { pilotCommand, type PilotCommand } from './pilot';
 import { buildPhases } from './pilot-script';
 import { buildPlant } from './plant';
+import { RateAxis } from './rate-loop';
 import { streamFor } from './prng';
 import type { BuildParams, GroundTruth, Phase, Scenario, SimOptions } from './types';
 
@@ -59,12 +60,11 @@ export function simulate(
   const { cosTilt, sinTilt, jxx, jyy, jzz, dragZ, capacityMah, packR } = plant;
   const ctlDesign = designController(airframe, build, plant);
   const { collective, ctl, pilotHover, punchThrottle } = ctlDesign;
-  const kpR = ctlDesign.roll.kp;
-  const kiR = ctlDesign.roll.ki;
-  const kpP = ctlDesign.pitch.kp;
-  const kiP = ctlDesign.pitch.ki;
-  const kpY = ctlDesign.yaw.kp;
-  const kiY = ctlDesign.yaw.ki;
+  const gs = fx.loopGainScale;
+  const loop = (g: AxisGains) => new RateAxis(g.kp * gs, g.ki * gs, g.ff * gs, build.motorTauS);
+  const rollLoop = loop(ctlDesign.roll);
+  const pitchLoop = loop(ctlDesign.pitch);
+  const yawLoop = loop(ctlDesign.yaw);
 
   // --- Steps and output ---------------------------------------------------------------------
   const rows = Math.round(seconds * rateHz) + 1;
@@ -113,9 +113,6 @@ export function simulate(
   let alt = 0;
   let climb = 0;
   let airborne = false;
-  let iR = 0;
-  let iP = 0;
-  let iY = 0;
   let altI = 0;
   let chargeMah = 0;
   let vbat = cellOpenCircuitV(build.startCharge) * cells;
@@ -186,32 +183,20 @@ export function simulate(
       const cY = ringY[back]! * RAD;
       ringPos = back;
       const gyroNoise = 0.2 * RAD;
-      const eR = cR - (p + gyroNoise * loopRng.normal());
-      const eP = cP - (q + gyroNoise * loopRng.normal());
-      const eY = cY - (r + gyroNoise * loopRng.normal());
-      let oR = 0;
-      let oP = 0;
-      let oY = 0;
-      if (throttle < 0.05 && !airborne) {
-        iR = 0;
-        iP = 0;
-        iY = 0;
-      } else {
-        if (!mixer.saturated) {
-          iR += kiR * eR * dt;
-          iP += kiP * eP * dt;
-          iY += kiY * eY * dt;
-        }
-        // The integrators hold trim as a share of the collective. A steady offset (CG, a weak
-        // motor) needs a moment in proportion to thrust (∝ output²) while each unit of
-        // differential output buys moment in proportion to output, so the output that holds
-        // it grows with throttle; a fixed additive trim would be wrong after every throttle step
-        // (a punch-out, the drop that follows) until the integrator caught up again.
-        const trim = Math.max(0.25, throttle / pilotHover);
-        oR = kpR * eR + iR * trim;
-        oP = kpP * eP + iP * trim;
-        oY = kpY * eY + iY * trim;
-      }
+      const gyroP = p + gyroNoise * loopRng.normal();
+      const gyroQ = q + gyroNoise * loopRng.normal();
+      const gyroR = r + gyroNoise * loopRng.normal();
+      const grounded = throttle < 0.05 && !airborne;
+      // The integrators hold trim as a share of the collective. A steady offset (CG, a weak
+      // motor) needs a moment in proportion to thrust (∝ output²) while each unit of
+      // differential output buys moment in proportion to output, so the output that holds
+      // it grows with throttle; a fixed additive trim would be wrong after every throttle step
+      // (a punch-out, the drop that follows) until the integrator caught up again.
+      const trim = Math.max(0.25, throttle / pilotHover);
+      const hold = mixer.saturated;
+      const oR = rollLoop.step(cR, gyroP, dt, trim, hold, grounded);
+      const oP = pitchLoop.step(cP, gyroQ, dt, trim, hold, grounded);
+      const oY = yawLoop.step(cY, gyroR, dt, trim, hold, grounded);
 
       // --- Mixer with desaturation (attitude before collective) ----------------------------
       mixer.mix(u, throttle, oR, oP, oY);
@@ -315,8 +300,8 @@ export function simulate(
     if (res && frameMode) {
       frameMode.next();
       const excite = (res.rmsDegS * (meanU * meanU)) / (pilotHover * pilotHover);
-      resX = frameMode.x * excite;
-      resY = frameMode.y * excite;
+      if (res.axis !== 'pitch') resX = frameMode.x * excite;
+      if (res.axis !== 'roll') resY = frameMode.y * excite;
     }
     const gn = build.gyroNoiseDegS;
     const an = build.accNoiseG;
@@ -377,6 +362,7 @@ export function simulate(
       batteryResistanceOhm: packR,
       escMaxA: fx.escMaxA,
       delayMs: fx.delayMs,
+      loopGainScale: fx.loopGainScale,
       idle,
       expectedHoverThrustN: ctlDesign.expectedHover,
       trueHoverThrustN: ctlDesign.trueHover,

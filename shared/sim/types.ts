@@ -13,8 +13,15 @@ export type Fault =
   | { kind: 'tilted-motor'; motor: number; deg: number }
   /** Rotor unbalance (g·mm) replacing the build's baseline for that motor. */
   | { kind: 'rotor-imbalance'; motor: number; unbalanceGmm: number }
-  /** Fixed-frequency structural mode excited by the rotors; rms in deg/s on the gyro at hover. */
-  | { kind: 'frame-resonance'; hz: number; q?: number; rmsDegS?: number }
+  /** Fixed-frequency structural mode excited by the rotors; rms in deg/s on the gyro at hover,
+   *  on the roll and pitch axes (default) or one of them. */
+  | {
+      kind: 'frame-resonance';
+      hz: number;
+      q?: number;
+      rmsDegS?: number;
+      axis?: 'roll' | 'pitch' | 'both';
+    }
   /** Pack internal resistance scaled up and capacity down (aged or puffed cells). */
   | { kind: 'tired-battery'; resistanceScale: number; capacityScale?: number }
   /** ESCs rated below what the build draws in a punch-out. */
@@ -22,7 +29,9 @@ export type Fault =
   /** Maximum thrust scaled (e.g. low-kV motors or too few cells); hover needs much more output. */
   | { kind: 'underpowered'; maxThrustScale: number }
   /** Latency between the pilot's setpoint and what the controller acts on. */
-  | { kind: 'tracking-delay'; delayMs: number };
+  | { kind: 'tracking-delay'; delayMs: number }
+  /** A soft tune: rate-loop gains and feedforward scaled by `gainScale` (0.4 = 40 % of the design). */
+  | { kind: 'slow-loop'; gainScale: number };
 
 export type FaultKind = Fault['kind'];
 
@@ -127,6 +136,8 @@ export interface GroundTruth {
     escMaxA: number | null;
     /** Injected setpoint-to-controller latency, ms (the controller adds its own lag on top). */
     delayMs: number;
+    /** Scale on the rate loop's gains and feedforward (1 = the design tune). */
+    loopGainScale: number;
     idle: number;
     /** Minimum-norm hover thrusts about the design CG (what the airframe predicts), N. */
     expectedHoverThrustN: number[];
