@@ -3,16 +3,19 @@ import type { Column, ParsedLog } from '../log/types';
 import type { Airframe } from '../schemas/airframe';
 import { analyseBalance, hoverMeans, type BalanceResult } from './balance';
 import { diagnose } from './diagnosis';
+import { computeDrift, type Baseline } from './drift';
 import { downsampleMinMax } from './downsample';
 import { decomposeEffort } from './effort';
 import { buildFindings } from './findings';
+import { estimateThrustLoss, thrustLossOf, type ThrustLoss } from './thrust-loss';
 import { analyseHeadroom } from './headroom';
 import { analysePower } from './power';
-import { FlightReport, REPORT_VERSION } from '../schemas/report';
+import { FlightReport, mostSevereFirst, REPORT_VERSION } from '../schemas/report';
 import type { ReviewDetail, Trace } from './review-detail';
 import { findSegments, motorColumns, type Ranges } from './segments';
 import { resolveThresholds, type Thresholds } from '../schemas/thresholds';
-import { analyseTracking } from './tracking';
+import { analyseTracking, withoutSaturation } from './tracking';
+import { responseCurves, trackingReport } from './tracking-report';
 import { analyseVibration, toReviewSpectrum } from './vibration';
 import { benchRunCurve, type BenchRunTable, type ThrustCurve } from './thrust-curve';
 
@@ -25,6 +28,8 @@ export interface AnalyzeOptions {
    * the thrust proxy for balance, torque split and CG when rpm is not logged (shared/README.md §4).
    */
   benchRun?: BenchRunTable;
+  /** Earlier reports of the same aircraft, oldest first: the flight is also judged against them (drift). */
+  baseline?: Baseline;
 }
 
 export interface FlightAnalysis {
@@ -66,6 +71,27 @@ function longestMid(time: ArrayLike<number>, ranges: Ranges): number | null {
   let best: [number, number] | null = null;
   for (const r of ranges) if (!best || r[1] - r[0] > best[1] - best[0]) best = r;
   return best ? time[(best[0] + best[1]) >> 1]! : null;
+}
+
+/** A lone motor's thrust loss must explain nearly all of the hover moment imbalance to be named. */
+const LOSS_EXPLAINED = 0.9;
+
+/**
+ * The weak motor's thrust loss: the diagnosis's motor when it names one, else the motor whose
+ * loss alone explains the hover moments (never when a CG or spin-set pattern explains them).
+ */
+function lossOf(
+  airframe: Airframe,
+  balance: BalanceResult | null,
+  diagnosis: ReturnType<typeof diagnose>,
+): ThrustLoss | null {
+  if (!balance || diagnosis.pattern === 'too-little-hover') return null;
+  if (diagnosis.pattern === 'cg-offset' || diagnosis.pattern === 'spin-set') return null;
+  const loss =
+    diagnosis.pattern === 'weak-motor' && diagnosis.motor !== undefined
+      ? thrustLossOf(airframe, balance.outputShare, diagnosis.motor)
+      : estimateThrustLoss(airframe, balance.outputShare);
+  return loss && loss.explained >= LOSS_EXPLAINED && loss.lossPct >= 1 ? loss : null;
 }
 
 /**
@@ -127,7 +153,15 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     balance = analyseBalance(airframe, means, bench);
     hoverOutput = means.output.reduce((a, b) => a + b, 0) / motorCount;
   }
-  const diagnosis = diagnose(airframe, balance, seg.hoverS, th);
+  const lossGuess = balance ? estimateThrustLoss(airframe, balance.outputShare) : null;
+  const diagnosis = diagnose(
+    airframe,
+    balance,
+    seg.hoverS,
+    th,
+    lossGuess && lossGuess.explained >= LOSS_EXPLAINED ? lossGuess.lossPct : 0,
+  );
+  const thrustLoss = lossOf(airframe, balance, diagnosis);
 
   const vibration = analyseVibration({
     log,
@@ -153,7 +187,16 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     escMaxA,
     gamma,
   );
-  const tracking = analyseTracking(log, armed);
+  const tracking = analyseTracking(
+    log,
+    withoutSaturation(armed, headroom.saturationEvents, time, log.sampleRateHz),
+  );
+  if (tracking) {
+    for (const axis of ['roll', 'pitch', 'yaw'] as const) {
+      const note = tracking[axis].responseNote;
+      if (note) warnings.push(`Stick response on ${axis}: ${note}.`);
+    }
+  }
 
   const findings = buildFindings({
     airframe,
@@ -164,6 +207,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     hoverAtS: longestMid(time, seg.hover),
     balance,
     diagnosis,
+    thrustLoss,
     vibration,
     power,
     headroom,
@@ -191,6 +235,9 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
       expectedShare: (balance?.expectedShare ?? []).map((v) => round(v, 5)),
       measuredShare: (balance?.measuredShare ?? []).map((v) => round(v, 5)),
       deviationPct: (balance?.deviationPct ?? []).map((v) => round(v, 2)),
+      thrustLoss: thrustLoss
+        ? { motor: thrustLoss.motor, lossPct: round(thrustLoss.lossPct, 2), cg: thrustLoss.cg }
+        : null,
     },
     torqueSplit: balance
       ? {
@@ -237,24 +284,16 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
       escPeakA: headroom.escPeakA === null ? null : round(headroom.escPeakA, 2),
       escOverS: round(headroom.escOverS, 3),
     },
-    tracking: tracking
-      ? {
-          roll: {
-            rmsDegS: round(tracking.roll.rmsDegS, 2),
-            lagMs: tracking.roll.lagMs === null ? null : round(tracking.roll.lagMs, 2),
-          },
-          pitch: {
-            rmsDegS: round(tracking.pitch.rmsDegS, 2),
-            lagMs: tracking.pitch.lagMs === null ? null : round(tracking.pitch.lagMs, 2),
-          },
-          yaw: {
-            rmsDegS: round(tracking.yaw.rmsDegS, 2),
-            lagMs: tracking.yaw.lagMs === null ? null : round(tracking.yaw.lagMs, 2),
-          },
-        }
-      : null,
+    tracking: tracking ? trackingReport(tracking) : null,
     findings,
+    drift: null,
   };
+  if (options.baseline) {
+    const d = computeDrift(report, options.baseline, th);
+    report.drift = d.drift;
+    if (d.warning) warnings.push(d.warning);
+    report.findings = [...findings, ...d.findings].sort(mostSevereFirst);
+  }
 
   const effortSeries: Record<string, ArrayLike<number>> = {};
   if (log.columns.throttle) effortSeries.throttle = log.columns.throttle;
@@ -286,6 +325,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
       Object.entries(vibration.channels).map(([n, v]) => [n, toReviewSpectrum(v.spectrum)]),
     ),
     campbell: vibration.campbell,
+    stickResponse: tracking ? responseCurves(tracking) : null,
     diagnosis,
     airframe,
   };

@@ -18,6 +18,8 @@ export function diagnose(
   balance: BalanceResult | null,
   hoverS: number,
   th: Thresholds,
+  /** A lone motor's thrust loss that explains the hover moments, %, when one does. */
+  lossPct = 0,
 ): Diagnosis {
   if (!balance || hoverS < th.minHoverForVerdictS) {
     return {
@@ -40,6 +42,7 @@ export function diagnose(
     maxDev / th.motorWatchPct,
     cgPct / th.cgWatchPctOfArm,
     asym / th.torqueSplitWatchPct,
+    lossPct / th.motorLossWatchPct,
   );
   if (strength < 1) {
     return {
@@ -75,16 +78,23 @@ export function diagnose(
           `${where || 'slightly off'} of the design point. Move the battery or payload the other way.`,
       };
     }
-    case 'weak-motor':
+    case 'weak-motor': {
+      const split = balance.asymmetryPct - balance.expectedAsymmetryPct;
+      const yaw =
+        Math.abs(split) >= 0.5
+          ? `, and the ${split > 0 ? 'clockwise' : 'counter-clockwise'} props carry ` +
+            `${Math.abs(split).toFixed(1)} % more of the hover effort to hold the heading`
+          : '';
       return {
         pattern: 'weak-motor',
         ...(best.motor ? { motor: best.motor } : {}),
         confidence,
         text:
-          `One motor: motor ${best.motor} needs more output than its neighbours for the same job, ` +
-          `and it unbalances yaw as well — a worn motor or a damaged prop rather than the CG. ` +
+          `One motor: motor ${best.motor} needs more output than its neighbours for the same job${yaw} — ` +
+          `a worn motor or a damaged prop rather than the CG. ` +
           `With props OFF, check its bearings, then swap its prop.`,
       };
+    }
     case 'spin-set': {
       const heavy = balance.asymmetryPct >= balance.expectedAsymmetryPct ? 'cw' : 'ccw';
       const set = airframe.motors.flatMap((m, i) => (m.spin === heavy ? [i + 1] : []));

@@ -20,6 +20,14 @@ export interface Spectrum {
   db: number[];
 }
 
+export interface ResponseCurve {
+  hz: number[];
+  gainDb: number[];
+  phaseDeg: number[];
+  /** Magnitude-squared coherence, 0–1. */
+  coherence: number[];
+}
+
 export interface CampbellMatrix {
   /** What the rows are binned by. */
   by: 'rpm' | 'throttle';
@@ -54,6 +62,12 @@ export interface ReviewDetail {
   /** Spectrum per vibration channel (gyro_x, …, acc_z). */
   spectra: Record<string, Spectrum>;
   campbell: CampbellMatrix | null;
+  /**
+   * Stick response per axis: gain (dB) and phase (deg) of the setpoint-to-gyro response and the
+   * coherence behind each bin, about 0.25 Hz apart up to 100 Hz; null for an axis whose sticks
+   * said too little. Absent in flights stored by earlier versions.
+   */
+  stickResponse?: Record<'roll' | 'pitch' | 'yaw', ResponseCurve | null> | null;
   /** Pattern diagnosis behind the balance numbers, in words, with a confidence 0–1. */
   diagnosis: {
     pattern: 'healthy' | 'cg-offset' | 'weak-motor' | 'spin-set' | 'too-little-hover';

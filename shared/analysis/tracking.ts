@@ -1,6 +1,7 @@
 import type { ParsedLog } from '../log/types';
 import { crossCorrelationLag } from './dsp/xcorr';
 import type { Ranges } from './segments';
+import { stickResponse, type StickResponse } from './stick-response';
 
 export interface AxisTrackingResult {
   rmsDegS: number;
@@ -8,6 +9,10 @@ export interface AxisTrackingResult {
   lagMs: number | null;
   /** Time of the largest error, s. */
   worstAtS: number;
+  /** Stick response (H1 estimate from setpoint to gyro), null when the sticks said too little. */
+  response: StickResponse | null;
+  /** Why the stick response, or its bandwidth, could not be read. */
+  responseNote?: string;
 }
 
 export type TrackingResult = Record<'roll' | 'pitch' | 'yaw', AxisTrackingResult>;
@@ -25,6 +30,35 @@ const AXES = [
  */
 const LAG_RATE_HZ = 250;
 const MAX_LAG_S = 0.2;
+
+/**
+ * The ranges without the stretches where a motor sat at its limit (padded by `padS` each side):
+ * there the aircraft could not follow whatever the tune, and that is headroom's finding, not a lag.
+ */
+export function withoutSaturation(
+  ranges: Ranges,
+  events: readonly { t0: number; t1: number }[],
+  time: ArrayLike<number>,
+  fs: number,
+  padS = 0.25,
+): Ranges {
+  if (!events.length) return ranges;
+  const t0 = time[0] ?? 0;
+  const cuts = events
+    .map((e) => [Math.floor((e.t0 - padS - t0) * fs), Math.ceil((e.t1 + padS - t0) * fs)] as const)
+    .sort((a, b) => a[0] - b[0]);
+  const out: Ranges = [];
+  for (const [a, b] of ranges) {
+    let start = a;
+    for (const [c0, c1] of cuts) {
+      if (c1 <= start || c0 >= b) continue;
+      if (c0 > start) out.push([start, c0]);
+      start = Math.max(start, c1);
+    }
+    if (start < b) out.push([start, b]);
+  }
+  return out;
+}
 
 /**
  * Setpoint-following per axis over armed time: RMS of setpoint − gyro (deg/s) and the lag at
@@ -98,10 +132,13 @@ export function analyseTracking(log: ParsedLog, armed: Ranges): TrackingResult |
       lagWeighted += est.lag * varX;
       lagWeight += varX;
     }
+    const sr = stickResponse(sp, g, fs, armed);
     out[axis] = {
       rmsDegS: n ? Math.sqrt(se / n) : 0,
       lagMs: lagWeight > 0 ? (lagWeighted / lagWeight / rate) * 1000 : null,
       worstAtS: time[worstAt] ?? 0,
+      response: sr.response,
+      ...(sr.reason ? { responseNote: sr.reason } : {}),
     };
   }
   return out as TrackingResult;

@@ -35,6 +35,10 @@ export const FindingCode = z.enum([
   'battery-sag',
   'tracking-lag',
   'log-gap',
+  'motor-drift',
+  'vibration-drift',
+  'pack-ageing',
+  'response-drift',
 ]);
 export type FindingCode = z.infer<typeof FindingCode>;
 
@@ -48,6 +52,9 @@ export const Finding = z.object({
   tS: z.number().optional(),
   /** Plain-language: what it is and what to check on the bench. */
   message: z.string(),
+  /** Drift findings: the change in points (motor-drift) and how many earlier flights it was judged against. */
+  changePts: z.number().optional(),
+  flights: z.number().int().min(1).optional(),
 });
 export type Finding = z.infer<typeof Finding>;
 
@@ -66,7 +73,71 @@ export const Peak = z.object({
 });
 export type Peak = z.infer<typeof Peak>;
 
-const AxisTracking = z.object({ rmsDegS: z.number(), lagMs: z.number().nullable() });
+const AxisTracking = z.object({
+  rmsDegS: z.number(),
+  lagMs: z.number().nullable(),
+  /**
+   * Stick response (H1 estimate, setpoint to gyro): where the gain first falls 3 dB below its
+   * low-frequency level, the highest gain, the phase delay at low frequency and the mean
+   * coherence of the band read. Null when the sticks carried too little movement (a warning
+   * says so); absent in reports written before they existed.
+   */
+  bandwidthHz: z.number().nullable().optional(),
+  peakGainDb: z.number().nullable().optional(),
+  phaseDelayMs: z.number().nullable().optional(),
+  coherence: z.number().nullable().optional(),
+});
+
+const Spread = z.object({
+  baselinePct: z.number(),
+  spreadPct: z.number(),
+  nowPct: z.number(),
+  changePts: z.number(),
+});
+const LagDrift = z
+  .object({ baselineMs: z.number(), spreadMs: z.number(), nowMs: z.number(), changeMs: z.number() })
+  .nullable();
+
+/**
+ * Drift: this flight against the same aircraft's recent flights (the baseline). Medians and
+ * spreads (median absolute deviation × 1.4826) over the baseline; `changePts` = now − median.
+ */
+export const Drift = z.object({
+  flights: z.number().int().min(1),
+  /** What the flight was compared with, in words ("Kite's last 6 flights, since …"). */
+  against: z.string(),
+  motors: z.array(Spread.extend({ motor: z.number().int().min(1) })),
+  /** Of `torqueSplit.asymmetryPct`. */
+  torqueSplit: Spread,
+  cg: z
+    .object({
+      baselineXMm: z.number(),
+      baselineYMm: z.number(),
+      nowXMm: z.number(),
+      nowYMm: z.number(),
+      shiftMm: z.number(),
+    })
+    .nullable(),
+  vibration: z.record(
+    z.string(),
+    z.object({
+      baselineRms: z.number(),
+      spreadRms: z.number(),
+      nowRms: z.number(),
+      ratio: z.number(),
+    }),
+  ),
+  power: z
+    .object({
+      baselineMilliohm: z.number(),
+      spreadMilliohm: z.number(),
+      nowMilliohm: z.number(),
+      changePct: z.number(),
+    })
+    .nullable(),
+  tracking: z.object({ roll: LagDrift, pitch: LagDrift, yaw: LagDrift }).nullable(),
+});
+export type Drift = z.infer<typeof Drift>;
 
 export const FlightReport = z.object({
   version: z.literal(REPORT_VERSION),
@@ -86,6 +157,19 @@ export const FlightReport = z.object({
     expectedShare: z.array(z.number()),
     measuredShare: z.array(z.number()),
     deviationPct: z.array(z.number()),
+    /**
+     * One motor's thrust for its output short of its neighbours', %, from the hover moment
+     * equations by least squares with the CG held at the design point; null when no lone motor
+     * explains the hover. Absent in reports written before it existed.
+     */
+    thrustLoss: z
+      .object({
+        motor: z.number().int().min(1),
+        lossPct: z.number(),
+        cg: z.literal('design'),
+      })
+      .nullable()
+      .optional(),
   }),
   torqueSplit: z.object({
     cwShare: z.number(),
@@ -115,5 +199,7 @@ export const FlightReport = z.object({
   }),
   tracking: z.object({ roll: AxisTracking, pitch: AxisTracking, yaw: AxisTracking }).nullable(),
   findings: z.array(Finding),
+  /** Null without a baseline; absent in reports written before drift existed. */
+  drift: Drift.nullable().optional(),
 });
 export type FlightReport = z.infer<typeof FlightReport>;

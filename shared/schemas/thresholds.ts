@@ -29,6 +29,11 @@ export const Thresholds = z.object({
   /** cw−ccw asymmetry beyond what the airframe expects, % of hover effort, raising `watch` / `act` (common practice). */
   torqueSplitWatchPct: z.number().positive(),
   torqueSplitActPct: z.number().positive(),
+  /** A balance pattern the diagnosis states with at least this confidence, 0–1, always reaches the verdict (at least as a `note`). */
+  patternConfidence: z.number().min(0).max(1),
+  /** Thrust lost by one motor for its output, against its neighbours, raising `watch` / `act`, %: matched motors and props agree within a few %, a chipped blade pair or worn motor costs 10 % and more (common practice). */
+  motorLossWatchPct: z.number().positive(),
+  motorLossActPct: z.number().positive(),
   /** A spectral peak must stand this far above its neighbourhood, dB (6 dB = twice the power of the floor twice over, clear of Welch variance). */
   peakProminenceDb: z.number().positive(),
   /** Amplitude of a gyro tone raising `watch` / `act`, deg/s: a few deg/s of rotor noise is normal before filtering, tens of deg/s heats motors (common practice). */
@@ -37,6 +42,8 @@ export const Thresholds = z.object({
   /** Amplitude of an accelerometer tone raising `watch` / `act`, g: half a g of rotor tone is usual on a hard-mounted board; above ~1 g attitude estimates suffer (common practice). */
   accToneWatchG: z.number().positive(),
   accToneActG: z.number().positive(),
+  /** A labelled rotor or frame line carrying at least this share of its axis's vibration power above 50 Hz, on an axis shaking twice as hard as the sensor's others, is a `note` even under the absolute limits, 0–1: what that axis mostly shakes at is worth a look. */
+  toneDominantShare: z.number().min(0).max(1),
   /** Output counted as saturated, 0–1 (shared/README.md §6: 98 %). */
   saturationLevel: z.number().min(0.5).max(1),
   /** Share of armed time saturated raising `watch` / `act`, %: brief full-throttle punches are normal, long stretches mean no headroom left (common practice). */
@@ -51,15 +58,32 @@ export const Thresholds = z.object({
   cellWatchV: z.number().positive(),
   cellActV: z.number().positive(),
   /**
-   * Roll/pitch lag of the gyro behind the setpoint raising `watch` / `act`, ms, for a 5-inch
-   * build: a well-tuned one follows in 15–30 ms, and the correlation peak reads a little late on slow stick moves (common practice). Scaled by prop diameter ÷ 5 in
-   * for bigger props, whose heavier rotors change speed more slowly.
+   * Roll/pitch lag of the gyro behind the setpoint raising `note` / `watch` / `act`, ms, for a
+   * 5-inch build: a well-tuned one with feedforward follows within 5–10 ms, a soft tune or heavy
+   * filtering trails by 20 ms and more (from memory; common practice among tuners). Scaled by
+   * (prop diameter ÷ 5 in)^1.5 for bigger props, whose heavier rotors change speed more slowly.
    */
+  trackingLagNoteMs: z.number().positive(),
   trackingLagWatchMs: z.number().positive(),
   trackingLagActMs: z.number().positive(),
-  /** Same for yaw, ms: yaw acts through prop drag, far weaker than thrust, so it always trails (common practice). */
+  /** Same for yaw, ms: yaw acts through prop drag, far weaker than thrust, so it always trails by tens of ms (from memory). */
+  trackingYawLagNoteMs: z.number().positive(),
   trackingYawLagWatchMs: z.number().positive(),
   trackingYawLagActMs: z.number().positive(),
+  /** Fewest earlier flights (with enough hover) that make a baseline for drift. */
+  driftMinFlights: z.number().int().min(2).max(50),
+  /** Most recent earlier flights a baseline uses: recent enough to be today's aircraft, enough to know its flight-to-flight spread. */
+  driftMaxFlights: z.number().int().min(2).max(50),
+  /** A motor's deviation moving by at least this many points from its baseline median raises `motor-drift` (if also beyond the spread below): about a point is flight-to-flight noise on a healthy aircraft (common practice). */
+  motorDriftPts: z.number().positive(),
+  /** …and by at least this many times its baseline spread (median absolute deviation, scaled to a standard deviation). */
+  driftSpreads: z.number().positive(),
+  /** Band RMS of an axis rising by this factor over its baseline median raises `vibration-drift`: a new chip or loose screw doubles it, day-to-day variation stays within ±20 % (common practice). */
+  vibrationDriftRatio: z.number().min(1),
+  /** Pack resistance rising by this share over its baseline median raises `pack-ageing`, %: a LiPo is usually retired by the time its resistance has risen by half (common practice). */
+  packAgeingPct: z.number().positive(),
+  /** Roll/pitch lag rising by at least this many ms over its baseline median raises `response-drift` (if also beyond the spread), ms. */
+  responseDriftMs: z.number().positive(),
 });
 export type Thresholds = z.infer<typeof Thresholds>;
 
@@ -77,11 +101,15 @@ export const defaultThresholds: Thresholds = {
   cgActPctOfArm: 10,
   torqueSplitWatchPct: 3,
   torqueSplitActPct: 8,
+  patternConfidence: 0.8,
+  motorLossWatchPct: 8,
+  motorLossActPct: 20,
   peakProminenceDb: 10,
   gyroToneWatchDegS: 5,
   gyroToneActDegS: 20,
   accToneWatchG: 1,
   accToneActG: 3,
+  toneDominantShare: 0.5,
   saturationLevel: 0.98,
   saturationWatchPct: 2,
   saturationActPct: 8,
@@ -90,10 +118,19 @@ export const defaultThresholds: Thresholds = {
   escOverActS: 1,
   cellWatchV: 3.5,
   cellActV: 3.3,
-  trackingLagWatchMs: 50,
-  trackingLagActMs: 100,
-  trackingYawLagWatchMs: 100,
-  trackingYawLagActMs: 200,
+  trackingLagNoteMs: 10,
+  trackingLagWatchMs: 25,
+  trackingLagActMs: 50,
+  trackingYawLagNoteMs: 80,
+  trackingYawLagWatchMs: 150,
+  trackingYawLagActMs: 300,
+  driftMinFlights: 3,
+  driftMaxFlights: 10,
+  motorDriftPts: 1.5,
+  driftSpreads: 3,
+  vibrationDriftRatio: 1.5,
+  packAgeingPct: 25,
+  responseDriftMs: 5,
 };
 
 /** Defaults overlaid with a team's partial settings, validated. */

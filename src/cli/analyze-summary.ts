@@ -77,6 +77,26 @@ export function summary(file: string, { report: r, detail }: FlightAnalysis): st
     const ax = (n: string, a: { rmsDegS: number; lagMs: number | null }) =>
       `${n} ${a.rmsDegS.toFixed(1)} deg/s RMS, lag ${a.lagMs === null ? '—' : `${a.lagMs.toFixed(0)} ms`}`;
     out.push(`Tracking: ${ax('roll', t.roll)}; ${ax('pitch', t.pitch)}; ${ax('yaw', t.yaw)}`);
+    const resp = (n: string, a: NonNullable<typeof r.tracking>['roll']) =>
+      a.phaseDelayMs === null || a.phaseDelayMs === undefined
+        ? `${n} —`
+        : `${n} bandwidth ${a.bandwidthHz == null ? '—' : `${a.bandwidthHz.toFixed(1)} Hz`}, ` +
+          `peak ${fix(a.peakGainDb)} dB, delay ${a.phaseDelayMs.toFixed(0)} ms`;
+    out.push(
+      `Stick response: ${resp('roll', t.roll)}; ${resp('pitch', t.pitch)}; ${resp('yaw', t.yaw)}`,
+    );
+  }
+  if (r.drift) {
+    const d = r.drift;
+    out.push(`Drift against ${d.against}`);
+    for (const m of d.motors)
+      out.push(
+        `  motor ${m.motor}: ${pct(m.nowPct).padStart(8)} now, ${pct(m.baselinePct)} usual (spread ${m.spreadPct.toFixed(1)}), change ${m.changePts >= 0 ? '+' : ''}${m.changePts.toFixed(1)} points`,
+      );
+    if (d.power)
+      out.push(
+        `  pack resistance ${d.power.nowMilliohm.toFixed(0)} mΩ, usual ${d.power.baselineMilliohm.toFixed(0)} mΩ`,
+      );
   }
   if (r.warnings.length) {
     out.push('');

@@ -1,6 +1,6 @@
 /**
  * `npm run analyze -- <log.csv[.gz]> [--airframe airframe.json] [--map columns.json]
- * [--bench bench.json] [--json]`
+ * [--bench bench.json] [--baseline report.json …] [--json]`
  * prints a readable verdict, or with --json the flight report (shared/README.md, "Report JSON").
  * Exit codes (./exit-codes.ts): 0 done, 1 a usage mistake or an internal failure, 2 input
  * refused — the message names the file and, where it applies, the line and column. Relative
@@ -17,16 +17,19 @@ import { parseLogStream } from '../../shared/log/parse';
 import type { ParsedLog } from '../../shared/log/types';
 import { BenchRow } from '../../shared/schemas/aircraft';
 import { Airframe } from '../../shared/schemas/airframe';
+import { FlightReport } from '../../shared/schemas/report';
 import { summary } from './analyze-summary';
 import { EXIT, RefusedInput, UsageError } from './exit-codes';
 import { readJson } from './read-json';
 
-const USAGE = `Usage: npm run analyze -- <log.csv> [--airframe airframe.json] [--map columns.json] [--bench bench.json] [--json]
+const USAGE = `Usage: npm run analyze -- <log.csv> [--airframe airframe.json] [--map columns.json] [--bench bench.json] [--baseline report.json …] [--json]
 
   --airframe  the aircraft's geometry (motors, spins, mass, props); without it a 5-inch quad X is assumed
   --map       how the CSV's headers map to channels, when they are not the canonical ones
   --bench     a bench run of the motor and prop, { "rows": [{ "throttle": 0–1, "thrustG": grams }, …] },
               used as the thrust curve for balance and CG when the log has no rpm
+  --baseline  an earlier --json report of the same aircraft (repeat, oldest first): the flight is
+              also judged against them, and the report's "drift" says how it differs
   --json      print the flight report as one JSON object instead of the readable summary
 
 Exit codes: 0 done, 1 a mistake in the command line (or an internal failure), 2 a file refused
@@ -37,6 +40,7 @@ interface Args {
   airframe?: string;
   map?: string;
   bench?: string;
+  baseline: string[];
   json: boolean;
 }
 
@@ -49,11 +53,15 @@ const FILE_OPTIONS = { '--airframe': 'airframe', '--map': 'map', '--bench': 'ben
 
 function parseArgs(argv: string[]): Args {
   const rest: string[] = [];
-  const args: Partial<Args> = { json: false };
+  const args: Partial<Args> = { json: false, baseline: [] };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i]!;
     if (a === '--json') args.json = true;
-    else if (a in FILE_OPTIONS) {
+    else if (a === '--baseline') {
+      const v = argv[++i];
+      if (!v || v.startsWith('--')) throw new UsageError(`${a} needs a file name.`);
+      args.baseline!.push(v);
+    } else if (a in FILE_OPTIONS) {
       const v = argv[++i];
       if (!v || v.startsWith('--')) throw new UsageError(`${a} needs a file name.`);
       args[FILE_OPTIONS[a as keyof typeof FILE_OPTIONS]] = v;
@@ -116,6 +124,7 @@ async function main(argv: string[]): Promise<number> {
     const airframe = args.airframe ? file(args.airframe, Airframe, 'airframe') : undefined;
     const columnMap = args.map ? file(args.map, ColumnMap, 'column map') : undefined;
     const benchRun = args.bench ? file(args.bench, BenchFile, 'bench run') : undefined;
+    const baseline = args.baseline.map((p) => file(p, FlightReport, 'baseline report'));
     const log = await readLog(args.log, {
       ...(columnMap ? { columnMap } : {}),
       ...(airframe?.poles ? { poles: airframe.poles } : {}),
@@ -123,6 +132,7 @@ async function main(argv: string[]): Promise<number> {
     const result = analyzeFlight(log, {
       ...(airframe ? { airframe } : {}),
       ...(benchRun ? { benchRun } : {}),
+      ...(baseline.length ? { baseline: { reports: baseline } } : {}),
     });
     process.stdout.write(
       args.json ? `${JSON.stringify(result.report)}\n` : `${summary(args.log, result)}\n`,

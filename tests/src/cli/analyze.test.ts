@@ -3,6 +3,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { analyzeFlight } from '../../../shared/analysis/analyze-flight';
 import { FlightReport } from '../../../shared/schemas/report';
 import { presetAirframe } from '../../../shared/airframe/presets';
 import { writeCanonicalCsvBytes } from '../../../shared/sim/csv-writer';
@@ -127,6 +128,34 @@ describe('npm run analyze', () => {
     expect(b.cg!.xMm / a.cg!.xMm).toBeGreaterThan(0.4);
     expect(b.cg!.xMm / a.cg!.xMm).toBeLessThan(0.6);
   });
+
+  it('judges the flight against --baseline reports of the same aircraft and says how it drifted', () => {
+    // Three earlier flights of the same aircraft (other seeds), their reports as --json prints them.
+    for (const seed of [4, 5, 6]) {
+      const { log, truth } = simulate(scenarios['cg-offset']!, { seed, seconds: 30 });
+      const { report } = analyzeFlight(log, { airframe: truth.airframe });
+      writeFileSync(join(dir, `earlier-${seed}.json`), JSON.stringify(report));
+    }
+    const base = ['--baseline', 'earlier-4.json', '--baseline', 'earlier-5.json'];
+    const r = analyze(
+      ['kite.csv', '--airframe', 'kite.json', ...base, '--baseline', 'earlier-6.json', '--json'],
+      dir,
+    );
+    expect(r.code).toBe(0);
+    const report = FlightReport.parse(JSON.parse(r.stdout));
+    expect(report.drift!.flights).toBe(3);
+    expect(report.drift!.motors.map((m) => m.motor)).toEqual([1, 2, 3, 4]);
+    // The same aircraft with the same fault: nothing has moved beyond a point.
+    for (const m of report.drift!.motors) expect(Math.abs(m.changePts)).toBeLessThan(1);
+    expect(report.findings.filter((f) => f.code.endsWith('drift'))).toEqual([]);
+    const none = analyze(['kite.csv', '--airframe', 'kite.json', '--json'], dir);
+    expect(FlightReport.parse(JSON.parse(none.stdout)).drift).toBeNull();
+    const missing = analyze(['kite.csv', '--baseline', 'nope.json', '--json'], dir);
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toMatch(/baseline report/);
+    // Four runs of the tool and three flights simulated: more than the default allowance on a
+    // busy machine.
+  }, 180_000);
 
   it('exits 2 naming the place of a bench file it cannot use', () => {
     writeFileSync(

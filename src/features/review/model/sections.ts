@@ -82,6 +82,10 @@ const sectionOfCode: Record<FindingCode, SectionId> = {
   'battery-sag': 'power',
   'tracking-lag': 'tracking',
   'log-gap': 'effort',
+  'motor-drift': 'balance',
+  'vibration-drift': 'vibration',
+  'pack-ageing': 'power',
+  'response-drift': 'tracking',
 };
 
 /** Where the evidence for a finding is drawn. */

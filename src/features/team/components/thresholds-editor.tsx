@@ -51,6 +51,8 @@ const groups: { title: string; rows: Row[] }[] = [
       ...watchAct('Motor above expectation', '%', 'motorWatchPct', 'motorActPct'),
       ...watchAct('CG offset', '% of arm', 'cgWatchPctOfArm', 'cgActPctOfArm'),
       ...watchAct('Torque split asymmetry', '%', 'torqueSplitWatchPct', 'torqueSplitActPct'),
+      ...watchAct('Motor thrust lost for its output', '%', 'motorLossWatchPct', 'motorLossActPct'),
+      { key: 'patternConfidence', label: 'Always report a balance pattern this sure', unit: '0–1' },
     ],
   },
   {
@@ -59,6 +61,11 @@ const groups: { title: string; rows: Row[] }[] = [
       { key: 'peakProminenceDb', label: 'Peak stands above its neighbours by', unit: 'dB' },
       ...watchAct('Gyro tone', 'deg/s', 'gyroToneWatchDegS', 'gyroToneActDegS'),
       ...watchAct('Accelerometer tone', 'g', 'accToneWatchG', 'accToneActG'),
+      {
+        key: 'toneDominantShare',
+        label: 'Note a rotor or frame line carrying this share of its axis',
+        unit: '0–1',
+      },
     ],
   },
   {
@@ -74,13 +81,27 @@ const groups: { title: string; rows: Row[] }[] = [
     title: 'Battery and tracking',
     rows: [
       ...watchAct('Lowest cell under load', 'V', 'cellWatchV', 'cellActV', 'lower'),
+      { key: 'trackingLagNoteMs', label: 'Roll and pitch lag behind setpoint: note', unit: 'ms' },
       ...watchAct(
         'Roll and pitch lag behind setpoint',
         'ms',
         'trackingLagWatchMs',
         'trackingLagActMs',
       ),
+      { key: 'trackingYawLagNoteMs', label: 'Yaw lag behind setpoint: note', unit: 'ms' },
       ...watchAct('Yaw lag behind setpoint', 'ms', 'trackingYawLagWatchMs', 'trackingYawLagActMs'),
+    ],
+  },
+  {
+    title: 'Drift against the aircraft’s recent flights',
+    rows: [
+      { key: 'driftMinFlights', label: 'Fewest earlier flights for a baseline', unit: 'flights' },
+      { key: 'driftMaxFlights', label: 'Most earlier flights in a baseline', unit: 'flights' },
+      { key: 'motorDriftPts', label: 'Motor deviation moved by at least', unit: 'points' },
+      { key: 'driftSpreads', label: '…and by at least', unit: '× its spread' },
+      { key: 'vibrationDriftRatio', label: 'Band RMS risen to', unit: '× baseline' },
+      { key: 'packAgeingPct', label: 'Pack resistance risen by', unit: '%' },
+      { key: 'responseDriftMs', label: 'Roll and pitch lag risen by', unit: 'ms' },
     ],
   },
 ];
