@@ -18,6 +18,10 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: process.env.CI ? 1 : 0,
+  // A journey walks several screens and runs real analyses in workers; on a busy 2-core
+  // machine one took 33 s, so the per-journey allowance leaves room for load, not for slowness.
+  timeout: 120_000,
+  expect: { timeout: 15_000 },
   reporter: [['list']],
   use: {
     baseURL: `http://127.0.0.1:${port}`,
