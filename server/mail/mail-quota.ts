@@ -23,6 +23,8 @@ export class MailQuota {
   /** Whether `n` more would still fit, without counting them. */
   async fits(key: string, n: number): Promise<boolean> {
     const info = await this.store.get?.(key);
-    return (info?.totalHits ?? 0) + n <= this.limit;
+    // rate-limit-redis 6 reads Redis's nil (a key never counted) as NaN through ioredis.
+    const hits = Number.isFinite(info?.totalHits) ? info!.totalHits : 0;
+    return hits + n <= this.limit;
   }
 }

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Role } from '../../../shared/schemas/common';
 import { flightBody, kite } from './fixtures';
+import { addMember } from './sql';
 import { signedUpAgent, type TestApp } from './test-app';
 
 export type Agent = Awaited<ReturnType<typeof signedUpAgent>>;
@@ -18,10 +19,7 @@ export async function crew<const R extends Exclude<Role, 'owner'>>(
   const members = {} as Record<R, Agent>;
   for (const role of roles) {
     const agent = await signedUpAgent(t.app, role[0]!.toUpperCase() + role.slice(1));
-    await t.dataSource.query(
-      'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-      [teamId, agent.id, role, Date.now()],
-    );
+    await addMember(t.dataSource, teamId, agent.id, role);
     members[role] = agent;
   }
   const aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;

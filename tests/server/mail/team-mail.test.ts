@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { limits } from '../../../server/limits';
 import { crew, flightBy, sentMail, type Agent } from '../helpers/crew';
+import { addMember } from '../helpers/sql';
 import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
 
 /** Mail about a team's flights goes to its members as they are when the mail is sent. */
@@ -73,10 +74,7 @@ describe('team mail and membership', () => {
     const coaches: Agent[] = [];
     for (let i = 0; i < 4; i++) {
       const coach = await signedUpAgent(t.app, `Coach${i}`);
-      await t.dataSource.query(
-        'INSERT INTO memberships (teamId, userId, role, joinedAt) VALUES (?, ?, ?, ?)',
-        [c.teamId, coach.id, 'coach', Date.now()],
-      );
+      await addMember(t.dataSource, c.teamId, coach.id, 'coach');
       coaches.push(coach);
     }
     const flightId = await flightBy(t, c.pilot.id, c.teamId, c.aircraftId);

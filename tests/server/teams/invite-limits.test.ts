@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { limits } from '../../../server/limits';
 import { crew, sentMail } from '../helpers/crew';
+import { sql } from '../helpers/sql';
 import { startTestApp, type TestApp } from '../helpers/test-app';
 
 /** An account must not be usable to mail strangers in bulk through invitations. */
@@ -48,8 +49,9 @@ describe('invitation limits', () => {
     const c = await crew(t, []);
     // Open invitations made earlier (as if over several hours), straight into the table.
     for (let i = 0; i < limits.openInvitesPerTeam; i++) {
-      await t.dataSource.query(
-        `INSERT INTO invites (id, teamId, email, role, tokenHash, invitedById, expiresAt, createdAt)
+      await sql(
+        t.dataSource,
+        `INSERT INTO invites (id, "teamId", email, role, "tokenHash", "invitedById", "expiresAt", "createdAt")
          VALUES (?, ?, ?, 'viewer', ?, ?, ?, ?)`,
         [
           crypto.randomUUID(),
