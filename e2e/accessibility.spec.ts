@@ -27,14 +27,18 @@ const SECTIONS = [
   'Compare',
 ];
 
-async function scanEverySection(page: Page, who: string) {
+async function scanEverySection(page: Page, who: string, shots: string) {
   await expectAccessibleAtBothWidths(page, `review as it opens (${who})`);
   const nav = page.getByRole('navigation', { name: 'Evidence' });
   for (const name of SECTIONS) {
     await nav.getByRole('link', { name, exact: true }).click();
     await expect(page.locator('#section-title')).toHaveText(name);
     await page.waitForTimeout(300); // charts build after the first paint
-    await expectAccessibleAtBothWidths(page, `review, ${name} (${who})`);
+    // Every section fits a phone: nothing scrolls sideways.
+    await expectAccessibleAtBothWidths(page, `review, ${name} (${who})`, {
+      fits: true,
+      screenshot: `${shots}-${name.replace(/\W+/g, '-').toLowerCase()}`,
+    });
   }
 }
 
@@ -47,7 +51,7 @@ test('signed out: sign-in, sign-up, reset, import with its column map and every 
   await page.goto('/sign-in');
   await expect(page.getByRole('heading', { level: 1, name: 'Sign in' })).toBeVisible();
   await expect(page.getByRole('status').filter({ hasText: 'Server' })).toHaveText(/Server online/);
-  await expectAccessibleAtBothWidths(page, 'sign-in');
+  await expectAccessibleAtBothWidths(page, 'sign-in', { fits: true, screenshot: 'sign-in' });
   await page.goto('/sign-up');
   await expect(page.getByRole('button', { name: 'Create account' })).toBeVisible();
   await expectAccessibleAtBothWidths(page, 'sign-up');
@@ -61,19 +65,23 @@ test('signed out: sign-in, sign-up, reset, import with its column map and every 
   await page.getByLabel('Flight logs').setInputFiles(writeForeignHeaderCsv());
   const step = page.getByRole('region', { name: /Column map for kite-export\.csv/ });
   await expect(step).toBeVisible({ timeout: 30_000 });
-  await expectAccessibleAtBothWidths(page, 'import, column map');
+  await expectAccessibleAtBothWidths(page, 'import, column map', {
+    fits: true,
+    screenshot: 'import-column-map',
+  });
   for (const h of ['Out0', 'Out1', 'Out2', 'Out3'])
     await step.getByLabel(`Unit for ${h}`).selectOption('frac');
   await step.getByRole('button', { name: 'Read with this map' }).click();
   await expect(page).toHaveURL(/\/flights\//, { timeout: 60_000 });
   await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
-  await scanEverySection(page, 'signed out, kept on this device');
+  await scanEverySection(page, 'signed out, kept on this device', 'review-local');
 });
 
 test('signed in: fleet, aircraft sections, team, inbox, account and a synced review with a comment', async ({
   page,
 }) => {
-  test.setTimeout(300_000);
+  // About forty scans at two widths; on a busy two-core machine that takes several minutes.
+  test.setTimeout(600_000);
   await signUp(page, { name: 'Orla Fenwick', email: uniqueEmail('a11y') });
   await createTeam(page, 'Tern Field Flyers');
   await expectAccessibleAtBothWidths(page, 'empty fleet');
@@ -97,10 +105,10 @@ test('signed in: fleet, aircraft sections, team, inbox, account and a synced rev
   await invite.getByLabel('Role').selectOption('coach');
   await invite.getByRole('button', { name: 'Send invite' }).click();
   await expect(page.getByRole('table', { name: 'Invitations' })).toBeVisible();
-  await expectAccessibleAtBothWidths(page, 'team');
+  await expectAccessibleAtBothWidths(page, 'team', { fits: true, screenshot: 'team' });
   await main.getByRole('link', { name: 'Inbox' }).click();
   await expect(page.getByRole('list', { name: 'Messages' })).toBeVisible();
-  await expectAccessibleAtBothWidths(page, 'inbox');
+  await expectAccessibleAtBothWidths(page, 'inbox', { fits: true, screenshot: 'inbox' });
   await page.getByRole('link', { name: 'Orla Fenwick' }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'Account' })).toBeVisible();
   await expectAccessibleAtBothWidths(page, 'account');
@@ -118,14 +126,38 @@ test('signed in: fleet, aircraft sections, team, inbox, account and a synced rev
       throw new Error(`${String(error)}\nlocal store: ${await localSyncErrors(page)}`);
     });
   await page.reload();
-  await page
-    .getByRole('combobox', { name: 'Comment at the cursor' })
-    .fill('Spin motor 3 by hand, props off, and feel the bearing.');
-  await page.getByRole('button', { name: 'Comment', exact: true }).click();
+
+  // Keyboard only: the cursor is a slider, `c` opens the comment box at it, and once the
+  // comment is sent focus is back on the slider, drawn with a visible focus mark.
+  const cursor = page.getByRole('slider', { name: 'Flight cursor' });
+  await cursor.focus();
+  await page.keyboard.press('End');
+  await expect(cursor).toHaveAttribute('aria-valuetext', /^t 20\.\d\d s/);
+  await page.keyboard.press('Home');
+  await expect(cursor).toHaveAttribute('aria-valuetext', /^t 0\.00 s/);
+  await page.keyboard.press('ArrowRight');
+  await page.keyboard.press('c');
+  const box = page.getByRole('textbox', { name: 'Comment at the cursor' });
+  await expect(box).toBeFocused();
+  await page.keyboard.type('Spin motor 3 by hand, props off, and feel the bearing.');
+  await page.keyboard.press('Control+Enter');
   await expect(page.getByRole('article', { name: /Comment by Orla Fenwick/ })).toBeVisible();
-  await scanEverySection(page, 'signed in, synced, with a comment');
+  await expect(cursor).toBeFocused();
+  expect(await cursor.evaluate((el) => getComputedStyle(el).outlineStyle)).not.toBe('none');
+
+  // The pin is a button too: it moves the cursor to the comment's moment.
+  await page.keyboard.press('End');
+  const pin = page.getByRole('list', { name: 'Comment pins' }).getByRole('button').first();
+  const pinnedAt = /at (\d+\.\d\d) s/.exec((await pin.getAttribute('aria-label')) ?? '')![1]!;
+  await pin.focus();
+  await page.keyboard.press('Enter');
+  await expect(cursor).toHaveAttribute('aria-valuetext', new RegExp(`^t ${pinnedAt} s`));
+  await scanEverySection(page, 'signed in, synced, with a comment', 'review-team');
 
   await main.getByRole('link', { name: 'Fleet' }).click();
   await expect(page.getByRole('table', { name: 'Flights' })).toContainText('worn-motor-3');
-  await expectAccessibleAtBothWidths(page, 'fleet with a flight');
+  await expectAccessibleAtBothWidths(page, 'fleet with a flight', {
+    fits: true,
+    screenshot: 'fleet',
+  });
 });

@@ -95,7 +95,7 @@ test('a coach comments at the moment of a finding; the pilot is mailed a link to
   await expect(coachPage.getByTestId('cursor-readout')).toContainText(`t ${tS.toFixed(2)} s`);
   await expect(coachPage.getByText(`at ${tS.toFixed(2)} s`, { exact: true })).toBeVisible();
   await coachPage
-    .getByRole('combobox', { name: 'Comment at the cursor' })
+    .getByRole('textbox', { name: 'Comment at the cursor' })
     .fill('Listen to motor 3 on the bench, props off.');
   await coachPage.getByRole('button', { name: 'Comment', exact: true }).click();
   const thread = coachPage.getByRole('article', {
@@ -116,7 +116,7 @@ test('a coach comments at the moment of a finding; the pilot is mailed a link to
   const viewerPage = await viewer.context.newPage();
   await viewerPage.goto(`/flights/${flightId}`);
   await expect(viewerPage.getByRole('article', { name: /Comment by Dev Heron/ })).toBeVisible();
-  await expect(viewerPage.getByRole('combobox', { name: 'Comment at the cursor' })).toHaveCount(0);
+  await expect(viewerPage.getByRole('textbox', { name: 'Comment at the cursor' })).toHaveCount(0);
   await expect(viewerPage.getByRole('button', { name: 'Resolve' })).toHaveCount(0);
   await expect(viewerPage.getByRole('button', { name: 'Mark reviewed' })).toHaveCount(0);
 

@@ -90,7 +90,7 @@ function TeamFleet({
           <AircraftCards aircraft={aircraft.data.aircraft} />
         )}
 
-        <div className="grid gap-4 md:grid-cols-2">
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-4 md:grid-cols-2">
           <Panel title="Awaiting review">
             {awaiting.isPending && awaiting.fetchStatus === 'paused' ? (
               <p className="text-sm text-ink-soft">{offlineNote}</p>

@@ -84,7 +84,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
   if (charts.count === 0)
     return <Empty>Trends appear once this aircraft has synced flights.</Empty>;
   return (
-    <div className="grid gap-5 lg:grid-cols-2">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-5 lg:grid-cols-2">
       <section>
         <h2 className="text-sm font-semibold text-slate-brand">Balance: deviation per motor</h2>
         <p className="text-xs text-ink-soft">

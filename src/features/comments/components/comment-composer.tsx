@@ -29,7 +29,21 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
     const [active, setActive] = useState(0);
     const [error, setError] = useState<string | null>(null);
     const area = useRef<HTMLTextAreaElement>(null);
-    useImperativeHandle(ref, () => ({ focus: () => area.current?.focus() }));
+    // Where focus was when something sent it here (the `c` key on the strip, say): it goes
+    // back there once the comment is sent or the box is left with Escape.
+    const cameFrom = useRef<HTMLElement | null>(null);
+    useImperativeHandle(ref, () => ({
+      focus: () => {
+        const from = document.activeElement;
+        cameFrom.current = from instanceof HTMLElement && from !== area.current ? from : null;
+        area.current?.focus();
+      },
+    }));
+    const giveFocusBack = () => {
+      const to = cameFrom.current;
+      cameFrom.current = null;
+      if (to?.isConnected && to !== document.body) to.focus();
+    };
 
     const mq = mentionQuery(text, caret);
     const suggestions = mq ? matchMembers(members, mq.query) : [];
@@ -64,6 +78,7 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
       onSubmit(body, mentionedIn(body, members));
       setText('');
       setCaret(0);
+      giveFocusBack();
     };
 
     return (
@@ -84,12 +99,11 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
             aria-label={label}
             rows={3}
             value={text}
-            className="w-full resize-y rounded border border-line bg-paper-raised px-2 py-1.5 text-sm"
+            className="w-full resize-y rounded border border-line-strong bg-paper-raised px-2 py-1.5 text-sm"
             placeholder="What did you see? @name to ask someone"
-            role="combobox"
-            aria-expanded={open}
-            aria-controls="mention-list"
             aria-autocomplete="list"
+            aria-controls={open ? 'mention-list' : undefined}
+            aria-activedescendant={open ? `mention-${active}` : undefined}
             onChange={(e) => {
               setText(e.target.value);
               setCaret(e.target.selectionStart);
@@ -111,6 +125,9 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
                 submit();
               } else if (e.key === 'Escape' && onCancel) {
                 onCancel();
+              } else if (e.key === 'Escape' && cameFrom.current) {
+                e.preventDefault();
+                giveFocusBack();
               }
             }}
           />
@@ -124,6 +141,7 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
               {suggestions.map((m, i) => (
                 <li
                   key={m.id}
+                  id={`mention-${i}`}
                   role="option"
                   aria-selected={i === active}
                   className={'cursor-pointer px-2 py-1 ' + (i === active ? 'bg-accent-soft' : '')}
@@ -151,7 +169,7 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
             <button
               type="button"
               onClick={onCancel}
-              className="rounded border border-line px-2 py-1 text-xs text-ink-soft"
+              className="rounded border border-line-strong px-2 py-1 text-xs text-ink-soft"
             >
               Cancel
             </button>

@@ -128,7 +128,7 @@ export function CommentThread(props: CommentThreadProps) {
       className={
         'rounded border px-3 py-2 ' +
         (selected ? 'border-accent bg-accent-soft/40 ' : 'border-line bg-paper-raised ') +
-        (resolved ? 'opacity-70' : '')
+        (resolved ? 'border-dashed' : '')
       }
     >
       <div className="mb-1 flex items-center gap-2">

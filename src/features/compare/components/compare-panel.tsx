@@ -156,11 +156,11 @@ export function ComparePanel({
   return (
     <div className="flex flex-col gap-4">
       <label className="flex items-center gap-2 text-sm">
-        <span className="text-ink-soft">Compare with</span>
+        <span className="shrink-0 text-ink-soft">Compare with</span>
         <select
           value={otherId ?? ''}
           onChange={(e) => onPick(e.target.value)}
-          className="rounded border border-line-strong bg-paper-raised px-2 py-1"
+          className="min-w-0 flex-1 rounded border border-line-strong bg-paper-raised px-2 py-1 sm:flex-none"
         >
           <option value="" disabled>
             pick a flight…
@@ -191,7 +191,7 @@ export function ComparePanel({
               ))}
             </ul>
           </section>
-          <div className="grid gap-3 md:grid-cols-2">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-3 md:grid-cols-2">
             <Column f={other} title="Earlier" />
             <Column f={current} title="This flight" />
           </div>

@@ -94,7 +94,7 @@ export function ImportPanel({ teamId, canSavePreset, onOpenFlight }: ImportPanel
   const mapping = jobs.find((j) => j.status.kind === 'needs-map');
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="flex flex-col gap-4">
         <div
           {...getRootProps({

@@ -12,6 +12,7 @@ import { applyServerError } from '../../../lib/form-errors';
 import { roleLabels } from '../../../lib/role-labels';
 import { useCreateInvite, useWithdrawInvite } from '../../../api/invites';
 import { useInvites } from '../../../api/invites';
+import { ScrollX } from '../../../components/ui/scroll-x';
 
 /** Invite by e-mail with a role; the link in the message works once and expires. */
 export function InvitesPanel({ teamId }: { teamId: string }) {
@@ -91,51 +92,53 @@ export function InvitesPanel({ teamId }: { teamId: string }) {
       ) : invites.isError ? (
         <ErrorNote error={invites.error} />
       ) : invites.data.invites.length > 0 ? (
-        <table className="w-full text-sm" aria-label="Invitations">
-          <thead>
-            <tr className="border-b border-line text-left text-xs text-ink-soft">
-              <th className="py-1 pr-2 font-medium">E-mail</th>
-              <th className="py-1 pr-2 font-medium">Role</th>
-              <th className="py-1 pr-2 font-medium">Sent</th>
-              <th className="py-1 pr-2 font-medium">State</th>
-              <th />
-            </tr>
-          </thead>
-          <tbody>
-            {invites.data.invites.map((i) => (
-              <tr key={i.id} className="border-b border-line/60">
-                <td className="py-1.5 pr-2 font-mono text-xs">{i.email}</td>
-                <td className="py-1.5 pr-2">{roleLabels[i.role]}</td>
-                <td className="py-1.5 pr-2 text-ink-soft">
-                  <span className="num">{day(i.createdAt)}</span> by {i.invitedBy}
-                </td>
-                <td className="py-1.5 pr-2 text-xs">
-                  <InviteStateNote invite={i} />
-                </td>
-                <td className="py-1.5 text-right">
-                  {i.state === 'open' && (
-                    <Button
-                      size="sm"
-                      tone="danger"
-                      disabled={withdraw.isPending}
-                      aria-label={`Withdraw the invitation to ${i.email}`}
-                      onClick={() => {
-                        if (
-                          window.confirm(
-                            `Withdraw the invitation to ${i.email}? The link they were sent stops working.`,
-                          )
-                        )
-                          withdraw.mutate(i.id);
-                      }}
-                    >
-                      Withdraw
-                    </Button>
-                  )}
-                </td>
+        <ScrollX label="Invitations table">
+          <table className="w-full text-sm" aria-label="Invitations">
+            <thead>
+              <tr className="border-b border-line text-left text-xs text-ink-soft">
+                <th className="py-1 pr-2 font-medium">E-mail</th>
+                <th className="py-1 pr-2 font-medium">Role</th>
+                <th className="py-1 pr-2 font-medium">Sent</th>
+                <th className="py-1 pr-2 font-medium">State</th>
+                <th />
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {invites.data.invites.map((i) => (
+                <tr key={i.id} className="border-b border-line/60">
+                  <td className="py-1.5 pr-2 font-mono text-xs">{i.email}</td>
+                  <td className="py-1.5 pr-2">{roleLabels[i.role]}</td>
+                  <td className="py-1.5 pr-2 text-ink-soft">
+                    <span className="num">{day(i.createdAt)}</span> by {i.invitedBy}
+                  </td>
+                  <td className="py-1.5 pr-2 text-xs">
+                    <InviteStateNote invite={i} />
+                  </td>
+                  <td className="py-1.5 text-right">
+                    {i.state === 'open' && (
+                      <Button
+                        size="sm"
+                        tone="danger"
+                        disabled={withdraw.isPending}
+                        aria-label={`Withdraw the invitation to ${i.email}`}
+                        onClick={() => {
+                          if (
+                            window.confirm(
+                              `Withdraw the invitation to ${i.email}? The link they were sent stops working.`,
+                            )
+                          )
+                            withdraw.mutate(i.id);
+                        }}
+                      >
+                        Withdraw
+                      </Button>
+                    )}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </ScrollX>
       ) : null}
     </div>
   );

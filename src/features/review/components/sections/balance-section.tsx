@@ -39,7 +39,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
   const design = airframe.cg ?? { x: 0, y: 0 };
   const mismatch = airframe.motors.length !== report.motorCount;
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_1fr]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,26rem)_1fr]">
       <figure className="flex flex-col items-center gap-2">
         <TopView airframe={airframe} deviationPct={deviationPct} cg={report.cg} flagged={flagged} />
         <figcaption className="text-xs text-ink-faint">
@@ -54,7 +54,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
           </p>
         )}
       </figure>
-      <div className="flex flex-col gap-4">
+      <div className="flex min-w-0 flex-col gap-4">
         <div className="rounded border-l-4 border-accent bg-paper-raised px-4 py-3">
           <p className="text-sm font-semibold text-ink">
             {patternTitle[diagnosis.pattern]}
@@ -98,7 +98,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
                   <td className="py-1 pl-4">
                     <div className="flex items-center gap-2">
                       <span className="num w-16 text-right">{signed(dev)} %</span>
-                      <span className="relative h-2 w-28 bg-paper-sunk" aria-hidden>
+                      <span className="relative hidden h-2 w-28 bg-paper-sunk sm:block" aria-hidden>
                         <span className="absolute inset-y-0 left-1/2 w-px bg-ink-faint" />
                         <span
                           className="absolute inset-y-0"

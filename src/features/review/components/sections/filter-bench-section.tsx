@@ -229,7 +229,7 @@ export function FilterBenchSection({
           </p>
         ))}
       {r && (
-        <div className="grid gap-4 lg:grid-cols-2">
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-2">
           <XyChart
             series={[
               { name: 'Magnitude', x: r.response.hz, y: r.response.magDb, color: inkSeries.after },

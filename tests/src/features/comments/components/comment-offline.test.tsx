@@ -55,7 +55,7 @@ describe('comment written offline', () => {
     const user = userEvent.setup();
     await screen.findByText('No comments yet.');
     await user.type(
-      screen.getByRole('combobox', { name: 'Comment at the cursor' }),
+      screen.getByRole('textbox', { name: 'Comment at the cursor' }),
       'Props chipped on landing',
     );
     await user.click(screen.getByRole('button', { name: 'Comment' }));

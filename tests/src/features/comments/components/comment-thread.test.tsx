@@ -165,7 +165,7 @@ describe('comment thread', () => {
   it('adds a comment at the cursor at once, with the mention picked from the team, before the server answers', async () => {
     const { user } = renderRail(pilot, 'pilot', 18.75);
     await screen.findByText('Hover drifts left here.');
-    const box = screen.getByRole('combobox', { name: 'Comment at the cursor' });
+    const box = screen.getByRole('textbox', { name: 'Comment at the cursor' });
     expect(screen.getByText('at 18.75 s')).toBeTruthy();
     await user.type(box, 'Motor 3 sounds rough @De');
     await user.click(
@@ -199,7 +199,7 @@ describe('comment thread', () => {
     const { user } = renderRail(pilot, 'pilot');
     await screen.findByText('Hover drifts left here.');
     await user.type(
-      screen.getByRole('combobox', { name: 'Comment at the cursor' }),
+      screen.getByRole('textbox', { name: 'Comment at the cursor' }),
       'Landing was hard',
     );
     await user.click(screen.getByRole('button', { name: 'Comment' }));
@@ -224,7 +224,7 @@ describe('comment thread', () => {
   it('shows a viewer the threads but no comment box, reply or resolve', async () => {
     renderRail(viewer, 'viewer');
     await screen.findByText('Hover drifts left here.');
-    expect(screen.queryByRole('combobox', { name: 'Comment at the cursor' })).toBeNull();
+    expect(screen.queryByRole('textbox', { name: 'Comment at the cursor' })).toBeNull();
     expect(screen.queryByRole('button', { name: 'Reply' })).toBeNull();
     expect(screen.queryByRole('button', { name: 'Resolve' })).toBeNull();
     expect(screen.queryByRole('button', { name: 'Request review' })).toBeNull();
