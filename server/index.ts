@@ -22,7 +22,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
 
   const mailer = await startMailer(config.mail, logger);
   const services = createServices(dataSource, config, mailer);
-  const swept = await services.flights.sweepRaw();
+  const swept = await services.rawLogs.sweep();
   if (swept > 0) logger.info({ swept }, 'removed raw logs no flight refers to');
   const app = createApp({ dataSource, config, logger, mailer, services });
   const server = app.listen(config.port, config.host);

@@ -2,10 +2,12 @@ import type { DataSource } from 'typeorm';
 import { AuthService } from './auth/auth.service';
 import { CommentsService } from './comments/comments.service';
 import type { Config } from './config';
-import { FleetService } from './fleet/fleet.service';
+import { AircraftService } from './aircraft/aircraft.service';
 import { FlightsService } from './flights/flights.service';
 import { openRawStore } from './flights/open-raw-store';
+import { RawLogsService } from './flights/raw-logs.service';
 import type { RawStore } from './flights/raw-store';
+import { ReviewsService } from './flights/reviews.service';
 import { createRateLimitStores, type RateLimitStores } from './http/rate-limit-store';
 import { HOUR_MS, limits } from './limits';
 import { MailQuota } from './mail/mail-quota';
@@ -18,8 +20,10 @@ export interface Services {
   auth: AuthService;
   teams: TeamsService;
   thresholds: ThresholdsService;
-  fleet: FleetService;
+  aircraft: AircraftService;
   flights: FlightsService;
+  rawLogs: RawLogsService;
+  reviews: ReviewsService;
   comments: CommentsService;
   presets: PresetsService;
   mailer: Mailer;
@@ -39,24 +43,31 @@ export function createServices(
 ): Services {
   const teams = new TeamsService(dataSource, config, mailer);
   const rateLimits = createRateLimitStores(config);
-  const flights = new FlightsService(
-    dataSource,
-    config,
-    teams,
-    mailer,
-    rawStore,
-    new MailQuota(
-      limits.reviewRequestMailsPerPersonPerHour,
-      HOUR_MS,
-      rateLimits.store('review-request-mail'),
-    ),
+  // The records release raw logs they no longer refer to, and the raw logs check access
+  // through the records; the callback reaches `rawLogs` only once both exist.
+  const flights: FlightsService = new FlightsService(dataSource, teams, (key) =>
+    rawLogs.release(key),
   );
+  const rawLogs: RawLogsService = new RawLogsService(dataSource, flights, rawStore);
   return {
     auth: new AuthService(dataSource, config, mailer),
     teams,
     thresholds: new ThresholdsService(dataSource, teams),
-    fleet: new FleetService(dataSource, teams, (key) => flights.releaseRaw(key)),
+    aircraft: new AircraftService(dataSource, teams, (key) => rawLogs.release(key)),
     flights,
+    rawLogs,
+    reviews: new ReviewsService(
+      dataSource,
+      config,
+      flights,
+      teams,
+      mailer,
+      new MailQuota(
+        limits.reviewRequestMailsPerPersonPerHour,
+        HOUR_MS,
+        rateLimits.store('review-request-mail'),
+      ),
+    ),
     comments: new CommentsService(
       dataSource,
       config,

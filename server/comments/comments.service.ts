@@ -7,7 +7,7 @@ import {
 import type { Role, UserRef } from '../../shared/schemas/common';
 import { User } from '../auth/user.entity';
 import type { Config } from '../config';
-import { Aircraft } from '../fleet/aircraft.entity';
+import { Aircraft } from '../aircraft/aircraft.entity';
 import { Flight } from '../flights/flight.entity';
 import type { FlightsService } from '../flights/flights.service';
 import { BadRequestError, ConflictError, ForbiddenError, NotFoundError } from '../http/errors';

@@ -77,7 +77,7 @@ export async function loadDemo(
 
   const aircraftIds = new Map<string, string>();
   for (const aircraft of demoFleet) {
-    const created = await services.fleet.create(idOf(owner.key), team.id, {
+    const created = await services.aircraft.create(idOf(owner.key), team.id, {
       name: aircraft.name,
       airframe: aircraft.airframe,
       ...componentsOf(aircraft.components),
@@ -86,7 +86,7 @@ export async function loadDemo(
   }
 
   for (const entry of demoServiceLog) {
-    await services.fleet.addServiceEntry(idOf(entry.author), aircraftIds.get(entry.aircraft)!, {
+    await services.aircraft.addServiceEntry(idOf(entry.author), aircraftIds.get(entry.aircraft)!, {
       date: entry.date.slice(0, 10),
       kind: entry.kind,
       motor: entry.motor,
@@ -117,7 +117,7 @@ export async function loadDemo(
       });
       const path = join(staging, `${id}.csv`);
       await writeFile(path, bytes);
-      await services.flights.attachRaw(pilotId, id, {
+      await services.rawLogs.attach(pilotId, id, {
         path,
         size: bytes.byteLength,
         sha256,
@@ -158,9 +158,9 @@ export async function loadDemo(
     if (!flight.review) continue;
     const id = flightIds[flight.index]!;
     const coachId = idOf(flight.review.coach);
-    await services.flights.requestReview(idOf(flight.pilot), id, { userIds: [coachId] });
+    await services.reviews.requestReview(idOf(flight.pilot), id, { userIds: [coachId] });
     if (flight.review.outcome)
-      await services.flights.setReview(coachId, id, {
+      await services.reviews.setReview(coachId, id, {
         state: flight.review.outcome,
         ...(flight.review.note ? { note: flight.review.note } : {}),
       });

@@ -1,6 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { User } from '../auth/user.entity';
-import { Aircraft } from '../fleet/aircraft.entity';
+import { Aircraft } from '../aircraft/aircraft.entity';
 import { Team } from '../teams/team.entity';
 
 /**

@@ -25,9 +25,9 @@ function attachmentName(fileName: string, gzip: boolean) {
   return gzip && !base.endsWith('.gz') ? `${base}.gz` : base;
 }
 
-export function flightsRouter({ flights }: Services, config: Config) {
+export function flightsRouter({ flights, rawLogs, reviews }: Services, config: Config) {
   const router = Router();
-  const upload = rawUpload(flights.rawStore.stagingDir, config.maxUploadBytes);
+  const upload = rawUpload(rawLogs.rawStore.stagingDir, config.maxUploadBytes);
   const receive = (req: Request, res: Response) =>
     new Promise<void>((resolve, reject) => {
       upload(req, res, (err: unknown) => {
@@ -82,13 +82,13 @@ export function flightsRouter({ flights }: Services, config: Config) {
       ?.staged;
     if (!staged)
       throw new BadRequestError('Send the log as multipart/form-data in the field "file".');
-    const result = await flights.attachRaw(user.id, id, staged);
+    const result = await rawLogs.attach(user.id, id, staged);
     res.status(result.stored ? 201 : 200).json(result satisfies RawUploadResponse);
   });
 
   router.get(paths.flightRaw, async (req, res) => {
     const user = requireUser(req);
-    const raw = await flights.openRaw(user.id, IdParam.parse(req.params).id);
+    const raw = await rawLogs.open(user.id, IdParam.parse(req.params).id);
     res.set({
       'content-type': raw.gzip ? 'application/gzip' : 'text/csv; charset=utf-8',
       'content-length': String(raw.size),
@@ -103,7 +103,7 @@ export function flightsRouter({ flights }: Services, config: Config) {
     const user = requireUser(req);
     const { id } = IdParam.parse(req.params);
     res.json(
-      (await flights.requestReview(
+      (await reviews.requestReview(
         user.id,
         id,
         ReviewRequestInput.parse(req.body),
@@ -115,7 +115,7 @@ export function flightsRouter({ flights }: Services, config: Config) {
     const user = requireUser(req);
     const { id } = IdParam.parse(req.params);
     res.json(
-      (await flights.setReview(
+      (await reviews.setReview(
         user.id,
         id,
         ReviewStateInput.parse(req.body),

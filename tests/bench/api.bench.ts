@@ -105,7 +105,7 @@ async function seed(dataDir: string, env: Record<string, string>) {
     name: 'Mara',
   });
   const team = await services.teams.create(userId, 'Club and filming crew');
-  const aircraft = await services.fleet.create(userId, team.id, kite);
+  const aircraft = await services.aircraft.create(userId, team.id, kite);
   const r = report();
   const { counts, worst } = findingStats(r);
   const common = {

@@ -30,7 +30,7 @@ describe('comments', () => {
     ] as const) {
       await addMember(t.dataSource, teamId, u.id, role);
     }
-    const aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
+    const aircraftId = (await t.services.aircraft.create(owner.id, teamId, kite)).id;
     flightId = randomUUID();
     await t.services.flights.put(pilot.id, flightId, flightBody(teamId, aircraftId));
   });

@@ -47,8 +47,8 @@ describe('flight list', () => {
     await t.dataSource
       .getRepository(Membership)
       .insert({ teamId, userId: pilotId, role: 'pilot', joinedAt: 0 });
-    kiteId = (await s.fleet.create(ownerId, teamId, kite)).id;
-    heronId = (await s.fleet.create(ownerId, teamId, { ...kite, name: 'Heron' })).id;
+    kiteId = (await s.aircraft.create(ownerId, teamId, kite)).id;
+    heronId = (await s.aircraft.create(ownerId, teamId, { ...kite, name: 'Heron' })).id;
     // 60 flights, several recorded in the same minute, so pages split runs of equal times.
     const states = ['none', 'requested', 'reviewed', 'changes-requested'];
     for (let i = 0; i < 60; i++) {
@@ -185,7 +185,7 @@ describe('flight list', () => {
   });
 
   it('counts each aircraft’s flights and those awaiting review for the fleet cards', async () => {
-    const cards = await t.services.fleet.list(ownerId, teamId);
+    const cards = await t.services.aircraft.list(ownerId, teamId);
     for (const card of cards) {
       const mine = all.filter((f) => f.aircraftId === card.id);
       expect(card.flightCount, card.name).toBe(mine.length);

@@ -37,7 +37,7 @@ describe('flights', () => {
     outsider = await signedUpAgent(t.app, 'Tess');
     teamId = (await t.services.teams.create(owner.id, 'Club and filming crew')).id;
     await addMember(t.dataSource, teamId, pilot.id, 'pilot');
-    aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
+    aircraftId = (await t.services.aircraft.create(owner.id, teamId, kite)).id;
   });
   afterAll(() => t.close());
 
@@ -140,8 +140,9 @@ describe('flights', () => {
     beforeAll(async () => {
       listTeam = (await t.services.teams.create(owner.id, 'List crew')).id;
       await addMember(t.dataSource, listTeam, pilot.id, 'pilot');
-      kiteId = (await t.services.fleet.create(owner.id, listTeam, kite)).id;
-      heronId = (await t.services.fleet.create(owner.id, listTeam, { ...kite, name: 'Heron' })).id;
+      kiteId = (await t.services.aircraft.create(owner.id, listTeam, kite)).id;
+      heronId = (await t.services.aircraft.create(owner.id, listTeam, { ...kite, name: 'Heron' }))
+        .id;
       for (let i = 0; i < 25; i++) {
         const act = i % 5 === 0;
         await t.services.flights.put(

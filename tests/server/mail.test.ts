@@ -77,7 +77,7 @@ describe('e-mail through the fake SMTP server', () => {
   it('delivers a mention to the mentioned member with a link to the comment', async () => {
     const coach = await signedUpAgent(t.app, 'Ines');
     await addMember(t.dataSource, teamId, coach.id, 'coach');
-    const aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
+    const aircraftId = (await t.services.aircraft.create(owner.id, teamId, kite)).id;
     const flightId = randomUUID();
     await t.services.flights.put(
       owner.id,
@@ -111,8 +111,9 @@ describe('e-mail through the fake SMTP server', () => {
   it('sends a review request to the chosen coach', async () => {
     const coach = await signedUpAgent(t.app, 'Pia');
     await addMember(t.dataSource, teamId, coach.id, 'coach');
-    const aircraftId = (await t.services.fleet.create(owner.id, teamId, { ...kite, name: 'Heron' }))
-      .id;
+    const aircraftId = (
+      await t.services.aircraft.create(owner.id, teamId, { ...kite, name: 'Heron' })
+    ).id;
     const flightId = randomUUID();
     await t.services.flights.put(owner.id, flightId, flightBody(teamId, aircraftId));
     const res = await owner.agent

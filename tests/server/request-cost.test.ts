@@ -31,7 +31,7 @@ describe('request cost', () => {
     t = await startTestApp();
     owner = await signedUpAgent(t.app, 'Mara');
     teamId = (await t.services.teams.create(owner.id, 'Club and filming crew')).id;
-    const aircraft = await t.services.fleet.create(owner.id, teamId, kite);
+    const aircraft = await t.services.aircraft.create(owner.id, teamId, kite);
     for (let i = 0; i < 5; i++)
       await t.services.flights.put(owner.id, randomUUID(), flightBody(teamId, aircraft.id));
   });

@@ -95,7 +95,7 @@ const canUpload = (c: Ctx) =>
   c.caller !== 'outsider' && c.caller !== 'anonymous' && has(c.caller, 'upload flights');
 
 async function aircraft(c: Ctx) {
-  return c.t.services.fleet.create(c.ids.owner, c.teamId, kite);
+  return c.t.services.aircraft.create(c.ids.owner, c.teamId, kite);
 }
 async function flight(c: Ctx, uploaderId: string) {
   const a = await aircraft(c);
@@ -311,7 +311,7 @@ const cases: Case[] = [
     setup: async (c) => {
       const a = await aircraft(c);
       const by = c.callerId === c.ids.owner ? c.ids.tuner : c.ids.owner;
-      const e = await c.t.services.fleet.addServiceEntry(by, a.id, serviceEvent);
+      const e = await c.t.services.aircraft.addServiceEntry(by, a.id, serviceEvent);
       return { path: `/api/aircraft/${a.id}/service-log/${e.id}` };
     },
     allowed: (r) => has(r, 'edit aircraft'),
@@ -324,7 +324,7 @@ const cases: Case[] = [
       const mayAdd =
         c.caller !== 'outsider' && c.caller !== 'anonymous' && has(c.caller, 'service events');
       const by = mayAdd ? c.callerId : c.ids.owner;
-      const e = await c.t.services.fleet.addServiceEntry(by, a.id, serviceEvent);
+      const e = await c.t.services.aircraft.addServiceEntry(by, a.id, serviceEvent);
       return { path: `/api/aircraft/${a.id}/service-log/${e.id}` };
     },
     allowed: (r) => has(r, 'service events'),
@@ -357,7 +357,7 @@ const cases: Case[] = [
     method: 'delete',
     setup: async (c) => {
       const a = await aircraft(c);
-      const run = await c.t.services.fleet.addBenchRun(c.ids.owner, a.id, benchRun);
+      const run = await c.t.services.aircraft.addBenchRun(c.ids.owner, a.id, benchRun);
       return { path: `/api/aircraft/${a.id}/bench-runs/${run.id}` };
     },
     allowed: (r) => has(r, 'bench runs'),

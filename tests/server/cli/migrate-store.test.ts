@@ -32,7 +32,7 @@ async function sqliteInstall(dir: string) {
     name: 'Wren',
   });
   const team = await s.teams.create(owner, 'Tern crew');
-  const aircraft = await s.fleet.create(owner, team.id, kite);
+  const aircraft = await s.aircraft.create(owner, team.id, kite);
   const csv = csvLog('to migrate');
   const flightId = randomUUID();
   await s.flights.put(owner, flightId, {
@@ -40,10 +40,10 @@ async function sqliteInstall(dir: string) {
     sha256: sha256(csv),
     sizeBytes: csv.length,
   });
-  const staged = join(s.flights.rawStore.stagingDir, 'upload.part');
-  await mkdir(s.flights.rawStore.stagingDir, { recursive: true });
+  const staged = join(s.rawLogs.rawStore.stagingDir, 'upload.part');
+  await mkdir(s.rawLogs.rawStore.stagingDir, { recursive: true });
   await writeFile(staged, csv);
-  await s.flights.attachRaw(owner, flightId, {
+  await s.rawLogs.attach(owner, flightId, {
     path: staged,
     size: csv.length,
     sha256: sha256(csv),

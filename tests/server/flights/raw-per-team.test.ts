@@ -74,7 +74,7 @@ describe('raw logs stay inside the team', () => {
       writeFileSync(join(legacyDir, `${orphanHash}.csv.gz`), 'x');
       writeFileSync(join(t.dir, 'raw', 'staging', 'crashed.part'), 'half an upload');
 
-      expect(await t.services.flights.sweepRaw()).toBe(2);
+      expect(await t.services.rawLogs.sweep()).toBe(2);
       expect(await storedCopies(t, orphanHash)).toHaveLength(0);
       expect(await storedCopies(t, sha256(kept))).toHaveLength(1);
       expect(readdirSync(join(t.dir, 'raw', 'staging'))).toEqual([]);

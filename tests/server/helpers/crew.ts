@@ -22,7 +22,7 @@ export async function crew<const R extends Exclude<Role, 'owner'>>(
     await addMember(t.dataSource, teamId, agent.id, role);
     members[role] = agent;
   }
-  const aircraftId = (await t.services.fleet.create(owner.id, teamId, kite)).id;
+  const aircraftId = (await t.services.aircraft.create(owner.id, teamId, kite)).id;
   return { owner, teamId, aircraftId, ...members };
 }
 

@@ -64,7 +64,7 @@ describe('versions, ETag and If-Match', () => {
   });
 
   it('aircraft airframe and parts', async () => {
-    const aircraftId = (await t.services.fleet.create(c.owner.id, c.teamId, kite)).id;
+    const aircraftId = (await t.services.aircraft.create(c.owner.id, c.teamId, kite)).id;
     let mass = 600;
     await lostUpdateRefused(
       c.owner,

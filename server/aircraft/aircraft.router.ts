@@ -23,13 +23,13 @@ import { requireUser } from '../http/session';
 import { expectedVersion, sendVersion } from '../http/versions';
 import type { Services } from '../services';
 
-export function fleetRouter({ fleet }: Services) {
+export function aircraftRouter({ aircraft: service }: Services) {
   const router = Router();
 
   router.get(paths.teamAircraft, async (req, res) => {
     const user = requireUser(req);
     res.json({
-      aircraft: await fleet.list(user.id, TeamIdParam.parse(req.params).teamId),
+      aircraft: await service.list(user.id, TeamIdParam.parse(req.params).teamId),
     } satisfies AircraftList);
   });
   router.post(paths.teamAircraft, async (req, res) => {
@@ -38,17 +38,17 @@ export function fleetRouter({ fleet }: Services) {
     res
       .status(201)
       .json(
-        (await fleet.create(user.id, teamId, AircraftInput.parse(req.body))) satisfies Aircraft,
+        (await service.create(user.id, teamId, AircraftInput.parse(req.body))) satisfies Aircraft,
       );
   });
   router.get(paths.aircraft, async (req, res) => {
     const user = requireUser(req);
-    res.json((await fleet.get(user.id, IdParam.parse(req.params).id)) satisfies Aircraft);
+    res.json((await service.get(user.id, IdParam.parse(req.params).id)) satisfies Aircraft);
   });
   router.patch(paths.aircraft, async (req, res) => {
     const user = requireUser(req);
     const { id } = IdParam.parse(req.params);
-    const aircraft = await fleet.update(
+    const aircraft = await service.update(
       user.id,
       id,
       AircraftPatch.parse(req.body),
@@ -59,14 +59,14 @@ export function fleetRouter({ fleet }: Services) {
   });
   router.delete(paths.aircraft, async (req, res) => {
     const user = requireUser(req);
-    await fleet.remove(user.id, IdParam.parse(req.params).id);
+    await service.remove(user.id, IdParam.parse(req.params).id);
     res.status(204).end();
   });
 
   router.get(paths.serviceLog, async (req, res) => {
     const user = requireUser(req);
     res.json({
-      entries: await fleet.serviceLog(user.id, IdParam.parse(req.params).id),
+      entries: await service.serviceLog(user.id, IdParam.parse(req.params).id),
     } satisfies ServiceLog);
   });
   router.post(paths.serviceLog, async (req, res) => {
@@ -75,7 +75,7 @@ export function fleetRouter({ fleet }: Services) {
     res
       .status(201)
       .json(
-        (await fleet.addServiceEntry(
+        (await service.addServiceEntry(
           user.id,
           id,
           ServiceEntryInput.parse(req.body),
@@ -86,14 +86,14 @@ export function fleetRouter({ fleet }: Services) {
   router.delete(paths.serviceEntry, async (req, res) => {
     const user = requireUser(req);
     const { id, entryId } = ServiceEntryParam.parse(req.params);
-    await fleet.removeServiceEntry(user.id, id, entryId);
+    await service.removeServiceEntry(user.id, id, entryId);
     res.status(204).end();
   });
 
   router.get(paths.benchRuns, async (req, res) => {
     const user = requireUser(req);
     res.json({
-      runs: await fleet.benchRuns(user.id, IdParam.parse(req.params).id),
+      runs: await service.benchRuns(user.id, IdParam.parse(req.params).id),
     } satisfies BenchRunList);
   });
   router.post(paths.benchRuns, async (req, res) => {
@@ -102,20 +102,20 @@ export function fleetRouter({ fleet }: Services) {
     res
       .status(201)
       .json(
-        (await fleet.addBenchRun(user.id, id, BenchRunInput.parse(req.body))) satisfies BenchRun,
+        (await service.addBenchRun(user.id, id, BenchRunInput.parse(req.body))) satisfies BenchRun,
       );
   });
 
   router.delete(paths.benchRun, async (req, res) => {
     const user = requireUser(req);
     const { id, runId } = BenchRunParam.parse(req.params);
-    await fleet.removeBenchRun(user.id, id, runId);
+    await service.removeBenchRun(user.id, id, runId);
     res.status(204).end();
   });
 
   router.get(paths.trends, async (req, res) => {
     const user = requireUser(req);
-    res.json((await fleet.trends(user.id, IdParam.parse(req.params).id)) satisfies Trends);
+    res.json((await service.trends(user.id, IdParam.parse(req.params).id)) satisfies Trends);
   });
 
   return router;

@@ -24,7 +24,7 @@ import { Aircraft } from './aircraft.entity';
 import { BenchRun } from './bench-run.entity';
 import { ServiceEntry } from './service-entry.entity';
 
-export class FleetService {
+export class AircraftService {
   constructor(
     private readonly ds: DataSource,
     private readonly teams: TeamsService,
