@@ -20,6 +20,7 @@ import { presetsRouter } from './presets/presets.router';
 import { devMailRouter } from './mail/dev-mail.router';
 import { createMemoryMailer, type Mailer } from './mail/mailer';
 import { createServices, type Services } from './services';
+import { invitesRouter } from './teams/invites.router';
 import { teamsRouter } from './teams/teams.router';
 
 /** Where `npm run dev` serves the client (Vite's default port), proxying /api to us. */
@@ -77,6 +78,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(healthRouter(dataSource));
   app.use(authRouter(services, config));
   app.use(teamsRouter(services));
+  app.use(invitesRouter(services));
   app.use(aircraftRouter(services));
   app.use(presetsRouter(services));
   app.use(flightsRouter(services, config));

@@ -13,12 +13,14 @@ import { HOUR_MS, limits } from './limits';
 import { MailQuota } from './mail/mail-quota';
 import type { Mailer } from './mail/mailer';
 import { PresetsService } from './presets/presets.service';
+import { InvitesService } from './teams/invites.service';
 import { TeamsService } from './teams/teams.service';
 import { ThresholdsService } from './teams/thresholds.service';
 
 export interface Services {
   auth: AuthService;
   teams: TeamsService;
+  invites: InvitesService;
   thresholds: ThresholdsService;
   aircraft: AircraftService;
   flights: FlightsService;
@@ -41,7 +43,7 @@ export function createServices(
   mailer: Mailer,
   rawStore: RawStore = openRawStore(config),
 ): Services {
-  const teams = new TeamsService(dataSource, config, mailer);
+  const teams = new TeamsService(dataSource);
   const rateLimits = createRateLimitStores(config);
   // The records release raw logs they no longer refer to, and the raw logs check access
   // through the records; the callback reaches `rawLogs` only once both exist.
@@ -52,6 +54,7 @@ export function createServices(
   return {
     auth: new AuthService(dataSource, config, mailer),
     teams,
+    invites: new InvitesService(dataSource, config, mailer, teams),
     thresholds: new ThresholdsService(dataSource, teams),
     aircraft: new AircraftService(dataSource, teams, (key) => rawLogs.release(key)),
     flights,

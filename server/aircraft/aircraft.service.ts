@@ -257,7 +257,7 @@ export class AircraftService {
     if (!entry) throw new NotFoundError('Service entry');
     if (!canDeleteServiceEntry(role, userId, entry.byId)) {
       throw new ForbiddenError(
-        role === 'pilot'
+        can(role, 'serviceLog.deleteOwn')
           ? 'Pilots delete only the service entries they added.'
           : 'Your role in this team does not allow deleting service entries.',
       );

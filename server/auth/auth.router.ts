@@ -15,7 +15,7 @@ import { authRateLimit, signInRateLimit } from '../http/rate-limit';
 import { requireUser, setSessionCookie } from '../http/session';
 import type { Services } from '../services';
 
-export function authRouter({ auth, teams, rateLimits }: Services, config: Config) {
+export function authRouter({ auth, invites, rateLimits }: Services, config: Config) {
   const router = Router();
   const me = async (userId: string): Promise<MeResponse> => ({ user: await auth.me(userId) });
 
@@ -27,10 +27,10 @@ export function authRouter({ auth, teams, rateLimits }: Services, config: Config
       const token = input.inviteToken;
       // Check the invite first (a bad link costs no password hashing), then spend it in the
       // transaction that creates the account.
-      if (token) await teams.previewInvite(token);
+      if (token) await invites.preview(token);
       const userId = await auth.signUp(
         input,
-        token ? (em, id) => teams.spendInvite(em, id, token).then(() => undefined) : undefined,
+        token ? (em, id) => invites.spend(em, id, token).then(() => undefined) : undefined,
       );
       setSessionCookie(auth.lucia, req, res, await auth.createSession(userId));
       res.status(201).json(await me(userId));

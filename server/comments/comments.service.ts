@@ -16,7 +16,7 @@ import type { Mailer } from '../mail/mailer';
 import { commentMail, type CommentMailKind } from '../mail/templates';
 import { Membership } from '../teams/membership.entity';
 import { assertCan } from '../teams/permissions';
-import { can } from '../../shared/auth/permissions';
+import { can, canOnRecord } from '../../shared/auth/permissions';
 import { iso, isoOrNull } from '../util';
 import { isDuplicateKey } from '../db/duplicate-key';
 import { cachedQuery, insertSql } from '../db/sql';
@@ -254,10 +254,11 @@ export class CommentsService {
     if (input.resolved !== undefined) {
       if (comment.parentId !== null)
         throw new BadRequestError('Resolve or reopen the first comment of the thread.');
-      const allowed =
-        can(flight.role, 'comments.resolveAny') ||
-        (can(flight.role, 'comments.resolveOnOwnFlight') && flight.pilotId === userId);
-      if (!allowed) throw new ForbiddenError('Your role cannot resolve comments on this flight.');
+      const ownFlight = flight.pilotId === userId;
+      if (
+        !canOnRecord(flight.role, 'comments.resolveAny', 'comments.resolveOnOwnFlight', ownFlight)
+      )
+        throw new ForbiddenError('Your role cannot resolve comments on this flight.');
       changes.resolvedAt = input.resolved ? (comment.resolvedAt ?? Date.now()) : null;
       changes.resolvedById = input.resolved ? (comment.resolvedById ?? userId) : null;
     }
@@ -283,8 +284,8 @@ export class CommentsService {
   /** Author deletes their own, the owner any. The thread keeps its place for the replies. */
   async remove(userId: string, id: string): Promise<void> {
     const { comment, flight } = await this.open(userId, id);
-    const own = comment.authorId === userId && can(flight.role, 'comments.deleteOwn');
-    if (!own && !can(flight.role, 'comments.deleteAny')) {
+    const own = comment.authorId === userId;
+    if (!canOnRecord(flight.role, 'comments.deleteAny', 'comments.deleteOwn', own)) {
       throw new ForbiddenError(
         'Only the author (while their role allows comments) or the team owner can delete a comment.',
       );

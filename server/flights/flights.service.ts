@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { can, type Action } from '../../shared/auth/permissions';
+import { can, canOnRecord, type Action } from '../../shared/auth/permissions';
 import type { Role } from '../../shared/schemas/common';
 import {
   FlightPutInput,
@@ -126,7 +126,7 @@ export class FlightsService {
           'id_taken',
         );
       }
-      if (existing.pilotId !== userId && !can(role, 'flights.replaceAny')) {
+      if (!canOnRecord(role, 'flights.replaceAny', 'flights.upload', existing.pilotId === userId)) {
         throw new ForbiddenError(
           'Only the pilot who uploaded this flight, or the team owner, can replace it.',
         );
@@ -194,8 +194,7 @@ export class FlightsService {
   /** Owner deletes any flight; the pilot who uploaded it deletes their own. */
   async remove(userId: string, id: string): Promise<void> {
     const f = await this.access(userId, id, 'team.read');
-    const own = f.pilotId === userId && can(f.role, 'flights.deleteOwn');
-    if (!own && !can(f.role, 'flights.deleteAny')) {
+    if (!canOnRecord(f.role, 'flights.deleteAny', 'flights.deleteOwn', f.pilotId === userId)) {
       throw new ForbiddenError(
         'Only the pilot who uploaded this flight (while their role allows uploads), or the team owner, can delete it.',
       );

@@ -1,7 +1,7 @@
 import { rm } from 'node:fs/promises';
 import type { DataSource } from 'typeorm';
 import type { RawUploadResponse } from '../../shared/schemas/flights';
-import { can } from '../../shared/auth/permissions';
+import { canOnRecord } from '../../shared/auth/permissions';
 import { AppError, ConflictError, ForbiddenError, NotFoundError } from '../http/errors';
 import { Flight } from './flight.entity';
 import type { FlightsService } from './flights.service';
@@ -51,7 +51,7 @@ export class RawLogsService {
   async attach(userId: string, id: string, staged: StagedFile): Promise<RawUploadResponse> {
     try {
       const f = await this.flights.access(userId, id, 'flights.upload');
-      if (f.pilotId !== userId && !can(f.role, 'flights.replaceAny')) {
+      if (!canOnRecord(f.role, 'flights.replaceAny', 'flights.upload', f.pilotId === userId)) {
         throw new ForbiddenError(
           'Only the pilot who uploaded this flight, or the team owner, can attach its log.',
         );

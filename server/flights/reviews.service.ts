@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { errorCodes } from '../../shared/api/error';
-import { can } from '../../shared/auth/permissions';
+import { can, canOnRecord } from '../../shared/auth/permissions';
 import {
   ReviewRequestInput,
   ReviewStateInput,
@@ -41,7 +41,8 @@ export class ReviewsService {
   ): Promise<FlightSummary> {
     const input = ReviewRequestInput.parse(body);
     const f = await this.flights.access(userId, id, 'flights.requestReview');
-    if (f.role === 'pilot' && f.pilotId !== userId)
+    const own = f.pilotId === userId;
+    if (!canOnRecord(f.role, 'flights.requestReviewAny', 'flights.requestReview', own))
       throw new ForbiddenError('Pilots ask for reviews of their own flights.');
     const reviewers = await this.ds
       .getRepository(Membership)

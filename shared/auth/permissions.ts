@@ -31,7 +31,9 @@ export const permissions = {
   'flights.deleteAny': ['owner'],
   // Own work follows the current role: a pilot demoted to viewer no longer deletes their flights.
   'flights.deleteOwn': ['owner', 'tuner', 'pilot'],
+  // Asking for a review of one's own flight; the owner and tuners ask for any flight.
   'flights.requestReview': ['owner', 'tuner', 'pilot'],
+  'flights.requestReviewAny': ['owner', 'tuner'],
   'flights.review': ['owner', 'coach'],
   'comments.create': ['owner', 'tuner', 'pilot', 'coach'],
   'comments.resolveAny': ['owner', 'tuner', 'coach'],
@@ -49,13 +51,24 @@ export function can(role: Role | null | undefined, action: Action): boolean {
   return role != null && (permissions[action] as readonly Role[]).includes(role);
 }
 
+/**
+ * Whether the role may act on one record: on any record with `anyAction`, or with `ownAction`
+ * on a record that is the user's own (the flight they uploaded, the comment they wrote).
+ */
+export function canOnRecord(
+  role: Role | null | undefined,
+  anyAction: Action,
+  ownAction: Action,
+  own: boolean,
+): boolean {
+  return can(role, anyAction) || (own && can(role, ownAction));
+}
+
 /** Whether `userId`, with `role` in the team, may delete a service event `addedById` logged. */
 export function canDeleteServiceEntry(
   role: Role | null | undefined,
   userId: string,
   addedById: string,
 ): boolean {
-  return (
-    can(role, 'serviceLog.deleteAny') || (can(role, 'serviceLog.deleteOwn') && userId === addedById)
-  );
+  return canOnRecord(role, 'serviceLog.deleteAny', 'serviceLog.deleteOwn', userId === addedById);
 }

@@ -193,7 +193,7 @@ const cases: Case[] = [
     name: 'withdraw an invite',
     method: 'delete',
     setup: async (c) => {
-      const { invite } = await c.t.services.teams.invite(c.ids.owner, c.teamId, {
+      const { invite } = await c.t.services.invites.create(c.ids.owner, c.teamId, {
         email: `${randomUUID()}@crew.example`,
         role: 'pilot',
       });
