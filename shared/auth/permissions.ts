@@ -3,7 +3,7 @@ import type { Role } from '../schemas/common';
 const everyone: readonly Role[] = ['owner', 'tuner', 'pilot', 'coach', 'viewer'];
 
 /**
- * What each role may do, from the roles table of the product design. Anything not listed is
+ * What each role may do (the roles table in server/README.md). Anything not listed is
  * denied. Ownership rules (a pilot's own flight, one's own comment) are checked on top of these.
  * The server enforces this table on every request; the UI reads the same table only to hide
  * what a role cannot do.

@@ -3,7 +3,7 @@ import type { FlightReport } from '../../../shared/schemas/report';
 import type { AircraftInput } from '../../../shared/schemas/aircraft';
 import type { FlightPutInput } from '../../../shared/schemas/flights';
 
-/** "Kite", the demo crew's 5-inch freestyle quad X (default numbering, PRODUCT.md §4). */
+/** "Kite", the demo crew's 5-inch freestyle quad X (default numbering, shared/README.md §4). */
 export const kite: AircraftInput = {
   name: 'Kite',
   airframe: {

@@ -3,7 +3,7 @@ import { can, permissions, type Action } from '../../../shared/auth/permissions'
 import { Role } from '../../../shared/schemas/common';
 
 // The full role × route matrix is checked against the running server in
-// tests/server/roles-matrix.test.ts; here only what the UI leans on besides it.
+// tests/server/<area>/roles.test.ts; here only what the UI leans on besides it.
 describe('roles table', () => {
   it('grants nothing to someone without a role in the team', () => {
     for (const action of Object.keys(permissions) as Action[]) {

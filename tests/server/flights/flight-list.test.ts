@@ -1,17 +1,17 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { Flight } from '../../server/flights/flight.entity';
-import { User } from '../../server/auth/user.entity';
-import { Membership } from '../../server/teams/membership.entity';
+import { Flight } from '../../../server/flights/flight.entity';
+import { User } from '../../../server/auth/user.entity';
+import { Membership } from '../../../server/teams/membership.entity';
 import {
   FlightListQuery,
   FlightPage,
   type FlightListQueryInput,
-} from '../../shared/schemas/flights';
-import { engine } from './helpers/engine';
-import { describeStep, explainPostgres, type PgPlanStep } from './helpers/explain';
-import { kite } from './helpers/fixtures';
-import { startTestApp, type TestApp } from './helpers/test-app';
+} from '../../../shared/schemas/flights';
+import { engine } from '../helpers/engine';
+import { describeStep, explainPostgres, type PgPlanStep } from '../helpers/explain';
+import { kite } from '../helpers/fixtures';
+import { startTestApp, type TestApp } from '../helpers/test-app';
 
 /**
  * The flight list with every filter the fleet page offers: the right flights in the right

@@ -1,13 +1,13 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiErrorBody } from '../../shared/api/error';
-import { defaultThresholds } from '../../shared/schemas/thresholds';
-import { Aircraft, BenchRunList, ServiceLog } from '../../shared/schemas/aircraft';
-import { Invite, InviteList, MemberList, Team, TeamList } from '../../shared/schemas/teams';
-import { TeamThresholds } from '../../shared/schemas/thresholds';
-import { kite, sha256 } from './helpers/fixtures';
-import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
-import { addMember, sql } from './helpers/sql';
+import { ApiErrorBody } from '../../../shared/api/error';
+import { defaultThresholds } from '../../../shared/schemas/thresholds';
+import { Aircraft, BenchRunList, ServiceLog } from '../../../shared/schemas/aircraft';
+import { Invite, InviteList, MemberList, Team, TeamList } from '../../../shared/schemas/teams';
+import { TeamThresholds } from '../../../shared/schemas/thresholds';
+import { kite, sha256 } from '../helpers/fixtures';
+import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
+import { addMember, sql } from '../helpers/sql';
 
 describe('teams and fleet', () => {
   let t: TestApp;

@@ -1,18 +1,18 @@
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { MeResponse } from '../../shared/schemas/auth';
-import { DevMailList } from '../../shared/schemas/mail';
-import { InvitePreview } from '../../shared/schemas/teams';
-import { flightBody, kite } from './helpers/fixtures';
+import { MeResponse } from '../../../shared/schemas/auth';
+import { DevMailList } from '../../../shared/schemas/mail';
+import { InvitePreview } from '../../../shared/schemas/teams';
+import { flightBody, kite } from '../helpers/fixtures';
 import {
   PASSWORD,
   signedUpAgent,
   startTestApp,
   uniqueEmail,
   type TestApp,
-} from './helpers/test-app';
-import { addMember } from './helpers/sql';
+} from '../helpers/test-app';
+import { addMember } from '../helpers/sql';
 
 /** Mail goes through nodemailer over real SMTP into the local fake server, and is read back over HTTP. */
 describe('e-mail through the fake SMTP server', () => {

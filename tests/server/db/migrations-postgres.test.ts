@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
-import { parseConfig } from '../../server/config';
-import { openDatabase } from '../../server/db/data-source';
-import { migrations } from '../../server/db/migrations';
-import { postgresMigrations } from '../../server/db/postgres';
-import { engine, freshStores, type Stores } from './helpers/engine';
-import { explainPostgres } from './helpers/explain';
+import { parseConfig } from '../../../server/config';
+import { openDatabase } from '../../../server/db/data-source';
+import { migrations } from '../../../server/db/migrations';
+import { postgresMigrations } from '../../../server/db/postgres';
+import { engine, freshStores, type Stores } from '../helpers/engine';
+import { explainPostgres } from '../helpers/explain';
 
 describe('PostgreSQL migrations', () => {
   it('mirror the SQLite ones one for one, by name and order', () => {

@@ -2,20 +2,20 @@ import { createHash, randomUUID } from 'node:crypto';
 import { gzipSync } from 'node:zlib';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiErrorBody } from '../../shared/api/error';
+import { ApiErrorBody } from '../../../shared/api/error';
 import {
   FlightDetail,
   FlightPage,
   FlightPutResponse,
   RawUploadResponse,
-} from '../../shared/schemas/flights';
-import { Trends } from '../../shared/schemas/aircraft';
-import { FlightPayload } from '../../server/flights/flight-payload.entity';
-import { Flight } from '../../server/flights/flight.entity';
-import { csvLog, flightBody, kite, report, sha256 } from './helpers/fixtures';
-import { storedRaw } from './helpers/engine';
-import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
-import { addMember } from './helpers/sql';
+} from '../../../shared/schemas/flights';
+import { Trends } from '../../../shared/schemas/aircraft';
+import { FlightPayload } from '../../../server/flights/flight-payload.entity';
+import { Flight } from '../../../server/flights/flight.entity';
+import { csvLog, flightBody, kite, report, sha256 } from '../helpers/fixtures';
+import { storedRaw } from '../helpers/engine';
+import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
+import { addMember } from '../helpers/sql';
 
 type Agent = Awaited<ReturnType<typeof signedUpAgent>>;
 

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
-import { parseConfig } from '../../server/config';
-import { openDatabase } from '../../server/db/data-source';
-import { migrations } from '../../server/db/migrations';
-import { tempDir } from './helpers/temp-dir';
+import { parseConfig } from '../../../server/config';
+import { openDatabase } from '../../../server/db/data-source';
+import { migrations } from '../../../server/db/migrations';
+import { tempDir } from '../helpers/temp-dir';
 
 describe('migrations', () => {
   const tmp = tempDir();

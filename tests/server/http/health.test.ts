@@ -3,12 +3,12 @@ import type { AddressInfo } from 'node:net';
 import { existsSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
-import { createApp } from '../../server/app';
-import { parseConfig } from '../../server/config';
-import { openDatabase } from '../../server/db/data-source';
-import { ApiErrorBody } from '../../shared/api/error';
-import { HealthResponse } from '../../shared/schemas/health';
-import { tempDir } from './helpers/temp-dir';
+import { createApp } from '../../../server/app';
+import { parseConfig } from '../../../server/config';
+import { openDatabase } from '../../../server/db/data-source';
+import { ApiErrorBody } from '../../../shared/api/error';
+import { HealthResponse } from '../../../shared/schemas/health';
+import { tempDir } from '../helpers/temp-dir';
 
 describe('GET /api/health over real HTTP', () => {
   const tmp = tempDir();

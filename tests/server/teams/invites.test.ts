@@ -1,9 +1,9 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiErrorBody } from '../../shared/api/error';
-import { Invite, InviteList, InvitePreview, Team } from '../../shared/schemas/teams';
-import { PASSWORD, signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
-import { sql } from './helpers/sql';
+import { ApiErrorBody } from '../../../shared/api/error';
+import { Invite, InviteList, InvitePreview, Team } from '../../../shared/schemas/teams';
+import { PASSWORD, signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
+import { sql } from '../helpers/sql';
 
 describe('invitations: withdrawal and state', () => {
   let t: TestApp;

@@ -1,17 +1,17 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiErrorBody } from '../../shared/api/error';
-import { MeResponse } from '../../shared/schemas/auth';
-import { PasswordReset } from '../../server/auth/password-reset.entity';
-import { hashToken } from '../../server/auth/tokens';
-import { User } from '../../server/auth/user.entity';
+import { ApiErrorBody } from '../../../shared/api/error';
+import { MeResponse } from '../../../shared/schemas/auth';
+import { PasswordReset } from '../../../server/auth/password-reset.entity';
+import { hashToken } from '../../../server/auth/tokens';
+import { User } from '../../../server/auth/user.entity';
 import {
   PASSWORD,
   signedUpAgent,
   startTestApp,
   uniqueEmail,
   type TestApp,
-} from './helpers/test-app';
+} from '../helpers/test-app';
 
 const resetToken = (text: string) => /\/reset\/([A-Za-z0-9_-]+)/.exec(text)?.[1];
 

@@ -1,12 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiErrorBody } from '../../shared/api/error';
-import { Comment, CommentList } from '../../shared/schemas/comments';
-import { FlightDetail } from '../../shared/schemas/flights';
-import { Comment as CommentEntity } from '../../server/comments/comment.entity';
-import { flightBody, kite } from './helpers/fixtures';
-import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
-import { addMember } from './helpers/sql';
+import { ApiErrorBody } from '../../../shared/api/error';
+import { Comment, CommentList } from '../../../shared/schemas/comments';
+import { FlightDetail } from '../../../shared/schemas/flights';
+import { Comment as CommentEntity } from '../../../server/comments/comment.entity';
+import { flightBody, kite } from '../helpers/fixtures';
+import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
+import { addMember } from '../helpers/sql';
 
 type Agent = Awaited<ReturnType<typeof signedUpAgent>>;
 

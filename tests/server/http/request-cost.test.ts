@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { FlightPage } from '../../shared/schemas/flights';
-import { flightBody, kite } from './helpers/fixtures';
-import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
+import { FlightPage } from '../../../shared/schemas/flights';
+import { flightBody, kite } from '../helpers/fixtures';
+import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
 import { randomUUID } from 'node:crypto';
 
 // Count password hashing without changing it: the real argon2, watched.
@@ -21,7 +21,7 @@ vi.mock('@node-rs/argon2', async (importOriginal) => {
   };
 });
 
-/** What a signed-in request costs beyond its own work (PRODUCT.md §10: list pages are hot). */
+/** What a signed-in request costs beyond its own work (list pages are hot: tests/bench/README.md §1.4). */
 describe('request cost', () => {
   let t: TestApp;
   let owner: Awaited<ReturnType<typeof signedUpAgent>>;

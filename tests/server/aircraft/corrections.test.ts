@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiErrorBody } from '../../shared/api/error';
-import type { Role } from '../../shared/schemas/common';
-import { Aircraft, BenchRunList, ServiceEntry, ServiceLog } from '../../shared/schemas/aircraft';
-import { Team } from '../../shared/schemas/teams';
-import { kite } from './helpers/fixtures';
-import { signedUpAgent, startTestApp, type TestApp } from './helpers/test-app';
-import { addMember, sql } from './helpers/sql';
+import { ApiErrorBody } from '../../../shared/api/error';
+import type { Role } from '../../../shared/schemas/common';
+import { Aircraft, BenchRunList, ServiceEntry, ServiceLog } from '../../../shared/schemas/aircraft';
+import { Team } from '../../../shared/schemas/teams';
+import { kite } from '../helpers/fixtures';
+import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
+import { addMember, sql } from '../helpers/sql';
 
 type Member = Awaited<ReturnType<typeof signedUpAgent>>;
 
