@@ -5,19 +5,16 @@
  */
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { parseBenchArgs } from './args';
 import { loadBenches } from './registry';
 
 const benches = await loadBenches();
 
-const args = process.argv.slice(2);
-const json = args.includes('--json');
-const engineAt = args.indexOf('--engine');
-const engine = engineAt >= 0 ? args[engineAt + 1] : 'sqlite';
+const { names, json, engine } = parseBenchArgs(process.argv.slice(2));
 if (engine !== 'sqlite' && engine !== 'postgres') {
   console.error(`Unknown engine: ${engine ?? '(none)'}. Known: sqlite, postgres.`);
   process.exit(1);
 }
-const names = args.filter((a, i) => !a.startsWith('--') && i !== engineAt + 1);
 const unknown = names.filter((n) => !(n in benches));
 if (unknown.length > 0) {
   console.error(
