@@ -30,8 +30,8 @@ const fetchTeamAircraft = (teamId: string) =>
 const fetchAircraft = (id: string) => apiFetch(pathTo('aircraft', { id }), Aircraft);
 const createAircraft = (teamId: string, input: AircraftInput) =>
   apiFetch(pathTo('teamAircraft', { teamId }), Aircraft, { method: 'POST', json: input });
-const patchAircraft = (id: string, input: AircraftPatch) =>
-  apiFetch(pathTo('aircraft', { id }), Aircraft, { method: 'PATCH', json: input });
+const patchAircraft = (id: string, input: AircraftPatch, version?: number) =>
+  apiFetch(pathTo('aircraft', { id }), Aircraft, { method: 'PATCH', json: input, version });
 const deleteAircraft = (id: string) =>
   apiFetch(pathTo('aircraft', { id }), z.unknown(), { method: 'DELETE' });
 
@@ -55,10 +55,16 @@ export function useCreateAircraft(teamId: string) {
   });
 }
 
+/** An edit of the aircraft; `version` is the one the form started from (412 if it is stale). */
+export interface AircraftEdit {
+  patch: AircraftPatch;
+  version?: number;
+}
+
 export function useUpdateAircraft(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: AircraftPatch) => patchAircraft(id, input),
+    mutationFn: ({ patch, version }: AircraftEdit) => patchAircraft(id, patch, version),
     onSuccess: (aircraft) => {
       queryClient.setQueryData(aircraftKeys.detail(id), aircraft);
       return Promise.all([
@@ -70,6 +76,12 @@ export function useUpdateAircraft(id: string) {
       ]);
     },
   });
+}
+
+/** Take the aircraft as the server holds it now (after someone else saved first). */
+export function useReloadAircraft(id: string) {
+  const queryClient = useQueryClient();
+  return () => queryClient.refetchQueries({ queryKey: aircraftKeys.detail(id), exact: true });
 }
 
 export function useDeleteAircraft(id: string) {

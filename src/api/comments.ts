@@ -23,8 +23,8 @@ const fetchComments = (flightId: string) =>
   apiFetch(pathTo('flightComments', { id: flightId }), CommentList);
 const putComment = (id: string, input: CommentPutInput) =>
   apiFetch(commentPath(id), Comment, { method: 'PUT', json: input });
-const patchComment = (id: string, patch: CommentPatch) =>
-  apiFetch(commentPath(id), Comment, { method: 'PATCH', json: patch });
+const patchComment = (id: string, patch: CommentPatch, version?: number) =>
+  apiFetch(commentPath(id), Comment, { method: 'PATCH', json: patch, version });
 /** 204 with no body. */
 const deleteComment = (id: string) =>
   apiFetch(commentPath(id), z.undefined(), { method: 'DELETE' });
@@ -126,10 +126,31 @@ export function useAddComment(flightId: string, author: UserRef) {
   });
 }
 
+/** An edit or a resolve; `version` is the comment's as shown, so a newer one is not overwritten. */
+export interface CommentEdit {
+  id: string;
+  patch: CommentPatch;
+  version?: number;
+  /** In words, for the sync list should it wait offline ("Edit of your comment at 7.50 s"). */
+  label?: string;
+}
+
+/**
+ * Edits or resolves a comment. Offline, the edit waits in the outbox with the version it started
+ * from; if someone else changed the comment meanwhile, the sync list offers overwrite or drop.
+ */
 export function useUpdateComment(flightId: string, me: UserRef) {
   const o = useOptimistic(flightId);
   return useMutation({
-    mutationFn: ({ id, patch }: { id: string; patch: CommentPatch }) => patchComment(id, patch),
+    mutationFn: async ({ id, patch, version, label }: CommentEdit) => {
+      try {
+        return { comment: await patchComment(id, patch, version), queued: false };
+      } catch (e) {
+        if (!isOffline(e)) throw e;
+        await enqueue({ id, method: 'PATCH', path: commentPath(id), body: patch, version, label });
+        return { comment: null, queued: true };
+      }
+    },
     onMutate: ({ id, patch }) =>
       o.apply((list) =>
         list.map((c) =>
@@ -148,8 +169,20 @@ export function useUpdateComment(flightId: string, me: UserRef) {
         ),
       ),
     onError: (_e, _v, snapshot) => o.rollback(snapshot),
-    onSuccess: () => o.settle(),
+    onSuccess: (result, { id, version }) =>
+      result.queued
+        ? // The queued edit will make the next version: a second edit offline builds on it.
+          o.apply((list) =>
+            list.map((c) => (c.id === id ? { ...c, version: (version ?? c.version) + 1 } : c)),
+          )
+        : o.settle(),
   });
+}
+
+/** Take the flight's comments as the server holds them now (after someone else saved first). */
+export function useReloadComments(flightId: string) {
+  const queryClient = useQueryClient();
+  return () => queryClient.refetchQueries({ queryKey: commentKeys.flight(flightId), exact: true });
 }
 
 export function useDeleteComment(flightId: string) {

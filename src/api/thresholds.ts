@@ -6,8 +6,12 @@ import { teamKeys } from './teams';
 
 const fetchThresholds = (teamId: string) =>
   apiFetch(pathTo('thresholds', { teamId }), TeamThresholds);
-const saveThresholds = (teamId: string, input: ThresholdsInput) =>
-  apiFetch(pathTo('thresholds', { teamId }), TeamThresholds, { method: 'PUT', json: input });
+const saveThresholds = (teamId: string, input: ThresholdsInput, version?: number) =>
+  apiFetch(pathTo('thresholds', { teamId }), TeamThresholds, {
+    method: 'PUT',
+    json: input,
+    version,
+  });
 
 export const thresholdQueries = {
   team: (teamId: string) =>
@@ -19,10 +23,18 @@ export const useThresholds = (teamId: string) => useQuery(thresholdQueries.team(
 export function useSaveThresholds(teamId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: ThresholdsInput) => saveThresholds(teamId, input),
+    /** `version`: the one the editor started from; the server answers 412 if it is stale. */
+    mutationFn: ({ input, version }: { input: ThresholdsInput; version?: number }) =>
+      saveThresholds(teamId, input, version),
     onSuccess: (saved) => {
       queryClient.setQueryData(teamKeys.thresholds(teamId), saved);
       return queryClient.invalidateQueries({ queryKey: teamKeys.thresholds(teamId) });
     },
   });
+}
+
+/** Take the team's thresholds as the server holds them now (after someone else saved first). */
+export function useReloadThresholds(teamId: string) {
+  const queryClient = useQueryClient();
+  return () => queryClient.refetchQueries({ queryKey: teamKeys.thresholds(teamId), exact: true });
 }

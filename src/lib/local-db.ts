@@ -54,11 +54,18 @@ export interface OutboxEntry {
   method: OutboxMethod;
   path: string;
   body?: unknown;
+  /** The version the edit started from, sent as If-Match so a newer one is not overwritten. */
+  version?: number;
+  /** What the write was, in words, for the sync list ("Edit of your comment at 7.50 s"). */
+  label?: string;
   createdAt: number;
-  state: 'pending' | 'failed';
+  /** 'conflict': someone else saved first (412); it waits for the pilot to choose. */
+  state: 'pending' | 'failed' | 'conflict';
   attempts: number;
   nextAttemptAt: number;
   lastError?: string;
+  /** With 'conflict': the version the server holds now. */
+  currentVersion?: number;
 }
 
 /**
@@ -222,6 +229,8 @@ export interface EnqueueInput {
   method: OutboxMethod;
   path: string;
   body?: unknown;
+  version?: number;
+  label?: string;
 }
 
 /** Queue a write for the server; it is sent in order when online and signed in. */
@@ -258,6 +267,24 @@ export async function markOutboxAttemptFailed(
     lastError: error,
     state: retryAt === null ? 'failed' : 'pending',
     nextAttemptAt: retryAt ?? 0,
+  });
+}
+
+/** The server holds a newer version than the write was based on: keep it for the pilot to decide. */
+export async function markOutboxConflict(seq: number, currentVersion: number, error: string) {
+  await localDb().outbox.update(seq, { state: 'conflict', currentVersion, lastError: error });
+}
+
+/** Overwrite: send the write again against the version the server holds now. */
+export async function overwriteOutboxConflict(seq: number): Promise<void> {
+  const entry = await localDb().outbox.get(seq);
+  if (!entry || entry.state !== 'conflict') return;
+  await localDb().outbox.update(seq, {
+    state: 'pending',
+    version: entry.currentVersion,
+    currentVersion: undefined,
+    lastError: undefined,
+    nextAttemptAt: 0,
   });
 }
 

@@ -3,7 +3,8 @@ import { Alert, ErrorNote, describeError } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
 import { Loading } from '../../components/ui/panel';
-import { useDeleteAircraft, useUpdateAircraft } from '../../api/aircraft';
+import { useDeleteAircraft, useReloadAircraft, useUpdateAircraft } from '../../api/aircraft';
+import { unlessConflict, VersionConflict } from '../../components/ui/version-conflict';
 import { useAircraft } from '../../api/aircraft';
 import { AirframeEditor } from '../../features/aircraft/components/airframe-editor';
 import { BenchRunsPanel } from '../../features/aircraft/components/bench-runs-panel';
@@ -55,6 +56,7 @@ function AircraftView({
   role: Role | undefined;
 }) {
   const update = useUpdateAircraft(aircraft.id);
+  const reload = useReloadAircraft(aircraft.id);
   const remove = useDeleteAircraft(aircraft.id);
   const navigate = useNavigate();
   const canEdit = can(role, 'aircraft.update');
@@ -110,19 +112,35 @@ function AircraftView({
         <>
           {!canEdit && <Alert tone="info">Read only: your role cannot change aircraft.</Alert>}
           {update.isSuccess && !update.isPending && <Alert tone="ok">Airframe saved.</Alert>}
+          <VersionConflict
+            error={update.error}
+            what="this aircraft"
+            busy={update.isPending}
+            onReload={() => void reload().then(() => update.reset())}
+            onOverwrite={(version) =>
+              update.variables && update.mutate({ ...update.variables, version })
+            }
+          />
           <AirframeEditor
             key={aircraft.updatedAt}
             initial={{ name: aircraft.name, airframe: aircraft.airframe }}
             readOnly={!canEdit}
             submitting={update.isPending}
-            serverError={update.isError ? describeError(update.error) : null}
-            onSubmit={(value) => update.mutate({ name: value.name, airframe: value.airframe })}
+            serverError={unlessConflict(update.error) ? describeError(update.error) : null}
+            onSubmit={(value) =>
+              update.mutate({
+                patch: { name: value.name, airframe: value.airframe },
+                // The form is remounted whenever the aircraft changes, so this is its start.
+                version: aircraft.version,
+              })
+            }
           />
         </>
       )}
       {section === 'parts' && (
         <PartsEditor
           aircraftId={aircraft.id}
+          version={aircraft.version}
           initial={{ components: aircraft.components, notes: aircraft.notes }}
           readOnly={!canEdit}
         />

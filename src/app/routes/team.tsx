@@ -54,7 +54,11 @@ function TeamPage() {
           </Panel>
         )}
         <Panel title="Import presets">
-          <PresetsList teamId={team.id} canDelete={can(team.role, 'presets.delete')} />
+          <PresetsList
+            teamId={team.id}
+            canEdit={can(team.role, 'presets.write')}
+            canDelete={can(team.role, 'presets.delete')}
+          />
         </Panel>
         <Panel title="Thresholds">
           <ThresholdsEditor teamId={team.id} canEdit={can(team.role, 'thresholds.update')} />

@@ -4,6 +4,7 @@ import {
   listUnsyncedFlights,
   markFlightAttemptFailed,
   markOutboxAttemptFailed,
+  markOutboxConflict,
   markSummarySynced,
   markSynced,
   removeOutboxEntry,
@@ -13,6 +14,7 @@ import {
 } from '../../lib/local-db';
 import type { FlightPutInput } from '../../../shared/schemas/flights';
 import { flightPath, flightRawPath } from '../../api/flights';
+import { ifMatch, versionFromEtag } from '../../lib/api-fetch';
 
 /**
  * One pass over what this device still owes the server: first the flights (summary, then raw
@@ -34,6 +36,8 @@ export interface SyncPassResult {
   writesSent: number;
   /** Items refused for good this pass; they stay on the device, marked failed. */
   refused: number;
+  /** Edits someone else overtook (412); they wait for the pilot to overwrite or drop them. */
+  conflicts: number;
   /** Items that will be tried again later. */
   deferred: number;
   /** Flights that cannot go until someone picks their team and aircraft. */
@@ -56,6 +60,7 @@ type Outcome =
   | { kind: 'offline'; message: string }
   | { kind: 'signed-out' }
   | { kind: 'transient'; message: string }
+  | { kind: 'conflict'; message: string; currentVersion: number }
   | { kind: 'refused'; message: string };
 
 async function send(deps: SyncDeps, path: string, init: RequestInit): Promise<Outcome> {
@@ -67,22 +72,33 @@ async function send(deps: SyncDeps, path: string, init: RequestInit): Promise<Ou
   }
   if (response.ok) return { kind: 'ok', body: await response.json().catch(() => undefined) };
   if (response.status === 401) return { kind: 'signed-out' };
-  const message = await errorMessage(response);
+  const { message, currentVersion } = await errorOf(response);
+  if (response.status === 412 && currentVersion !== undefined)
+    return { kind: 'conflict', message, currentVersion };
   // Time-outs, rate limits and server faults pass; other 4xx answers will not change by asking again.
   if (response.status === 408 || response.status === 429 || response.status >= 500)
     return { kind: 'transient', message };
   return { kind: 'refused', message };
 }
 
-async function errorMessage(response: Response): Promise<string> {
+async function errorOf(response: Response): Promise<{ message: string; currentVersion?: number }> {
+  const currentVersion = versionFromEtag(response.headers.get('etag'));
   try {
     const body: unknown = await response.json();
-    const message = (body as { error?: { message?: unknown } })?.error?.message;
-    if (typeof message === 'string') return `${response.status}: ${message}`;
+    const error = (body as { error?: { message?: unknown; currentVersion?: unknown } })?.error;
+    if (typeof error?.message === 'string')
+      return {
+        message: `${response.status}: ${error.message}`,
+        currentVersion:
+          typeof error.currentVersion === 'number' ? error.currentVersion : currentVersion,
+      };
   } catch {
     // not JSON; fall through to the status line
   }
-  return `${response.status}: ${response.statusText || 'request failed'}`;
+  return {
+    message: `${response.status}: ${response.statusText || 'request failed'}`,
+    currentVersion,
+  };
 }
 
 /** Hex SHA-256 of the raw log as dropped; the server uses it to spot the same file twice. */
@@ -140,6 +156,7 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
     flightsSynced: 0,
     writesSent: 0,
     refused: 0,
+    conflicts: 0,
     deferred: 0,
     waiting: 0,
     stoppedBy: null,
@@ -183,7 +200,7 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
   }
 
   for (const entry of await listOutbox()) {
-    if (entry.state === 'failed' || entry.seq === undefined) continue;
+    if (entry.state !== 'pending' || entry.seq === undefined) continue;
     // A comment on a flight still only on this device waits for that flight, and so does
     // everything queued after it.
     const flightId = (entry.body as { flightId?: unknown } | undefined)?.flightId;
@@ -201,7 +218,12 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
     }
     const outcome = await send(deps, entry.path, {
       method: entry.method,
-      headers: { 'Content-Type': 'application/json', Accept: 'application/json' },
+      headers: {
+        'Content-Type': 'application/json',
+        Accept: 'application/json',
+        // An edit made offline names the version it started from: a newer one is not overwritten.
+        ...(entry.version !== undefined ? ifMatch(entry.version) : {}),
+      },
       body: entry.body === undefined ? undefined : JSON.stringify(entry.body),
     });
     if (outcome.kind === 'ok') {
@@ -215,6 +237,9 @@ export async function runSyncPass(deps: SyncDeps): Promise<SyncPassResult> {
       await markOutboxAttemptFailed(entry.seq, outcome.message, at);
       due(at);
       break;
+    } else if (outcome.kind === 'conflict') {
+      await markOutboxConflict(entry.seq, outcome.currentVersion, outcome.message);
+      result.conflicts += 1;
     } else {
       await markOutboxAttemptFailed(entry.seq, outcome.message, null);
       result.refused += 1;

@@ -48,6 +48,8 @@ export interface SyncSummary {
   failedFlights: number;
   pendingWrites: number;
   failedWrites: number;
+  /** Offline edits someone else overtook; they wait for the pilot to choose. */
+  conflicts: number;
   running: boolean;
   lastError: string | null;
 }
@@ -59,13 +61,15 @@ export function useSyncSummary(): SyncSummary | undefined {
   const counts = useLiveQuery(async () => {
     const db = localDb();
     // Counts through the indexes: the records themselves carry whole logs.
-    const [pendingFlights, failedFlights, pendingWrites, failedWrites] = await Promise.all([
-      db.flights.where('syncState').equals('pending').count(),
-      db.flights.where('syncState').equals('failed').count(),
-      db.outbox.where('state').equals('pending').count(),
-      db.outbox.where('state').equals('failed').count(),
-    ]);
-    return { pendingFlights, failedFlights, pendingWrites, failedWrites };
+    const [pendingFlights, failedFlights, pendingWrites, failedWrites, conflicts] =
+      await Promise.all([
+        db.flights.where('syncState').equals('pending').count(),
+        db.flights.where('syncState').equals('failed').count(),
+        db.outbox.where('state').equals('pending').count(),
+        db.outbox.where('state').equals('failed').count(),
+        db.outbox.where('state').equals('conflict').count(),
+      ]);
+    return { pendingFlights, failedFlights, pendingWrites, failedWrites, conflicts };
   }, []);
   if (!counts) return undefined;
   return { ...counts, running: state.running, lastError: state.lastError };

@@ -72,7 +72,7 @@ describe('one cache entry per aircraft', () => {
 
     // On the aircraft page the airframe is edited and saved.
     const page = renderHook(() => useUpdateAircraft(ID), { wrapper });
-    await page.result.current.mutateAsync({ airframe: after, name: 'Kite Seven' });
+    await page.result.current.mutateAsync({ patch: { airframe: after, name: 'Kite Seven' } });
     page.unmount();
 
     // The review opened again shows the new airframe at once, without asking the server again.

@@ -4,11 +4,12 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Components } from '../../../../shared/schemas/aircraft';
 import { Alert, describeError } from '../../../components/ui/alert';
+import { unlessConflict, VersionConflict } from '../../../components/ui/version-conflict';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { Caution } from '../../../components/ui/caution';
 import { optionalNumber } from '../model/airframe-form';
-import { useUpdateAircraft } from '../../../api/aircraft';
+import { useReloadAircraft, useUpdateAircraft } from '../../../api/aircraft';
 
 const PartsForm = z.object({ components: Components, notes: z.string().trim().max(4000) });
 type PartsForm = z.infer<typeof PartsForm>;
@@ -21,14 +22,18 @@ const text = {
 /** What is fitted: motors, props, ESC, battery, frame and flight controller, with free notes. */
 export function PartsEditor({
   aircraftId,
+  version,
   initial,
   readOnly,
 }: {
   aircraftId: string;
+  /** The aircraft version `initial` was read at; a save names it so a newer one is not lost. */
+  version: number;
   initial: PartsForm;
   readOnly: boolean;
 }) {
   const update = useUpdateAircraft(aircraftId);
+  const reload = useReloadAircraft(aircraftId);
   const {
     register,
     handleSubmit,
@@ -40,9 +45,18 @@ export function PartsEditor({
       noValidate
       aria-label="Parts"
       className="space-y-4"
-      onSubmit={handleSubmit((value) => update.mutate(value))}
+      onSubmit={handleSubmit((value) => update.mutate({ patch: value, version }))}
     >
-      {update.isError && <Alert tone="error">{describeError(update.error)}</Alert>}
+      {unlessConflict(update.error) && <Alert tone="error">{describeError(update.error)}</Alert>}
+      <VersionConflict
+        error={update.error}
+        what="this aircraft"
+        busy={update.isPending}
+        onReload={() => void reload().then(() => update.reset())}
+        onOverwrite={(current) =>
+          update.variables && update.mutate({ ...update.variables, version: current })
+        }
+      />
       <fieldset disabled={readOnly} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <TextField
           label="Motors"

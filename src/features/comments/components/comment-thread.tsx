@@ -68,6 +68,8 @@ function Entry({
 }) {
   const [editing, setEditing] = useState(false);
   const mine = me !== null && c.author.id === me.id;
+  const canEdit = mine && rights.canEditOwn;
+  const canDelete = (mine && rights.canDeleteOwn) || rights.canDeleteAny;
   return (
     <div>
       <p className="flex items-baseline gap-2 text-xs text-ink-faint">
@@ -91,9 +93,9 @@ function Entry({
       ) : (
         <Body c={c} />
       )}
-      {!c.deleted && !editing && (mine || rights.canDeleteAny) && rights.canComment && (
+      {!c.deleted && !editing && (canEdit || canDelete) && (
         <p className="mt-0.5 flex gap-3 text-xs">
-          {mine && (
+          {canEdit && (
             <button
               type="button"
               className="text-ink-faint hover:text-ink"
@@ -102,13 +104,15 @@ function Entry({
               Edit
             </button>
           )}
-          <button
-            type="button"
-            className="text-ink-faint hover:text-sev-act"
-            onClick={() => onDelete(c)}
-          >
-            Delete
-          </button>
+          {canDelete && (
+            <button
+              type="button"
+              className="text-ink-faint hover:text-sev-act"
+              onClick={() => onDelete(c)}
+            >
+              Delete
+            </button>
+          )}
         </p>
       )}
     </div>

@@ -4,8 +4,10 @@ import {
   useAddComment,
   useDeleteComment,
   useFlightComments,
+  useReloadComments,
   useUpdateComment,
 } from '../../../api/comments';
+import { unlessConflict, VersionConflict } from '../../../components/ui/version-conflict';
 import { useMembers } from '../../../api/members';
 import { useRequestReview } from '../../../api/reviews';
 import { commentRights } from '../model/permissions';
@@ -67,6 +69,7 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
     const author = me ?? { id: '00000000-0000-4000-8000-000000000000', name: 'me' };
     const add = useAddComment(flightId, author);
     const update = useUpdateComment(flightId, author);
+    const reload = useReloadComments(flightId);
     const remove = useDeleteComment(flightId);
     const review = useRequestReview(flightId);
     const composer = useRef<ComposerHandle>(null);
@@ -81,7 +84,7 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
     const open = (comments.data?.comments ?? []).filter(
       (c) => c.parentId === null && c.resolvedAt === null && !c.deleted,
     ).length;
-    const lastError = add.error ?? update.error ?? remove.error;
+    const lastError = add.error ?? unlessConflict(update.error) ?? remove.error;
 
     return (
       <section aria-labelledby="comments-title" className="flex flex-col gap-3">
@@ -136,11 +139,25 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
             Offline: your comment is kept and will be sent when you are back online.
           </p>
         )}
-        {lastError && (
+        {lastError instanceof Error && (
           <p role="alert" className="text-xs text-sev-act">
             Not saved: {lastError.message}
           </p>
         )}
+        {update.data?.queued && (
+          <p className="text-xs text-ink-soft">
+            Offline: your change is kept and will be sent when you are back online.
+          </p>
+        )}
+        <VersionConflict
+          error={update.error}
+          what="this comment"
+          busy={update.isPending}
+          onReload={() => void reload().then(() => update.reset())}
+          onOverwrite={(version) =>
+            update.variables && update.mutate({ ...update.variables, version })
+          }
+        />
         {comments.isError && (
           <p role="alert" className="text-sm text-sev-act">
             Comments could not be loaded: {comments.error.message}
@@ -173,9 +190,21 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
                   })
                 }
                 onEdit={(c, body, mentions) =>
-                  update.mutate({ id: c.id, patch: { body, mentions: mentions.map((m) => m.id) } })
+                  update.mutate({
+                    id: c.id,
+                    patch: { body, mentions: mentions.map((m) => m.id) },
+                    version: c.version,
+                    label: `Edit of your comment at ${c.tS.toFixed(2)} s`,
+                  })
                 }
-                onResolve={(c, resolved) => update.mutate({ id: c.id, patch: { resolved } })}
+                onResolve={(c, resolved) =>
+                  update.mutate({
+                    id: c.id,
+                    patch: { resolved },
+                    version: c.version,
+                    label: `${resolved ? 'Resolve' : 'Reopen'} the thread at ${c.tS.toFixed(2)} s`,
+                  })
+                }
                 onDelete={(c) => remove.mutate(c.id)}
               />
             </li>

@@ -5,12 +5,16 @@ export interface CommentRights {
   canComment: boolean;
   canResolve: boolean;
   canRequestReview: boolean;
+  /** Edit one's own comments: the role's right now, not authorship alone. */
+  canEditOwn: boolean;
+  canDeleteOwn: boolean;
   canDeleteAny: boolean;
 }
 
 /**
  * What the rail shows, from the shared roles table (the server checks it again): viewers read
- * only; coaches, tuners and owners resolve; a pilot resolves on their own flights.
+ * only; coaches, tuners and owners resolve; a pilot resolves on their own flights. Editing or
+ * deleting one's own comment follows the current role, so a member demoted to viewer loses it.
  */
 export function commentRights(
   role: Role | null,
@@ -25,6 +29,8 @@ export function commentRights(
       member &&
       (can(role, 'comments.resolveAny') || (ownFlight && can(role, 'comments.resolveOnOwnFlight'))),
     canRequestReview: member && can(role, 'flights.requestReview'),
-    canDeleteAny: can(role, 'comments.deleteAny'),
+    canEditOwn: member && can(role, 'comments.editOwn'),
+    canDeleteOwn: member && can(role, 'comments.deleteOwn'),
+    canDeleteAny: member && can(role, 'comments.deleteAny'),
   };
 }

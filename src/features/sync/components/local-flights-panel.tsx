@@ -9,6 +9,7 @@ import { useLiveQuery } from 'dexie-react-hooks';
 import { Button } from '../../../components/ui/button';
 import { syncEngine } from '../sync-engine';
 import { useSyncSummary } from '../use-sync';
+import { OutboxList } from './outbox-list';
 
 const stateText = (f: Pick<LocalFlight, 'syncState' | 'aircraftId' | 'lastError'>) =>
   f.syncState === 'failed'
@@ -40,13 +41,17 @@ export function LocalFlightsPanel({
         .map(({ file: _file, detail: _detail, ...rest }) => rest),
     [],
   );
+  const writes = summary ? summary.pendingWrites + summary.failedWrites + summary.conflicts : 0;
   if (!flights || flights.length === 0) {
-    if (summary && summary.pendingWrites + summary.failedWrites > 0)
+    if (writes > 0)
       return (
-        <p className="text-sm text-ink-soft">
-          <span className="num">{summary.pendingWrites + summary.failedWrites}</span> changes made
-          offline are queued for the server.
-        </p>
+        <div className="space-y-2">
+          <p className="text-sm text-ink-soft">
+            <span className="num">{writes}</span> change{writes === 1 ? '' : 's'} made offline{' '}
+            {writes === 1 ? 'is' : 'are'} queued for the server.
+          </p>
+          <OutboxList />
+        </div>
       );
     return (
       <p className="text-sm text-ink-soft">Every flight read on this device is on the server.</p>
@@ -97,6 +102,7 @@ export function LocalFlightsPanel({
           </li>
         ))}
       </ul>
+      <OutboxList />
       <Button
         size="sm"
         onClick={() => {

@@ -7,10 +7,12 @@ export function SyncIndicator() {
   const summary = useSyncSummary();
   const waiting = (summary?.pendingFlights ?? 0) + (summary?.failedFlights ?? 0);
   const writes = (summary?.pendingWrites ?? 0) + (summary?.failedWrites ?? 0);
-  const failed = (summary?.failedFlights ?? 0) + (summary?.failedWrites ?? 0);
+  const conflicts = summary?.conflicts ?? 0;
+  const failed = (summary?.failedFlights ?? 0) + (summary?.failedWrites ?? 0) + conflicts;
   const parts: string[] = [];
   if (waiting > 0) parts.push(`${waiting} flight${waiting === 1 ? '' : 's'} not synced`);
   if (writes > 0) parts.push(`${writes} change${writes === 1 ? '' : 's'} queued`);
+  if (conflicts > 0) parts.push(`${conflicts} conflict${conflicts === 1 ? '' : 's'} to resolve`);
   const text = !online
     ? `Offline${parts.length ? ' · ' + parts.join(' · ') : ''}`
     : summary?.running

@@ -1,13 +1,23 @@
 import { ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Empty, Loading } from '../../../components/ui/panel';
-import { useDeletePreset } from '../../../api/presets';
-import { usePresets } from '../../../api/presets';
+import { useState } from 'react';
+import { useDeletePreset, usePresets } from '../../../api/presets';
+import { PresetRename } from './preset-rename';
 
 /** Column maps the team saved while importing logs with unfamiliar headers. */
-export function PresetsList({ teamId, canDelete }: { teamId: string; canDelete: boolean }) {
+export function PresetsList({
+  teamId,
+  canEdit = false,
+  canDelete,
+}: {
+  teamId: string;
+  canEdit?: boolean;
+  canDelete: boolean;
+}) {
   const presets = usePresets(teamId);
   const remove = useDeletePreset(teamId);
+  const [renaming, setRenaming] = useState<string | null>(null);
   if (presets.isPending) return <Loading what="import presets" />;
   if (presets.isError) return <ErrorNote error={presets.error} />;
   if (presets.data.presets.length === 0)
@@ -30,11 +40,24 @@ export function PresetsList({ teamId, canDelete }: { teamId: string; canDelete: 
                   <span className="font-medium">{p.name}</span>
                   <span className="num text-xs text-ink-faint">{columns.length} columns</span>
                   <span className="text-xs text-ink-faint">by {p.createdBy.name}</span>
+                  {canEdit && (
+                    <Button
+                      size="sm"
+                      className="ml-auto"
+                      aria-label={`Rename ${p.name}`}
+                      onClick={(e) => {
+                        e.preventDefault();
+                        setRenaming(p.id);
+                      }}
+                    >
+                      Rename
+                    </Button>
+                  )}
                   {canDelete && (
                     <Button
                       size="sm"
                       tone="danger"
-                      className="ml-auto"
+                      className={canEdit ? '' : 'ml-auto'}
                       disabled={remove.isPending}
                       onClick={(e) => {
                         e.preventDefault();
@@ -64,6 +87,14 @@ export function PresetsList({ teamId, canDelete }: { teamId: string; canDelete: 
                   </tbody>
                 </table>
               </details>
+              {renaming === p.id && (
+                <PresetRename
+                  key={p.version}
+                  teamId={teamId}
+                  preset={p}
+                  onDone={() => setRenaming(null)}
+                />
+              )}
             </li>
           );
         })}

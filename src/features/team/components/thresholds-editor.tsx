@@ -8,8 +8,9 @@ import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
-import { useSaveThresholds } from '../../../api/thresholds';
-import { useThresholds } from '../../../api/thresholds';
+import { useReloadThresholds, useSaveThresholds, useThresholds } from '../../../api/thresholds';
+import { VersionConflict } from '../../../components/ui/version-conflict';
+import { isVersionConflict } from '../../../lib/api-fetch';
 
 type Key = keyof Thresholds;
 interface Row {
@@ -133,6 +134,7 @@ export function ThresholdsEditor({ teamId, canEdit }: { teamId: string; canEdit:
       values={current.data.thresholds}
       isDefault={current.data.isDefault}
       updatedAt={current.data.updatedAt}
+      version={current.data.version}
     />
   );
 }
@@ -143,14 +145,18 @@ function ThresholdsForm_({
   values,
   isDefault,
   updatedAt,
+  version,
 }: {
   teamId: string;
   canEdit: boolean;
   values: Thresholds;
   isDefault: boolean;
   updatedAt: string | null;
+  /** The version `values` were read at; a save names it so a newer set is not overwritten. */
+  version: number;
 }) {
   const save = useSaveThresholds(teamId);
+  const reload = useReloadThresholds(teamId);
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
@@ -166,9 +172,17 @@ function ThresholdsForm_({
       aria-label="Thresholds"
       onSubmit={handleSubmit((input) => {
         setFormError(null);
-        save.mutate(input, {
-          onError: (e) => setFormError(applyServerError(e, setError, Object.keys(values) as Key[])),
-        });
+        save.mutate(
+          { input, version },
+          {
+            onError: (e) =>
+              setFormError(
+                isVersionConflict(e)
+                  ? null
+                  : applyServerError(e, setError, Object.keys(values) as Key[]),
+              ),
+          },
+        );
       })}
       className="space-y-4"
     >
@@ -179,6 +193,15 @@ function ThresholdsForm_({
         New limits apply to flights analysed from now on; a flight keeps the verdict it was given.
       </p>
       {formError && <Alert tone="error">{formError}</Alert>}
+      <VersionConflict
+        error={save.error}
+        what="the thresholds"
+        busy={save.isPending}
+        onReload={() => void reload().then(() => save.reset())}
+        onOverwrite={(current) =>
+          save.variables && save.mutate({ ...save.variables, version: current })
+        }
+      />
       <fieldset disabled={!canEdit} className="grid gap-5 md:grid-cols-2">
         {groups.map((g) => (
           <div key={g.title}>

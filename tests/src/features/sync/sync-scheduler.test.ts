@@ -9,6 +9,7 @@ const idle: SyncPassResult = {
   flightsSynced: 0,
   writesSent: 0,
   refused: 0,
+  conflicts: 0,
   deferred: 0,
   waiting: 0,
   stoppedBy: null,

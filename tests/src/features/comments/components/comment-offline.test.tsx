@@ -11,14 +11,17 @@ const teamId = '0b7e6d1a-2f43-4c1e-9d7a-5a3c2b1e0f01';
 const flightId = '7d2f1c3b-4e5a-4b6c-8d7e-9f0a1b2c3d4e';
 const pilot = { id: '11111111-1111-4111-8111-111111111111', name: 'Rosa Kite' };
 
+let stored: unknown[] = [];
+
 beforeEach(() => {
+  stored = [];
   // The list and members came in while online; the comment is written after the link dropped.
   vi.stubGlobal(
     'fetch',
     vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
       const url = String(input);
-      if ((init?.method ?? 'GET') === 'PUT') throw new TypeError('Failed to fetch');
-      const body = url.endsWith('/comments') ? { comments: [] } : { members: [] };
+      if ((init?.method ?? 'GET') !== 'GET') throw new TypeError('Failed to fetch');
+      const body = url.endsWith('/comments') ? { comments: stored } : { members: [] };
       return new Response(JSON.stringify(body), {
         status: 200,
         headers: { 'Content-Type': 'application/json' },
@@ -70,5 +73,60 @@ describe('comment written offline', () => {
       body: { flightId, tS: 7.5, body: 'Props chipped on landing', mentions: [] },
     });
     expect(entry!.path).toBe(`/api/comments/${entry!.id}`);
+  });
+
+  it('queues an edit of a stored comment with the version it started from', async () => {
+    stored = [
+      {
+        id: 'aaaaaaaa-0000-4000-8000-000000000001',
+        flightId,
+        parentId: null,
+        tS: 7.5,
+        channel: null,
+        body: 'Hover drifts left here.',
+        deleted: false,
+        author: pilot,
+        mentions: [],
+        resolvedAt: null,
+        resolvedBy: null,
+        editedAt: null,
+        createdAt: '2026-05-02T10:00:00.000Z',
+        version: 4,
+      },
+    ];
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    render(
+      <QueryClientProvider client={client}>
+        <CommentsRail
+          flightId={flightId}
+          teamId={teamId}
+          me={pilot}
+          role="pilot"
+          pilotId={pilot.id}
+          cursorT={0}
+          onSeek={vi.fn()}
+          selectedId={null}
+          onSelect={vi.fn()}
+        />
+      </QueryClientProvider>,
+    );
+    const user = userEvent.setup();
+    await screen.findByText('Hover drifts left here.');
+    await user.click(screen.getByRole('button', { name: 'Edit' }));
+    const box = screen.getByRole('combobox', { name: 'Edit comment' });
+    await user.clear(box);
+    await user.type(box, 'Drifts left: CG aft');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+
+    expect(await screen.findByText(/Offline: your change is kept/)).toBeTruthy();
+    expect(screen.getByText('Drifts left: CG aft')).toBeTruthy();
+    const [entry] = await listOutbox();
+    expect(entry).toMatchObject({
+      method: 'PATCH',
+      path: '/api/comments/aaaaaaaa-0000-4000-8000-000000000001',
+      version: 4,
+      label: 'Edit of your comment at 7.50 s',
+      body: { body: 'Drifts left: CG aft', mentions: [] },
+    });
   });
 });

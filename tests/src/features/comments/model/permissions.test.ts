@@ -18,6 +18,8 @@ describe('comment rights in the rail', () => {
       canComment: false,
       canResolve: false,
       canRequestReview: false,
+      canEditOwn: false,
+      canDeleteOwn: false,
       canDeleteAny: false,
     });
   });
@@ -27,6 +29,8 @@ describe('comment rights in the rail', () => {
       canComment: false,
       canResolve: false,
       canRequestReview: false,
+      canEditOwn: false,
+      canDeleteOwn: false,
       canDeleteAny: false,
     });
     expect(commentRights('owner', null, null).canComment).toBe(false);
@@ -37,5 +41,15 @@ describe('comment rights in the rail', () => {
     expect(commentRights('pilot', 'u1', 'u1').canRequestReview).toBe(true);
     expect(commentRights('tuner', 'u1', 'u2').canDeleteAny).toBe(false);
     expect(commentRights('owner', 'u1', 'u2').canDeleteAny).toBe(true);
+  });
+
+  it('lets own comments be edited and deleted only while the role still comments', () => {
+    for (const role of ['owner', 'tuner', 'pilot', 'coach'] as const) {
+      const r = commentRights(role, 'u1', 'u2');
+      expect([role, r.canEditOwn, r.canDeleteOwn]).toEqual([role, true, true]);
+    }
+    // A member demoted to viewer keeps authorship but not the right.
+    const viewer = commentRights('viewer', 'u1', 'u2');
+    expect([viewer.canEditOwn, viewer.canDeleteOwn]).toEqual([false, false]);
   });
 });

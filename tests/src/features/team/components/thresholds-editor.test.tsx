@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { cleanup, screen, waitFor } from '@testing-library/react';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { defaultThresholds } from '../../../../../shared/schemas/thresholds';
@@ -96,5 +96,105 @@ describe('thresholds editor', () => {
     await screen.findByLabelText('Motor above expectation: watch (%)');
     expect((screen.getByRole('group') as HTMLFieldSetElement).disabled).toBe(true);
     expect(screen.queryByRole('button', { name: 'Save thresholds' })).toBeNull();
+  });
+
+  it('names the version it started from and, when another tuner saved first, offers reload or overwrite', async () => {
+    // The server holds version 3 (another tuner saved twice) while this form shows version 1.
+    let held = { ...defaultThresholds, cellWatchV: 3.6 };
+    let version = 3;
+    let shownVersion = 1;
+    const puts: { ifMatch: string | null; body: typeof held }[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: RequestInfo | URL, init?: RequestInit) => {
+        const answer = (v: number, t: typeof held) =>
+          jsonResponse(200, { thresholds: t, isDefault: false, updatedAt: null, version: v });
+        if ((init?.method ?? 'GET') === 'GET')
+          return shownVersion === 1 ? answer(1, defaultThresholds) : answer(version, held);
+        const ifMatch = new Headers(init?.headers).get('If-Match');
+        const body = JSON.parse(String(init?.body)) as typeof held;
+        puts.push({ ifMatch, body });
+        if (ifMatch !== `"${version}"`)
+          return jsonResponse(412, {
+            error: { code: 'version_conflict', message: 'changed', currentVersion: version },
+          });
+        held = body;
+        version += 1;
+        return answer(version, held);
+      }),
+    );
+    const user = userEvent.setup();
+    renderWithQuery(<ThresholdsEditor teamId={TEAM} canEdit />);
+    const watch = await screen.findByLabelText('Motor above expectation: watch (%)');
+    await user.clear(watch);
+    await user.type(watch, String(defaultThresholds.motorWatchPct + 1));
+    await user.click(screen.getByRole('button', { name: 'Save thresholds' }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('Changed by someone else since you opened the thresholds');
+    expect(puts[0]!.ifMatch).toBe('"1"');
+    expect(held.cellWatchV).toBe(3.6);
+
+    // Reload takes their set and their version into the form.
+    shownVersion = version;
+    await user.click(within(alert).getByRole('button', { name: 'Reload' }));
+    await waitFor(() =>
+      expect(
+        (screen.getByLabelText('Lowest cell under load: watch (V)') as HTMLInputElement).value,
+      ).toBe('3.6'),
+    );
+    await waitFor(() => expect(screen.queryByRole('alert')).toBeNull());
+
+    // A change saved now names the version it was reloaded at, and is stored.
+    const again = screen.getByLabelText('Motor above expectation: watch (%)');
+    await user.clear(again);
+    await user.type(again, String(defaultThresholds.motorWatchPct + 2));
+    await user.click(screen.getByRole('button', { name: 'Save thresholds' }));
+    await waitFor(() => expect(puts).toHaveLength(2));
+    expect(puts[1]!.ifMatch).toBe('"3"');
+    expect(held).toMatchObject({
+      cellWatchV: 3.6,
+      motorWatchPct: defaultThresholds.motorWatchPct + 2,
+    });
+  });
+
+  it('overwrites on request against the version the server holds now', async () => {
+    let version = 5;
+    const puts: (string | null)[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: RequestInfo | URL, init?: RequestInit) => {
+        if ((init?.method ?? 'GET') === 'GET')
+          return jsonResponse(200, {
+            thresholds: defaultThresholds,
+            isDefault: true,
+            updatedAt: null,
+            version: 2,
+          });
+        const ifMatch = new Headers(init?.headers).get('If-Match');
+        puts.push(ifMatch);
+        if (ifMatch !== `"${version}"`)
+          return jsonResponse(412, {
+            error: { code: 'version_conflict', message: 'changed', currentVersion: version },
+          });
+        version += 1;
+        return jsonResponse(200, {
+          thresholds: JSON.parse(String(init?.body)),
+          isDefault: false,
+          updatedAt: '2026-04-12T09:30:00.000Z',
+          version,
+        });
+      }),
+    );
+    const user = userEvent.setup();
+    renderWithQuery(<ThresholdsEditor teamId={TEAM} canEdit />);
+    const watch = await screen.findByLabelText('Motor above expectation: watch (%)');
+    await user.clear(watch);
+    await user.type(watch, String(defaultThresholds.motorWatchPct + 1));
+    await user.click(screen.getByRole('button', { name: 'Save thresholds' }));
+    const alert = await screen.findByRole('alert');
+    await user.click(within(alert).getByRole('button', { name: 'Overwrite' }));
+    await waitFor(() => expect(puts).toEqual(['"2"', '"5"']));
+    expect(version).toBe(6);
   });
 });
