@@ -7,12 +7,14 @@ import {
   signUp,
   uniqueEmail,
 } from './helpers/accounts';
+import { collectConsoleProblems } from './helpers/console';
 
 test('a log imported offline is kept on the device and synced when the network is back', async ({
   page,
   context,
 }) => {
   test.setTimeout(120_000);
+  const problems = collectConsoleProblems(page);
   await signUp(page, { name: 'Kit Calloway', email: uniqueEmail('field') });
   await createTeam(page, 'Field crew');
   await addAircraftFromPreset(page, { name: 'Kite', preset: 'quad-x', armMm: 110 });
@@ -56,8 +58,20 @@ test('a log imported offline is kept on the device and synced when the network i
   await expect(
     page.getByLabel('Aircraft').locator('option', { hasText: 'Kite · 4 motors' }),
   ).toHaveCount(1);
+  // No link disappears offline, the inbox's included.
+  const main = page.getByRole('navigation', { name: 'Main' });
+  for (const name of ['Fleet', 'Import', 'Team', 'Inbox'])
+    await expect(main.getByRole('link', { name })).toBeVisible();
+  // The fleet and the team page show what this device kept, never an error.
+  await main.getByRole('link', { name: 'Fleet' }).click();
+  await expect(page.getByRole('list', { name: 'Aircraft' })).toContainText('Kite');
+  await expect(page.getByRole('list', { name: 'Flights on this device' })).toContainText('.csv');
+  await expect(page.getByRole('alert')).toHaveCount(0);
+  await main.getByRole('link', { name: 'Team' }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+  await expect(page.getByRole('alert')).toHaveCount(0);
   // Back on the review, which follows the sync state live once the network returns.
-  await page.goBack();
+  await page.goto(`/flights/${flightId}`);
   await expect(page.getByRole('region', { name: 'Verdict' })).toBeVisible();
 
   // Back online: the sync runner sends it without anyone asking.
@@ -79,4 +93,8 @@ test('a log imported offline is kept on the device and synced when the network i
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Fleet' }).click();
   await expect(page.getByRole('table', { name: 'Flights' })).toContainText('Kite');
   await expect(page.getByText('Every flight read on this device is on the server.')).toBeVisible();
+
+  // Normal use, offline included, leaves nothing in the console: no failing request repeated
+  // while the network is away, no 401 for "who is signed in".
+  expect(problems).toEqual([]);
 });

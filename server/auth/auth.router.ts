@@ -9,6 +9,7 @@ import {
   UpdateMeInput,
   type MeResponse,
   type OkResponse,
+  type SessionResponse,
 } from '../../shared/schemas/auth';
 import type { Config } from '../config';
 import { authRateLimit, signInRateLimit } from '../http/rate-limit';
@@ -54,8 +55,11 @@ export function authRouter({ auth, invites, rateLimits }: Services, config: Conf
     res.json(body);
   });
 
+  // Nobody signed in is an ordinary answer here, not a 401: the app asks on every start, and a
+  // signed-out visit should leave no error in the browser's console.
   router.get(paths.me, async (req, res) => {
-    res.set('cache-control', 'no-store').json(await me(requireUser(req).id));
+    const body: SessionResponse = req.auth ? await me(req.auth.user.id) : { user: null };
+    res.set('cache-control', 'no-store').json(body);
   });
 
   router.patch(paths.me, async (req, res) => {

@@ -73,6 +73,10 @@ export type Me = z.infer<typeof Me>;
 export const MeResponse = z.object({ user: Me });
 export type MeResponse = z.infer<typeof MeResponse>;
 
+/** `GET /api/auth/me`: who is signed in on this device; `user` is null for nobody. */
+export const SessionResponse = z.object({ user: Me.nullable() });
+export type SessionResponse = z.infer<typeof SessionResponse>;
+
 /** Answer of routes that only acknowledge (reset request, sign-out). */
 export const OkResponse = z.object({ ok: z.literal(true), message: z.string().optional() });
 export type OkResponse = z.infer<typeof OkResponse>;

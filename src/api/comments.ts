@@ -103,6 +103,8 @@ function useOptimistic(flightId: string) {
 export function useAddComment(flightId: string, author: UserRef) {
   const o = useOptimistic(flightId);
   return useMutation({
+    // Offline it must run, to reach the outbox; a paused mutation is lost with the tab.
+    networkMode: 'always',
     mutationFn: async (input: NewComment) => {
       const body = {
         flightId: input.flightId,
@@ -142,6 +144,7 @@ export interface CommentEdit {
 export function useUpdateComment(flightId: string, me: UserRef) {
   const o = useOptimistic(flightId);
   return useMutation({
+    networkMode: 'always',
     mutationFn: async ({ id, patch, version, label }: CommentEdit) => {
       try {
         return { comment: await patchComment(id, patch, version), queued: false };

@@ -78,6 +78,12 @@ async function fetchReviewFlight(id: string): Promise<ReviewFlight> {
       reviewState: null,
     };
   }
+  // Not kept here and no network: say so rather than send a request bound to fail. The query
+  // is asked again when the network is back.
+  if (typeof navigator !== 'undefined' && navigator.onLine === false)
+    throw new FlightNotFoundError(
+      'This flight is not kept on this device; it opens from your team when the network is back.',
+    );
   try {
     const stored = await apiFetch(flightPath(id), FlightDetail);
     if (!stored.detail)

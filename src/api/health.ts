@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { HealthResponse } from '../../shared/api/health';
 import { pathTo } from '../../shared/api/paths';
 import { apiFetch } from '../lib/api-fetch';
+import type { ServerAnswer } from '../lib/header-status';
 
 /** Whether our server answers, asked every half minute for the header. */
 export const healthKeys = {
@@ -14,9 +15,17 @@ export const healthQueries = {
     queryOptions({
       queryKey: healthKeys.health(),
       queryFn: () => apiFetch(pathTo('health'), HealthResponse),
-      refetchInterval: 30_000,
+      // Not answering: look again less often, so a dead server is not asked every half minute.
+      refetchInterval: (q) => (q.state.status === 'error' ? 120_000 : 30_000),
       retry: false,
     }),
 };
 
 export const useHealth = () => useQuery(healthQueries.health());
+
+/** Our server's answer for the header's status model (src/lib/header-status.ts). */
+export function useServerAnswer(): ServerAnswer {
+  const health = useHealth();
+  if (health.isPending) return 'checking';
+  return health.data?.ok === true && !health.isError ? 'answering' : 'not-answering';
+}

@@ -16,6 +16,8 @@ async function fetchDevMail() {
 export const mailKeys = {
   all: ['dev-mail'] as const,
   inbox: () => [...mailKeys.all, 'inbox'] as const,
+  /** Whether this server has an inbox at all: kept across reloads, so offline the link stays. */
+  available: () => [...mailKeys.all, 'available'] as const,
 };
 
 export const mailQueries = {
@@ -30,8 +32,15 @@ export const mailQueries = {
 
 export const useDevMail = () => useQuery(mailQueries.inbox());
 
-/** Whether this server has a dev inbox at all; asked once, for the navigation. */
+/**
+ * Whether this server has a dev inbox at all, for the navigation: asked once, and remembered
+ * (src/app/query-persistence.ts) so the link does not disappear while the network is away.
+ */
 export const useDevMailAvailable = () => {
-  const inbox = useQuery({ ...mailQueries.inbox(), refetchInterval: false, staleTime: Infinity });
-  return Boolean(inbox.data);
+  const available = useQuery({
+    queryKey: mailKeys.available(),
+    queryFn: async () => (await fetchDevMail()) !== null,
+    staleTime: 60 * 60 * 1000,
+  });
+  return available.data === true;
 };

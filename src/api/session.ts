@@ -5,6 +5,7 @@ import {
   Me,
   MeResponse,
   OkResponse,
+  SessionResponse,
   type ChangePasswordInput,
   type UpdateMeInput,
 } from '../../shared/schemas/auth';
@@ -16,10 +17,10 @@ export const sessionKeys = {
   me: () => [...sessionKeys.all, 'me'] as const,
 };
 
-/** The signed-in user with their teams, or null when nobody is signed in. */
+/** The signed-in user with their teams, or null when nobody is signed in (a 200, or a 401 from an older server). */
 async function fetchMe(): Promise<Me | null> {
   try {
-    return (await apiFetch(pathTo('me'), MeResponse)).user;
+    return (await apiFetch(pathTo('me'), SessionResponse)).user;
   } catch (error) {
     if (error instanceof ApiError && error.status === 401) return null;
     throw error;

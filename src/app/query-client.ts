@@ -1,6 +1,11 @@
-import { QueryClient } from '@tanstack/react-query';
+import { onlineManager, QueryClient } from '@tanstack/react-query';
 import { ApiError } from '../lib/api-fetch';
 import { persistQueries, restoreQueries } from './query-persistence';
+
+// TanStack Query assumes a network at start and only follows the online/offline events after;
+// a page opened with no network (a reload at the field) must start paused, not fire requests
+// bound to fail. Queries that read this device only say networkMode 'always' (src/api/local.ts).
+if (typeof navigator !== 'undefined') onlineManager.setOnline(navigator.onLine);
 
 export const queryClient = new QueryClient({
   defaultOptions: {

@@ -1,18 +1,35 @@
 import { dehydrate, hydrate, type QueryClient } from '@tanstack/react-query';
 import { aircraftKeys } from '../api/aircraft';
+import { flightKeys } from '../api/flight-keys';
+import { mailKeys } from '../api/mail';
 import { presetKeys } from '../api/presets';
+import { teamKeys } from '../api/teams';
 
 /**
- * Keeps the small team lists (aircraft, import presets) across reloads, so a pilot who opens
- * the app at the field with no network can still pick an aircraft for an import. Flights and
- * reviews are not kept here: flights read on this device live in IndexedDB.
+ * Keeps the team's lists across reloads (aircraft, import presets, the fleet's flight lists,
+ * members, invites and thresholds), so a pilot who opens the app at the field with no network
+ * sees what the team had when last online, and can still pick an aircraft for an import. One
+ * flight's review is not kept here: flights read on this device live in IndexedDB.
  */
 const KEY = 'hoverprint.query-cache.v1';
-/** Kept whole, or (aircraft) only the lists: details (service log, trends…) are read fresh. */
-const kept: readonly (readonly string[])[] = [presetKeys.all, aircraftKeys.lists()];
+/** Key patterns kept; `null` stands for any one part (a team id). */
+const kept: readonly (readonly (string | null)[])[] = [
+  presetKeys.all,
+  // Only the lists: an aircraft's details (service log, trends…) are read fresh.
+  aircraftKeys.lists(),
+  flightKeys.lists(),
+  [...teamKeys.all, 'detail', null, 'members'],
+  [...teamKeys.all, 'detail', null, 'invites'],
+  [...teamKeys.all, 'detail', null, 'thresholds'],
+  mailKeys.available(),
+];
 
 export function isKept(queryKey: readonly unknown[]): boolean {
-  return kept.some((prefix) => prefix.every((part, i) => queryKey[i] === part));
+  return kept.some(
+    (pattern) =>
+      queryKey.length >= pattern.length &&
+      pattern.every((part, i) => part === null || queryKey[i] === part),
+  );
 }
 
 export function restoreQueries(client: QueryClient, storage: Storage = localStorage): void {

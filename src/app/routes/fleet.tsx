@@ -16,7 +16,11 @@ import { LocalFlightsPanel } from '../../features/sync/components/local-flights-
 import { can } from '../../../shared/auth/permissions';
 import { NoTeam } from './no-team';
 
-/** What the fleet says for a team list it has never fetched, while there is no network. */
+/**
+ * What the fleet says for a team list it has never fetched, while there is no network. A list
+ * fetched before (kept across reloads, src/app/query-persistence.ts) is shown as it was, also
+ * when asking again fails: the header says the server is out of reach.
+ */
 const offlineNote =
   'Offline: the team’s list opens when the network is back. Flights on this device are listed under “On this device”.';
 
@@ -69,12 +73,12 @@ function TeamFleet({
         }
       />
       <div className="space-y-6">
-        {aircraft.isPending && aircraft.fetchStatus === 'paused' ? (
+        {!aircraft.data && aircraft.fetchStatus === 'paused' ? (
           <Empty>{offlineNote}</Empty>
-        ) : aircraft.isPending ? (
-          <Loading what="aircraft" />
-        ) : aircraft.isError ? (
+        ) : !aircraft.data && aircraft.isError ? (
           <ErrorNote error={aircraft.error} />
+        ) : !aircraft.data ? (
+          <Loading what="aircraft" />
         ) : aircraft.data.aircraft.length === 0 ? (
           <Empty>
             No aircraft yet.{' '}
@@ -92,12 +96,12 @@ function TeamFleet({
 
         <div className="grid grid-cols-[minmax(0,1fr)] gap-4 md:grid-cols-2">
           <Panel title="Awaiting review">
-            {awaiting.isPending && awaiting.fetchStatus === 'paused' ? (
+            {!awaiting.data && awaiting.fetchStatus === 'paused' ? (
               <p className="text-sm text-ink-soft">{offlineNote}</p>
-            ) : awaiting.isPending ? (
-              <Loading what="flights awaiting review" />
-            ) : awaiting.isError ? (
+            ) : !awaiting.data && awaiting.isError ? (
               <ErrorNote error={awaiting.error} />
+            ) : !awaiting.data ? (
+              <Loading what="flights awaiting review" />
             ) : awaiting.data.flights.length === 0 ? (
               <p className="text-sm text-ink-soft">Nobody has asked for a review.</p>
             ) : (
@@ -133,12 +137,12 @@ function TeamFleet({
               pilots={pilotOptions}
               onChange={setFilter}
             />
-            {flights.isPending && flights.fetchStatus === 'paused' ? (
+            {!flights.data && flights.fetchStatus === 'paused' ? (
               <Empty>{offlineNote}</Empty>
-            ) : flights.isPending ? (
-              <Loading what="flights" />
-            ) : flights.isError ? (
+            ) : !flights.data && flights.isError ? (
               <ErrorNote error={flights.error} />
+            ) : !flights.data ? (
+              <Loading what="flights" />
             ) : rows.length === 0 ? (
               <Empty>
                 No flights match.{' '}

@@ -1,3 +1,4 @@
+import { NoDataYet } from '../../../components/ui/no-data-yet';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
@@ -7,7 +8,6 @@ import { Role } from '../../../../shared/schemas/common';
 import { Alert, ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
-import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
 import { roleLabels } from '../../../lib/role-labels';
 import { useCreateInvite, useWithdrawInvite } from '../../../api/invites';
@@ -87,10 +87,8 @@ export function InvitesPanel({ teamId }: { teamId: string }) {
         </Alert>
       )}
       {withdraw.isError && <ErrorNote error={withdraw.error} />}
-      {invites.isPending ? (
-        <Loading what="invitations" />
-      ) : invites.isError ? (
-        <ErrorNote error={invites.error} />
+      {!invites.data ? (
+        <NoDataYet query={invites} what="invitations" />
       ) : invites.data.invites.length > 0 ? (
         <ScrollX label="Invitations table">
           <table className="w-full text-sm" aria-label="Invitations">

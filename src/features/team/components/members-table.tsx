@@ -1,8 +1,8 @@
+import { NoDataYet } from '../../../components/ui/no-data-yet';
 import type { Role } from '../../../../shared/schemas/common';
 import { Role as RoleSchema } from '../../../../shared/schemas/common';
 import { ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { Loading } from '../../../components/ui/panel';
 import { roleDescriptions, roleLabels } from '../../../lib/role-labels';
 import { useChangeRole, useRemoveMember } from '../../../api/members';
 import { useMembers } from '../../../api/members';
@@ -21,8 +21,7 @@ export function MembersTable({
   const members = useMembers(teamId);
   const changeRole = useChangeRole(teamId);
   const remove = useRemoveMember(teamId);
-  if (members.isPending) return <Loading what="members" />;
-  if (members.isError) return <ErrorNote error={members.error} />;
+  if (!members.data) return <NoDataYet query={members} what="members" />;
   return (
     <div className="space-y-2">
       {changeRole.isError && <ErrorNote error={changeRole.error} />}

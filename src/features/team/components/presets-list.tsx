@@ -1,6 +1,7 @@
+import { NoDataYet } from '../../../components/ui/no-data-yet';
 import { ErrorNote } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { Empty, Loading } from '../../../components/ui/panel';
+import { Empty } from '../../../components/ui/panel';
 import { useState } from 'react';
 import { useDeletePreset, usePresets } from '../../../api/presets';
 import { PresetRename } from './preset-rename';
@@ -18,8 +19,7 @@ export function PresetsList({
   const presets = usePresets(teamId);
   const remove = useDeletePreset(teamId);
   const [renaming, setRenaming] = useState<string | null>(null);
-  if (presets.isPending) return <Loading what="import presets" />;
-  if (presets.isError) return <ErrorNote error={presets.error} />;
+  if (!presets.data) return <NoDataYet query={presets} what="import presets" />;
   if (presets.data.presets.length === 0)
     return (
       <Empty>

@@ -1,12 +1,12 @@
+import { NoDataYet } from '../../../components/ui/no-data-yet';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { plainMessages } from '../../../lib/plain-messages';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { defaultThresholds, Thresholds } from '../../../../shared/schemas/thresholds';
-import { Alert, ErrorNote } from '../../../components/ui/alert';
+import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
-import { Loading } from '../../../components/ui/panel';
 import { applyServerError } from '../../../lib/form-errors';
 import { useReloadThresholds, useSaveThresholds, useThresholds } from '../../../api/thresholds';
 import { VersionConflict } from '../../../components/ui/version-conflict';
@@ -125,8 +125,7 @@ const num = { setValueAs: (v: unknown) => (v === '' ? undefined : Number(v)) };
 /** The limits the verdict judges against, for this team; tuners and the owner change them. */
 export function ThresholdsEditor({ teamId, canEdit }: { teamId: string; canEdit: boolean }) {
   const current = useThresholds(teamId);
-  if (current.isPending) return <Loading what="thresholds" />;
-  if (current.isError) return <ErrorNote error={current.error} />;
+  if (!current.data) return <NoDataYet query={current} what="thresholds" />;
   return (
     <ThresholdsForm_
       teamId={teamId}
