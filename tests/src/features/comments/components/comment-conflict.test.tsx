@@ -106,7 +106,7 @@ function renderRail(role: Role, me = pilot) {
 async function editTo(user: ReturnType<typeof userEvent.setup>, text: string) {
   await screen.findByText('Hover drifts left here.');
   await user.click(screen.getByRole('button', { name: 'Edit' }));
-  const box = screen.getByRole('combobox', { name: 'Edit comment' });
+  const box = screen.getByRole('textbox', { name: 'Edit comment' });
   await user.clear(box);
   await user.type(box, text);
   await user.click(screen.getByRole('button', { name: 'Save' }));

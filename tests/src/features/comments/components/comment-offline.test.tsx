@@ -113,7 +113,7 @@ describe('comment written offline', () => {
     const user = userEvent.setup();
     await screen.findByText('Hover drifts left here.');
     await user.click(screen.getByRole('button', { name: 'Edit' }));
-    const box = screen.getByRole('combobox', { name: 'Edit comment' });
+    const box = screen.getByRole('textbox', { name: 'Edit comment' });
     await user.clear(box);
     await user.type(box, 'Drifts left: CG aft');
     await user.click(screen.getByRole('button', { name: 'Save' }));
