@@ -189,6 +189,8 @@ interface Paced {
   max: number;
   sent: number;
   failed: number;
+  /** Why requests failed: HTTP status or socket error code, with counts. */
+  reasons: Record<string, number>;
 }
 
 /**
@@ -208,12 +210,16 @@ async function paced(
   const latency = new Float64Array(total);
   let done = 0;
   let failed = 0;
+  const reasons: Record<string, number> = {};
   let sent = 0;
   const start = performance.now() + 20;
   await new Promise<void>((resolve) => {
-    const finish = (k: number, due: number, ok: boolean) => {
+    const finish = (k: number, due: number, ok: boolean, reason: string) => {
       latency[k] = performance.now() - due;
-      if (!ok) failed++;
+      if (!ok) {
+        failed++;
+        reasons[reason] = (reasons[reason] ?? 0) + 1;
+      }
       if (++done === total) resolve();
     };
     const fire = () => {
@@ -235,10 +241,13 @@ async function paced(
           },
           (res) => {
             res.resume();
-            res.once('end', () => finish(k, due, (res.statusCode ?? 500) < 300));
+            const status = res.statusCode ?? 500;
+            res.once('end', () => finish(k, due, status < 300, String(status)));
           },
         );
-        req.once('error', () => finish(k, due, false));
+        req.once('error', (err: NodeJS.ErrnoException) =>
+          finish(k, due, false, err.code ?? 'error'),
+        );
         req.end(r.body);
       }
       if (sent < total) setTimeout(fire, Math.max(0, start + (sent * 1000) / rate - now - 0.5));
@@ -249,7 +258,7 @@ async function paced(
   const sorted = latency.sort();
   const at = (q: number) =>
     Math.round(sorted[Math.min(total - 1, Math.floor(q * total))]! * 10) / 10;
-  return { p50: at(0.5), p99: at(0.99), max: at(1), sent: total, failed };
+  return { p50: at(0.5), p99: at(0.99), max: at(1), sent: total, failed, reasons };
 }
 
 function check(name: string, r: Result) {
@@ -332,7 +341,10 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
       const r = writeRequest({});
       return { method: r.method!, path: r.path!, body: r.body! };
     });
-    if (writesPaced.failed) throw new Error(`paced comment writes: ${writesPaced.failed} failed`);
+    if (writesPaced.failed)
+      throw new Error(
+        `paced comment writes: ${writesPaced.failed} failed (${JSON.stringify(writesPaced.reasons)})`,
+      );
 
     const pages = await cursors(server.url, cookie, server.teamId);
     let p = 0;
@@ -362,7 +374,10 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
       const r = listRequest({});
       return { method: r.method!, path: r.path! };
     });
-    if (listPaced.failed) throw new Error(`paced flight list: ${listPaced.failed} failed`);
+    if (listPaced.failed)
+      throw new Error(
+        `paced flight list: ${listPaced.failed} failed (${JSON.stringify(listPaced.reasons)})`,
+      );
 
     const perS = (r: Result) => r['2xx'] / r.duration;
     const figures = {
