@@ -37,24 +37,29 @@ afterEach(async () => {
   await closeLocalDb();
 });
 
+/** The rail of a pilot's own flight, with the cursor at `cursorT`. */
+function renderRail(cursorT: number) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  render(
+    <QueryClientProvider client={client}>
+      <CommentsRail
+        flightId={flightId}
+        teamId={teamId}
+        me={pilot}
+        role="pilot"
+        pilotId={pilot.id}
+        cursorT={cursorT}
+        onSeek={vi.fn()}
+        selectedId={null}
+        onSelect={vi.fn()}
+      />
+    </QueryClientProvider>,
+  );
+}
+
 describe('comment written offline', () => {
   it('stays in the thread and waits in the outbox with its own id and moment', async () => {
-    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(
-      <QueryClientProvider client={client}>
-        <CommentsRail
-          flightId={flightId}
-          teamId={teamId}
-          me={pilot}
-          role="pilot"
-          pilotId={pilot.id}
-          cursorT={7.5}
-          onSeek={vi.fn()}
-          selectedId={null}
-          onSelect={vi.fn()}
-        />
-      </QueryClientProvider>,
-    );
+    renderRail(7.5);
     const user = userEvent.setup();
     await screen.findByText('No comments yet.');
     await user.type(
@@ -94,22 +99,7 @@ describe('comment written offline', () => {
         version: 4,
       },
     ];
-    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(
-      <QueryClientProvider client={client}>
-        <CommentsRail
-          flightId={flightId}
-          teamId={teamId}
-          me={pilot}
-          role="pilot"
-          pilotId={pilot.id}
-          cursorT={0}
-          onSeek={vi.fn()}
-          selectedId={null}
-          onSelect={vi.fn()}
-        />
-      </QueryClientProvider>,
-    );
+    renderRail(0);
     const user = userEvent.setup();
     await screen.findByText('Hover drifts left here.');
     await user.click(screen.getByRole('button', { name: 'Edit' }));
