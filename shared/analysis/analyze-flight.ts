@@ -257,6 +257,7 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
             db: round(p.db, 2),
             label: p.label,
             ...(p.motor ? { motor: p.motor } : {}),
+            ...(p.candidates?.length ? { candidates: p.candidates } : {}),
             ...(p.aliasOfHz !== undefined ? { aliasOfHz: round(p.aliasOfHz, 1) } : {}),
           })),
         },

@@ -24,8 +24,7 @@ const CAMPBELL_ROWS = 20;
 
 export interface ChannelVibration {
   bandRms: number;
-  /** `candidates`: motors the order tracking could not tell apart, strongest first. */
-  peaks: (Peak & { prominenceDb: number; amplitude: number; candidates?: number[] })[];
+  peaks: (Peak & { prominenceDb: number; amplitude: number })[];
   spectrum: PowerSpectrum;
 }
 

@@ -42,6 +42,9 @@ export const FindingCode = z.enum([
 ]);
 export type FindingCode = z.infer<typeof FindingCode>;
 
+export const PeakLabel = z.enum(['rotor-1x', 'rotor-2x', 'blade-pass', 'frame']).nullable();
+export type PeakLabel = z.infer<typeof PeakLabel>;
+
 export const Finding = z.object({
   code: FindingCode,
   severity: Severity,
@@ -58,9 +61,6 @@ export const Finding = z.object({
 });
 export type Finding = z.infer<typeof Finding>;
 
-export const PeakLabel = z.enum(['rotor-1x', 'rotor-2x', 'blade-pass', 'frame']).nullable();
-export type PeakLabel = z.infer<typeof PeakLabel>;
-
 export const Peak = z.object({
   hz: z.number(),
   /** 10·log10 of the one-sided PSD in (channel unit)²/Hz. */
@@ -68,6 +68,11 @@ export const Peak = z.object({
   label: PeakLabel,
   /** 1-based motor whose 1× or 2× order the peak follows, when rpm per motor is logged. */
   motor: z.number().int().min(1).optional(),
+  /**
+   * 1-based motors the line could come from, strongest first, when order tracking narrowed it
+   * to a few but could not pick one.
+   */
+  candidates: z.array(z.number().int().min(1)).optional(),
   /** Where the tone really is, Hz, when it lies above Nyquist and folded down to `hz`. */
   aliasOfHz: z.number().optional(),
 });

@@ -47,7 +47,9 @@ export function summary(file: string, { report: r, detail }: FlightAnalysis): st
     out.push(`CG: x ${r.cg.xMm.toFixed(1)} mm (forward +), y ${r.cg.yMm.toFixed(1)} mm (right +)`);
   const vib = Object.entries(r.vibration);
   if (vib.length) {
-    out.push('Vibration (band RMS 50 Hz–Nyquist; loudest peaks)');
+    out.push(
+      'Vibration (band RMS 50 Hz–Nyquist; loudest peaks in dB re 1 (deg/s)²/Hz on the gyro, dB re 1 g²/Hz on the accelerometer)',
+    );
     for (const [ch, v] of vib) {
       const peaks = v.peaks
         .slice(0, 3)
@@ -57,7 +59,7 @@ export function summary(file: string, { report: r, detail }: FlightAnalysis): st
         )
         .join(', ');
       out.push(
-        `  ${ch.padEnd(7)} ${v.bandRms.toFixed(2).padStart(7)}  ${peaks || 'no clear peaks'}`,
+        `  ${ch.padEnd(7)} ${v.bandRms.toFixed(2).padStart(7)} ${(ch.startsWith('gyro') ? 'deg/s' : 'g').padEnd(5)}  ${peaks || 'no clear peaks'}`,
       );
     }
   }

@@ -13,9 +13,17 @@ export interface XySeries {
 
 export interface XyMarker {
   x: number;
+  /** Empty for a line without a label. */
   label: string;
   color?: string;
+  /** Label row above the plot, 0 nearest to it, so close lines' labels can stagger. */
+  row?: number;
 }
+
+/** Plot margins, px: label layouts need the plot's own width. */
+export const XY_GRID = { left: 58, right: 18, top: 30, bottom: 40 } as const;
+/** Height of one marker-label row, px. */
+const LABEL_ROW_PX = 12;
 
 export interface XyChartProps {
   series: XySeries[];
@@ -59,10 +67,11 @@ export function XyChart(props: XyChartProps) {
     height = 220,
     ariaLabel,
   } = props;
+  const labelRows = Math.max(0, ...(markers ?? []).map((m) => m.row ?? 0));
   const option = useMemo(
     () => ({
       animation: false,
-      grid: { left: 58, right: 18, top: 30, bottom: 40 },
+      grid: { ...XY_GRID, top: XY_GRID.top + labelRows * LABEL_ROW_PX },
       legend: {
         top: 0,
         left: 48,
@@ -126,13 +135,14 @@ export function XyChart(props: XyChartProps) {
                 data: markers.map((m) => ({
                   xAxis: m.x,
                   name: m.label,
+                  label: { show: m.label !== '', distance: 5 + (m.row ?? 0) * LABEL_ROW_PX },
                   lineStyle: { color: m.color ?? inkSeries.cursor, type: 'dotted', width: 1 },
                 })),
               }
             : undefined,
       })),
     }),
-    [series, xName, yName, xLog, xMin, xMax, yMin, yMax, markers],
+    [series, xName, yName, xLog, xMin, xMax, yMin, yMax, markers, labelRows],
   );
   return <PaintedChart option={option} height={height} ariaLabel={ariaLabel} />;
 }

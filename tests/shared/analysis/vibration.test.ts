@@ -76,6 +76,30 @@ describe('vibration analysis on a rotor sweep', () => {
     expect(attributeOrder(gyro, rpms, [[0, rows]], fs, 1).motor).toBe(3);
   });
 
+  it('tells apart a diagonal pair that never differs by more than 2 Hz (only over longer windows)', () => {
+    // Motors 2 and 4 spin the same way at nearly the same speed; rolling splits them by at most
+    // 120 rpm (2 Hz), too little for a 0.25 s window to resolve. The unbalance is on motor 2;
+    // every rotor adds a little 1× of its own.
+    const f = 1000;
+    const len = f * 30;
+    const r = [0, 1, 2, 3].map(() => new Float32Array(len));
+    const g = new Float32Array(len);
+    const ph = [0, 0.7, 1.9, 2.6];
+    for (let i = 0; i < len; i++) {
+      const t = i / f;
+      const split = 60 * Math.sin((2 * Math.PI * t) / 4);
+      const speeds = [11600, 11000 + split, 11600, 11000 - split];
+      g[i] = 0;
+      for (let m = 0; m < 4; m++) {
+        r[m]![i] = speeds[m]!;
+        ph[m]! += (2 * Math.PI * speeds[m]!) / 60 / f;
+        g[i]! += (m === 1 ? 3 : 0.4) * Math.sin(ph[m]!);
+      }
+    }
+    const a = attributeOrder([g], r, [[0, len]], f, 1);
+    expect(a).toMatchObject({ motor: 2, candidates: [2] });
+  });
+
   it('measures a tone’s amplitude under its peak (Parseval over the main lobe)', () => {
     const x = Float32Array.from(
       { length: 40000 },
@@ -84,6 +108,53 @@ describe('vibration analysis on a rotor sweep', () => {
     const spec = welch(x, fs, { nperseg: 512 });
     const bin = Math.round(123.4 / spec.df);
     expect(peakAmplitude(spec, bin)).toBeCloseTo(2.5, 2);
+  });
+});
+
+describe('vibration levels and their references', () => {
+  // A gyro sine of amplitude A on a bin centre, plus a tiny ripple so the floor is not zero.
+  // Sources (tests/REFERENCES.md §2.1, from scipy's `welch` docstring and Parseval): the mean
+  // square of a sine is A²/2, and the one-sided density reads it spread over the window's
+  // equivalent noise bandwidth, ENBW = 1.5·fs/nperseg for the periodic Hann window.
+  const A = 3;
+  const fsTone = 2000;
+  const n = fsTone * 10;
+  const df = fsTone / 512; // chooseSegment picks 512 at 2 kHz (bins of about 4 Hz)
+  const f0 = 50 * df; // 195.3125 Hz, bin 50
+  const gyro = Float32Array.from(
+    { length: n },
+    (_, i) => A * Math.sin((2 * Math.PI * f0 * i) / fsTone),
+  );
+  const log: ParsedLog = {
+    channels: ['time', 'gyro_x'],
+    columns: { time: Float64Array.from({ length: n }, (_, i) => i / fsTone), gyro_x: gyro },
+    rows: n,
+    sampleRateHz: fsTone,
+    durationS: n / fsTone,
+    metadata: {},
+    warnings: [],
+  };
+  const v = analyseVibration({
+    log,
+    ranges: [[0, n]],
+    rpms: null,
+    collective: null,
+    blades: 3,
+    prominenceDb: 10,
+  });
+  const ch = v.channels.gyro_x!;
+
+  it('band RMS is in channel units: A/√2 for a sine above 50 Hz', () => {
+    expect(v.df).toBeCloseTo(df, 12);
+    expect(ch.bandRms).toBeCloseTo(A / Math.SQRT2, 3);
+  });
+
+  it('a peak’s level is dB re 1 (channel unit)²/Hz: 10·log10(A²/2 ÷ ENBW)', () => {
+    const p = ch.peaks[0]!;
+    expect(p.hz).toBeCloseTo(f0, 1);
+    const expected = 10 * Math.log10((A * A) / 2 / (1.5 * df)); // −1.146 dB re 1 (deg/s)²/Hz
+    expect(p.db).toBeCloseTo(expected, 2);
+    expect(p.amplitude).toBeCloseTo(A, 2);
   });
 });
 

@@ -1,18 +1,39 @@
-import { useMemo, useState } from 'react';
-import type { FlightReport, PeakLabel } from '../../../../../shared/schemas/report';
+import { useCallback, useMemo, useState } from 'react';
+import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../../shared/analysis/review-detail';
-import { XyChart, type XySeries } from '../../../../components/charts/xy-chart';
+import {
+  distinctLines,
+  groupPeaks,
+  sameLine,
+} from '../../../../../shared/analysis/vibration-groups';
+import {
+  XY_GRID,
+  XyChart,
+  type XyMarker,
+  type XySeries,
+} from '../../../../components/charts/xy-chart';
 import { HeatmapChart } from '../../../../components/charts/heatmap-chart';
-import { MotorMarker } from '../../../../components/ui/motor-marker';
+import { placePeakLabels } from './peak-label-layout';
+import { VibrationPeakTable } from './vibration-peak-table';
 
 const axisColour = ['#1f3a4d', '#8a5a2b', '#6b4c7a'];
+/** Lines labelled on the spectrum: the loudest distinct ones. */
+const MARKED_LINES = 6;
+/** Plot width assumed before the chart is measured: a phone's, so labels never start out crowded. */
+const NARROW_PLOT_PX = 280;
 
-export const peakLabelText: Record<Exclude<PeakLabel, null>, string> = {
-  'rotor-1x': 'rotor 1× (unbalance, bent shaft or prop)',
-  'rotor-2x': 'rotor 2× (prop tracking, loose mount)',
-  'blade-pass': 'blade pass (props passing the arms)',
-  frame: 'frame (fixed frequency: a structural mode)',
-};
+/** Width of an element as it resizes (0 until measured). */
+function useWidth(): [(el: HTMLElement | null) => void, number] {
+  const [width, setWidth] = useState(0);
+  const ref = useCallback((el: HTMLElement | null) => {
+    if (!el || typeof ResizeObserver === 'undefined') return;
+    setWidth(el.clientWidth);
+    const ro = new ResizeObserver(() => setWidth(el.clientWidth));
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+  return [ref, width];
+}
 
 type Group = 'gyro' | 'acc';
 
@@ -25,7 +46,10 @@ export function VibrationSection({
 }) {
   const [group, setGroup] = useState<Group>('gyro');
   const [logF, setLogF] = useState(true);
-  const channels = Object.keys(detail.spectra).filter((c) => c.startsWith(group + '_'));
+  const channels = useMemo(
+    () => Object.keys(detail.spectra).filter((c) => c.startsWith(group + '_')),
+    [detail.spectra, group],
+  );
   const series: XySeries[] = useMemo(
     () =>
       channels.map((c, i) => ({
@@ -36,11 +60,36 @@ export function VibrationSection({
       })),
     [channels, detail.spectra],
   );
-  const peaks = channels.flatMap((c) =>
-    (report.vibration[c]?.peaks ?? []).map((p) => ({ ...p, channel: c })),
-  );
-  peaks.sort((a, b) => b.db - a.db);
   const unit = group === 'gyro' ? '(deg/s)²/Hz' : 'g²/Hz';
+  const rmsUnit = group === 'gyro' ? 'deg/s' : 'g';
+  const hz = channels.length ? detail.spectra[channels[0]!]!.hz : [];
+  const df = hz.length > 1 ? hz[1]! - hz[0]! : 1;
+  const xMin = logF ? df : 0;
+  const xMax = hz.length ? hz[hz.length - 1]! : 1;
+  const causes = useMemo(
+    () =>
+      groupPeaks(
+        channels.flatMap((c) =>
+          (report.vibration[c]?.peaks ?? []).map((p) => ({ ...p, channel: c })),
+        ),
+        df,
+      ),
+    [channels, report.vibration, df],
+  );
+  const [plotRef, boxWidth] = useWidth();
+  const markers: XyMarker[] = useMemo(() => {
+    // One label per line: the same line on three axes, or named by two causes, is one line.
+    const lines: { hz: number; db: number }[] = [];
+    for (const l of causes.flatMap((c) => distinctLines(c, df)).sort((a, b) => b.db - a.db))
+      if (!lines.some((o) => sameLine(o.hz, l.hz, df))) lines.push(l);
+    lines.splice(MARKED_LINES);
+    const widthPx = boxWidth > 0 ? boxWidth - XY_GRID.left - XY_GRID.right : NARROW_PLOT_PX;
+    return placePeakLabels(lines, { widthPx, xMin, xMax, xLog: logF }).map((l) => ({
+      x: l.hz,
+      label: l.text ?? '',
+      ...(l.row !== null ? { row: l.row } : {}),
+    }));
+  }, [causes, df, boxWidth, xMin, xMax, logF]);
   const camp = detail.campbell;
   const lines = useMemo(
     () =>
@@ -75,13 +124,13 @@ export function VibrationSection({
           <input type="checkbox" checked={logF} onChange={(e) => setLogF(e.target.checked)} /> Log
           frequency axis
         </label>
-        <span className="num text-xs text-ink-faint">
-          band RMS ≥ 50 Hz:{' '}
+        <span className="num text-xs text-ink-faint" data-testid="band-rms">
+          band RMS 50 Hz–Nyquist:{' '}
           {channels
-            .map(
-              (c) =>
-                `${c} ${report.vibration[c]?.bandRms.toFixed(group === 'gyro' ? 1 : 3) ?? '—'}`,
-            )
+            .map((c) => {
+              const v = report.vibration[c]?.bandRms;
+              return `${c} ${v === undefined ? '—' : `${v.toFixed(group === 'gyro' ? 1 : 3)} ${rmsUnit}`}`;
+            })
             .join(' · ')}
         </span>
       </div>
@@ -90,51 +139,21 @@ export function VibrationSection({
           This log has no {group === 'gyro' ? 'gyro' : 'accelerometer'} channels.
         </p>
       ) : (
-        <XyChart
-          series={series}
-          xName="Hz"
-          yName={`PSD, dB ${unit}`}
-          xLog={logF}
-          markers={peaks.slice(0, 6).map((p) => ({ x: p.hz, label: `${p.hz.toFixed(0)} Hz` }))}
-          height={260}
-          ariaLabel={`${group} power spectral density per axis`}
-        />
+        <div ref={plotRef}>
+          <XyChart
+            series={series}
+            xName="Hz"
+            yName={`PSD, dB re 1 ${unit}`}
+            xLog={logF}
+            xMin={xMin}
+            xMax={xMax}
+            markers={markers}
+            height={260}
+            ariaLabel={`${group} power spectral density per axis`}
+          />
+        </div>
       )}
-      <table className="w-full text-sm" aria-label="Vibration peaks">
-        <thead>
-          <tr className="border-b border-line text-left text-xs uppercase tracking-wide text-ink-faint">
-            <th className="py-1 pr-3 font-medium">Channel</th>
-            <th className="py-1 pr-3 text-right font-medium">Frequency</th>
-            <th className="py-1 pr-3 text-right font-medium">Level</th>
-            <th className="py-1 pl-4 font-medium">Source</th>
-          </tr>
-        </thead>
-        <tbody>
-          {peaks.length === 0 && (
-            <tr>
-              <td colSpan={4} className="py-2 text-ink-soft">
-                No peak stands out of the noise floor.
-              </td>
-            </tr>
-          )}
-          {peaks.map((p, i) => (
-            <tr key={`${p.channel}-${p.hz}-${i}`} className="border-b border-line/60">
-              <td className="num py-1 pr-3">{p.channel}</td>
-              <td className="num py-1 pr-3 text-right">{p.hz.toFixed(1)} Hz</td>
-              <td className="num py-1 pr-3 text-right">{p.db.toFixed(1)} dB</td>
-              <td className="py-1 pl-4 text-ink-soft">
-                {p.motor !== undefined && (
-                  <span className="mr-1 inline-flex items-center gap-1">
-                    <MotorMarker motor={p.motor} />
-                    motor {p.motor},
-                  </span>
-                )}
-                {p.label ? peakLabelText[p.label] : 'unlabelled (not tied to rotor speed)'}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <VibrationPeakTable causes={causes} unit={unit} />
       <div>
         <h3 className="text-sm font-medium text-ink">Campbell diagram</h3>
         <p className="text-xs text-ink-faint">
