@@ -58,6 +58,13 @@ export const Finding = z.object({
   /** Drift findings: the change in points (motor-drift) and how many earlier flights it was judged against. */
   changePts: z.number().optional(),
   flights: z.number().int().min(1).optional(),
+  /**
+   * Vibration findings: every peak of the one cause the finding stands for (each axis, speed
+   * and harmonic it showed on), loudest first.
+   */
+  seen: z
+    .array(z.object({ channel: z.string(), hz: z.number(), db: z.number(), label: PeakLabel }))
+    .optional(),
 });
 export type Finding = z.infer<typeof Finding>;
 

@@ -1,7 +1,21 @@
-import type { Finding } from '../../schemas/report';
+import type { Finding, PeakLabel, Severity } from '../../schemas/report';
+import { severityRank } from '../../schemas/report';
 import type { Thresholds } from '../../schemas/thresholds';
 import type { VibrationResult } from '../vibration';
+import {
+  distinctLines,
+  groupPeaks,
+  type GroupablePeak,
+  type VibrationCause,
+} from '../vibration-groups';
 import { level, list } from './words';
+
+/**
+ * The vibration part of the verdict: one finding per cause (analysis/vibration-groups.ts),
+ * not per peak. Its severity is that of its strongest member; the message names the cause, the
+ * strongest line, and every axis, speed and harmonic the cause showed on, so a chipped prop seen
+ * at four speeds on five axes reads as the one prop it is.
+ */
 
 /** Band RMS is taken from here up (shared/README.md §7); a line below it is not compared. */
 const BAND_LO_HZ = 50;
@@ -49,90 +63,162 @@ function peakSeverity(
   return share >= th.toneDominantShare && standsOut ? 'note' : null;
 }
 
-function peakFinding(p: ChannelPeak, channel: string, sev: Finding['severity']): Finding {
-  const gyro = channel.startsWith('gyro');
-  const unit = gyro ? 'deg/s' : 'g';
-  const amp = p.amplitude;
-  const where = `${Math.round(p.hz)} Hz on ${channel} (about ${amp.toFixed(gyro ? 1 : 2)} ${unit})`;
-  if (p.label === 'frame') {
-    return {
-      code: 'frame-resonance',
-      severity: sev,
-      axis: channel,
-      message:
-        `A vibration at ${where} stays put while the motors change speed: something in the frame ` +
-        `rings. With the battery out, tap arms, standoffs, camera and antenna mounts and listen for ` +
-        `a buzz; tighten the stack and frame screws, and check for a cracked arm.`,
-    };
-  }
-  if (p.label) {
-    const order =
-      p.label === 'rotor-1x'
-        ? 'once per turn'
-        : p.label === 'rotor-2x'
-          ? 'twice per turn'
-          : 'at blade pass';
-    const cands = p.candidates ?? [];
-    const who = p.motor
-      ? `motor ${p.motor}`
-      : cands.length
-        ? `motor ${cands.slice(0, -1).join(', ')} or ${cands[cands.length - 1]}`
-        : 'a rotor';
-    return {
-      code: 'rotor-harmonic',
-      severity: sev,
-      axis: channel,
-      ...(p.motor ? { motor: p.motor } : {}),
-      message:
-        `Vibration at ${where} follows ${who} ${order}. ` +
-        (p.label === 'rotor-1x'
-          ? `That is usually an unbalanced or chipped prop or a bent shaft: with the battery out, ` +
-            `swap ${p.motor ? `motor ${p.motor}'s prop for a new one` : cands.length ? `the props on motors ${list(cands)} for new ones` : 'each prop for a new one'}, check the shaft ` +
-            `runs true and the bell is not scraped.`
-          : p.label === 'rotor-2x'
-            ? `That often means a loose motor mount or a prop not seated flat: with the battery out, ` +
-              `tighten the motor screws and reseat the props.`
-            : `Blade-pass tones grow with nicked or mismatched blades: inspect every blade tip ` +
-              `and replace damaged props as a set.`),
-    };
-  }
-  if (p.aliasOfHz !== undefined) {
-    return {
-      code: 'vibration-peak',
-      severity: sev,
-      axis: channel,
-      message:
-        `A vibration at ${where} matches the motors' electrical frequency (about ${Math.round(p.aliasOfHz)} Hz) ` +
-        `folded down by the log rate, so it may be electrical noise rather than shaking; logging at a ` +
-        `higher rate tells the two apart. With the battery out, route motor wires away from the ` +
-        `flight controller, check the capacitor on the power leads, ` +
-        `and check the gyro's own filtering on the filter bench.`,
-    };
-  }
-  return {
-    code: 'vibration-peak',
-    severity: sev,
-    axis: channel,
-    message:
-      `A strong vibration at ${where} that does not match the rotor speed or a fixed frame ` +
-      `mode. With the battery out, check the flight controller's soft mounts and that no ` +
-      `wire or strap touches the stack, then look at the filter bench for a notch.`,
-  };
+interface Member extends GroupablePeak {
+  /** Amplitude under the peak in channel units (vibration.ts, peakAmplitude). */
+  amplitude: number;
+  /** The peak's own severity (peakSeverity), before the cause takes its strongest member's. */
+  severity: Severity | null;
 }
 
-/** The strongest peak per (label, motor, frequency) across channels, as findings. */
-export function vibrationFindings(vibration: VibrationResult, th: Thresholds): Finding[] {
-  const seen = new Map<string, { finding: Finding; amp: number }>();
-  for (const [channel, v] of Object.entries(vibration.channels)) {
-    const gyro = channel.startsWith('gyro');
-    for (const p of v.peaks) {
-      const sev = peakSeverity(p, gyro, v.bandRms, othersMedian(vibration, channel), th);
-      if (!sev) continue;
-      const key = `${p.label ?? 'none'}:${p.motor ?? 0}:${Math.round(p.hz / (3 * vibration.df))}`;
-      const prev = seen.get(key);
-      if (!prev || p.amplitude > prev.amp)
-        seen.set(key, { finding: peakFinding(p, channel, sev), amp: p.amplitude });
+const ORDER_WORDS: Record<Exclude<PeakLabel, null | 'frame'>, string> = {
+  'rotor-1x': 'once per turn',
+  'rotor-2x': 'twice per turn',
+  'blade-pass': 'at blade pass',
+};
+
+const isGyro = (channel: string) => channel.startsWith('gyro');
+const unitOf = (channel: string) => (isGyro(channel) ? 'deg/s' : 'g');
+const fmtAmp = (m: Member) =>
+  `${m.amplitude.toFixed(isGyro(m.channel) ? 1 : 2)} ${unitOf(m.channel)}`;
+
+/** How far over its own watch threshold a member is, so gyro and accelerometer compare. */
+function overWatch(m: Member, th: Thresholds): number {
+  return m.amplitude / (isGyro(m.channel) ? th.gyroToneWatchDegS : th.accToneWatchG);
+}
+
+/** "seen on gyro_x, gyro_y and acc_x at 173, 189 and 321 Hz (rotor speeds …)". */
+function seenSentence(cause: VibrationCause<Member>, df: number): string {
+  const lines = distinctLines(cause, df);
+  const hz = lines.map((l) => Math.round(l.hz));
+  let text = `Seen on ${list(cause.channels)} at ${list(hz)} Hz`;
+  if (cause.kind === 'rotor') {
+    const rpm = lines.flatMap((l) =>
+      l.label === 'rotor-1x' || l.label === 'rotor-2x'
+        ? [((l.aliasOfHz ?? l.hz) * 60) / (l.label === 'rotor-1x' ? 1 : 2)]
+        : [],
+    );
+    if (rpm.length > 1) {
+      const lo = Math.round(Math.min(...rpm) / 100) * 100;
+      const hi = Math.round(Math.max(...rpm) / 100) * 100;
+      text += ` (rotor speeds about ${lo}–${hi} rpm)`;
+    }
+    if (cause.orders.length > 1) text += `, ${list(cause.orders.map((o) => ORDER_WORDS[o]))}`;
+  }
+  return `${text}${lines.length > 1 || cause.channels.length > 1 ? ': one cause, not several' : ''}.`;
+}
+
+function rotorMessage(cause: VibrationCause<Member>, top: Member, df: number): string {
+  const ms = cause.motors;
+  const who =
+    ms.length === 1
+      ? `motor ${ms[0]}`
+      : ms.length
+        ? `motor ${list(ms).replace(/ and /, ' or ')}`
+        : 'a rotor';
+  const order =
+    top.label && top.label !== 'frame' ? ORDER_WORDS[top.label] : ORDER_WORDS['rotor-1x'];
+  const props =
+    ms.length === 1
+      ? `motor ${ms[0]}'s prop for a new one`
+      : ms.length
+        ? `the props on motors ${list(ms)} for new ones`
+        : 'each prop for a new one';
+  const advice = cause.orders.includes('rotor-1x')
+    ? `That is usually an unbalanced or chipped prop or a bent shaft: with the battery out, swap ` +
+      `${props}, check the shaft runs true and the bell is not scraped.`
+    : cause.orders.includes('rotor-2x')
+      ? `That often means a loose motor mount or a prop not seated flat: with the battery out, ` +
+        `tighten the motor screws and reseat the props.`
+      : `Blade-pass tones grow with nicked or mismatched blades: inspect every blade tip and ` +
+        `replace damaged props as a set.`;
+  return (
+    `Vibration follows ${who} ${order}, strongest at ${Math.round(top.hz)} Hz on ${top.channel} ` +
+    `(about ${fmtAmp(top)}). ${seenSentence(cause, df)} ${advice}`
+  );
+}
+
+function causeFinding(cause: VibrationCause<Member>, th: Thresholds, df: number): Finding | null {
+  let severity: Severity | null = null;
+  for (const m of cause.members)
+    if (m.severity && (!severity || severityRank(m.severity) > severityRank(severity)))
+      severity = m.severity;
+  if (!severity) return null;
+  // The strongest member: the most severe, then the furthest over its own threshold.
+  const top = [...cause.members].sort(
+    (a, b) =>
+      (b.severity ? severityRank(b.severity) + 1 : 0) -
+        (a.severity ? severityRank(a.severity) + 1 : 0) || overWatch(b, th) - overWatch(a, th),
+  )[0]!;
+  const seen = cause.members.map((m) => ({
+    channel: m.channel,
+    hz: Math.round(m.hz * 100) / 100,
+    db: Math.round(m.db * 100) / 100,
+    label: m.label,
+  }));
+  const base = { severity, axis: top.channel, seen };
+  const at = `${Math.round(top.hz)} Hz on ${top.channel} (about ${fmtAmp(top)})`;
+  switch (cause.kind) {
+    case 'rotor':
+      return {
+        code: 'rotor-harmonic',
+        ...base,
+        ...(cause.motors.length === 1 ? { motor: cause.motors[0]! } : {}),
+        message: rotorMessage(cause, top, df),
+      };
+    case 'frame':
+      return {
+        code: 'frame-resonance',
+        ...base,
+        message:
+          `A vibration at ${at} stays put while the motors change speed: something in the frame ` +
+          `rings. ${seenSentence(cause, df)} With the battery out, tap arms, standoffs, camera and ` +
+          `antenna mounts and listen for a buzz; tighten the stack and frame screws, and check for a cracked arm.`,
+      };
+    case 'electrical': {
+      const alias = Math.round(top.aliasOfHz!);
+      return {
+        code: 'vibration-peak',
+        ...base,
+        message:
+          `A vibration at ${at} matches the motors' electrical frequency (about ${alias} Hz) ` +
+          `folded down by the log rate, so it may be electrical noise rather than shaking; logging ` +
+          `at a higher rate tells the two apart. ${seenSentence(cause, df)} With the battery out, ` +
+          `route motor wires away from the flight controller, check the capacitor on the power ` +
+          `leads, and check the gyro's own filtering on the filter bench.`,
+      };
+    }
+    case 'line':
+      return {
+        code: 'vibration-peak',
+        ...base,
+        message:
+          `A strong vibration at ${at} that does not match the rotor speed or a fixed frame mode. ` +
+          `${seenSentence(cause, df)} With the battery out, check the flight controller's soft ` +
+          `mounts and that no wire or strap touches the stack, then look at the filter bench for a notch.`,
+      };
+  }
+}
+
+/** One finding per vibration cause that reaches a severity, loudest cause first. */
+export function vibrationFindings(v: VibrationResult, th: Thresholds): Finding[] {
+  const members: Member[] = [];
+  for (const [channel, ch] of Object.entries(v.channels)) {
+    for (const p of ch.peaks) {
+      members.push({
+        channel,
+        hz: p.hz,
+        db: p.db,
+        label: p.label,
+        ...(p.motor !== undefined ? { motor: p.motor } : {}),
+        ...(p.candidates?.length ? { candidates: p.candidates } : {}),
+        ...(p.aliasOfHz !== undefined ? { aliasOfHz: p.aliasOfHz } : {}),
+        amplitude: p.amplitude,
+        severity: peakSeverity(p, isGyro(channel), ch.bandRms, othersMedian(v, channel), th),
+      });
     }
   }
-  return [...seen.values()].map((s) => s.finding);
+  return groupPeaks(members, v.df).flatMap((cause) => {
+    const f = causeFinding(cause, th, v.df);
+    return f ? [f] : [];
+  });
 }
