@@ -54,6 +54,16 @@ function CauseRows({ cause, index }: { cause: VibrationCause; index: number }) {
   const top = cause.members[0]!;
   const [lo, hi] = cause.hzRange;
   const lines = cause.members.length;
+  const title = (
+    <>
+      {cause.motors.length === 1 && (
+        <span className="mr-1 inline-flex align-[-1px]">
+          <MotorMarker motor={cause.motors[0]!} />
+        </span>
+      )}
+      {causeTitle(cause)}
+    </>
+  );
   return (
     <tbody data-cause={cause.key} className="border-b border-line">
       <tr>
@@ -70,24 +80,10 @@ function CauseRows({ cause, index }: { cause: VibrationCause; index: number }) {
                 <span aria-hidden className="num w-3 shrink-0 text-ink-faint">
                   {open ? '▾' : '▸'}
                 </span>
-                <span>
-                  {cause.motors.length === 1 && (
-                    <span className="mr-1 inline-flex align-[-1px]">
-                      <MotorMarker motor={cause.motors[0]!} />
-                    </span>
-                  )}
-                  {causeTitle(cause)}
-                </span>
+                <span>{title}</span>
               </button>
             ) : (
-              <span className="text-ink">
-                {cause.motors.length === 1 && (
-                  <span className="mr-1 inline-flex align-[-1px]">
-                    <MotorMarker motor={cause.motors[0]!} />
-                  </span>
-                )}
-                {causeTitle(cause)}
-              </span>
+              <span className="text-ink">{title}</span>
             )}
           </span>
           <span className="block pl-4 text-xs text-ink-faint">
