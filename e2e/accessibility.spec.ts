@@ -95,7 +95,12 @@ test('signed in: fleet, aircraft sections, team, inbox, account and a synced rev
       'aria-current',
       'page',
     );
-    await expectAccessibleAtBothWidths(page, `aircraft, ${label}`);
+    // The airframe tab (motor table, preview, build figures) fits a phone without sideways scroll.
+    await expectAccessibleAtBothWidths(
+      page,
+      `aircraft, ${label}`,
+      label === 'Airframe' ? { fits: true, screenshot: 'aircraft-airframe' } : {},
+    );
   }
 
   const main = page.getByRole('navigation', { name: 'Main' });

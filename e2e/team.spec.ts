@@ -52,6 +52,15 @@ test('the owner invites a coach, who joins through the link in the dev inbox and
   await expect(coach.getByRole('table', { name: 'Members' })).toContainText('Tamsin Reed');
   await expect(coach.getByRole('form', { name: 'Invite' })).toHaveCount(0);
   await expect(coach.getByRole('button', { name: 'Save thresholds' })).toHaveCount(0);
+  // What a coach may not change reads as text: no input box around the thresholds.
+  const limit = coach.getByLabel('Shortest hover stretch (s)');
+  await expect(limit).toBeDisabled();
+  expect(await limit.evaluate((el) => getComputedStyle(el).borderTopColor)).toBe(
+    'rgba(0, 0, 0, 0)',
+  );
+  expect(await limit.evaluate((el) => getComputedStyle(el).backgroundColor)).toBe(
+    'rgba(0, 0, 0, 0)',
+  );
 
   // The owner sees the new member and can change the role.
   await owner.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();

@@ -36,3 +36,39 @@ export const inkSeries = {
   grid: '#e6e1d6',
   axis: '#4a5866',
 } as const;
+
+/**
+ * Motor colours under 3:1 against the paper tones (WCAG 2.1 §1.4.11, non-text contrast):
+ * orange, sky blue, bluish green, yellow and reddish purple. Their markers get an ink outline so
+ * the shape reads on paper while the fill keeps the motor's colour;
+ * `tests/src/components/palette.test.ts` checks this list against the contrast formula.
+ */
+export const lowContrastMotorColours: ReadonlySet<string> = new Set([
+  '#E69F00',
+  '#56B4E9',
+  '#009E73',
+  '#F0E442',
+  '#CC79A7',
+]);
+
+/** The outline for a marker in `colour`: ink where the colour alone is under 3:1, else none. */
+export function outlineFor(colour: string): string | undefined {
+  return lowContrastMotorColours.has(colour.toUpperCase()) ? '#1c2733' : undefined;
+}
+
+/** The outline for motor `n`'s markers. */
+export const motorOutline = (n: number) => outlineFor(motorColor(n));
+
+/**
+ * An echarts series' marker style: filled circles (the legend draws one on each line's icon),
+ * outlined in ink where the colour alone is under 3:1 on paper.
+ */
+export function seriesMarker(colour: string) {
+  const outline = outlineFor(colour);
+  return {
+    symbol: 'circle',
+    itemStyle: outline
+      ? { color: colour, borderColor: outline, borderWidth: 1 }
+      : { color: colour },
+  };
+}

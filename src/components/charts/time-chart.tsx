@@ -3,7 +3,7 @@ import ReactEChartsCore from 'echarts-for-react/esm/core';
 import type { EChartsType } from 'echarts/core';
 import { echarts } from './echarts';
 import { useAfterPaint } from './use-after-paint';
-import { inkSeries } from './palette';
+import { inkSeries, seriesMarker } from './palette';
 
 export interface TimeSeries {
   name: string;
@@ -165,8 +165,8 @@ export function TimeChart(props: TimeChartProps) {
           ? {
               top: 0,
               right: 16,
-              itemWidth: 14,
-              itemHeight: 3,
+              itemWidth: 18,
+              itemHeight: 8,
               textStyle: { fontSize: 11, color: inkSeries.axis },
             }
           : undefined,
@@ -227,6 +227,7 @@ export function TimeChart(props: TimeChartProps) {
           showSymbol: false,
           sampling: sampling ? 'lttb' : undefined,
           color: s.color,
+          ...seriesMarker(s.color),
           lineStyle: { width: s.width ?? 1.2, type: s.dashed ? 'dashed' : 'solid' },
           areaStyle: s.area ? { opacity: 0.12 } : undefined,
           emphasis: { disabled: true },

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { PaintedChart } from './painted-chart';
-import { inkSeries } from './palette';
+import { inkSeries, seriesMarker } from './palette';
 
 export interface XySeries {
   name: string;
@@ -75,8 +75,8 @@ export function XyChart(props: XyChartProps) {
       legend: {
         top: 0,
         left: 48,
-        itemWidth: 14,
-        itemHeight: 3,
+        itemWidth: 18,
+        itemHeight: 8,
         textStyle: { fontSize: 11, color: inkSeries.axis },
       },
       tooltip: {
@@ -123,6 +123,7 @@ export function XyChart(props: XyChartProps) {
         showSymbol: false,
         sampling: 'lttb',
         color: s.color,
+        ...seriesMarker(s.color),
         lineStyle: { width: s.width ?? 1.3, type: s.dashed ? 'dashed' : 'solid' },
         emphasis: { disabled: true },
         markLine:

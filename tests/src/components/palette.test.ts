@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { palette } from '../../../src/components/ui/palette';
+import {
+  lowContrastMotorColours,
+  motorOutline,
+  okabeIto,
+} from '../../../src/components/charts/palette';
 
 /**
  * WCAG 2.1, "relative luminance" and "contrast ratio" (definitions used by success criteria
@@ -94,5 +99,26 @@ describe('palette meets WCAG 2.1 AA', () => {
       expect(contrast(palette.line.strong, bg), bg).toBeGreaterThanOrEqual(3);
     for (const bg of [palette.paper.DEFAULT, palette.paper.raised])
       expect(contrast(palette.accent.DEFAULT, bg), bg).toBeGreaterThanOrEqual(3);
+  });
+});
+
+describe('motor markers (§1.4.11)', () => {
+  const papers3 = [palette.paper.DEFAULT, palette.paper.raised, palette.paper.sunk];
+  it('outlines exactly the motor colours that fall under 3:1 on some paper', () => {
+    const under = okabeIto.filter((c) => papers3.some((bg) => contrast(c, bg) < 3));
+    expect([...lowContrastMotorColours].sort()).toEqual([...under].sort());
+  });
+
+  it('the outline itself reads at 3:1 on every paper, and motors past eight cycle with it', () => {
+    for (let n = 1; n <= 9; n++) {
+      const outline = motorOutline(n);
+      if (!outline) continue;
+      for (const bg of papers3)
+        expect(contrast(outline, bg), `motor ${n} on ${bg}`).toBeGreaterThanOrEqual(3);
+    }
+    // Motor 1 (orange) needs one, motor 5 (blue, 4.4:1 on sunk paper) does not; motor 9 is motor 1.
+    expect(motorOutline(1)).toBeDefined();
+    expect(motorOutline(5)).toBeUndefined();
+    expect(motorOutline(9)).toBe(motorOutline(1));
   });
 });

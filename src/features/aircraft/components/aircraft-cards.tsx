@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { Aircraft } from '../../../../shared/schemas/aircraft';
 import { SeverityBadge } from '../../../components/ui/severity-badge';
-import { AirframeTopView } from './airframe-top-view';
+import { AirframeTopView } from '../../../components/airframe/airframe-top-view';
 
 function when(iso: string) {
   const d = new Date(iso);

@@ -16,7 +16,17 @@ import { AirframePreview } from './airframe-preview';
 import { MotorTable } from './motor-table';
 
 const num = { setValueAs: optionalNumber };
+// A tenth of a millimetre is finer than any frame is built to.
 const round1 = (v: number) => Math.round(v * 10) / 10;
+
+/** The form as shown: motor positions to 0.1 mm (a preset's cos 45° arms are not). */
+const toTenthMm = (form: AirframeForm): AirframeForm => ({
+  ...form,
+  airframe: {
+    ...form.airframe,
+    motors: form.airframe.motors.map((m) => ({ ...m, x: round1(m.x), y: round1(m.y) })),
+  },
+});
 
 /**
  * Airframe editor: a layout preset as a starting point, the motor table (position and spin of
@@ -40,7 +50,7 @@ export function AirframeEditor({
 }) {
   const form = useForm({
     resolver: zodResolver(AirframeForm, plainMessages),
-    defaultValues: initial,
+    defaultValues: toTenthMm(initial),
   });
   const {
     register,
@@ -54,15 +64,14 @@ export function AirframeEditor({
   const [preset, setPreset] = useState<LayoutPreset>('quad-x');
   const [armMm, setArmMm] = useState<string>(String(layoutPresets['quad-x'].defaults.armMm));
   // The design CG is optional as a pair: both coordinates or neither (the frame centre).
-  const [cgX, setCgX] = useState(initial.airframe.cg ? String(initial.airframe.cg.x) : '');
-  const [cgY, setCgY] = useState(initial.airframe.cg ? String(initial.airframe.cg.y) : '');
+  const [cgX, setCgX] = useState(initial.airframe.cg ? String(round1(initial.airframe.cg.x)) : '');
+  const [cgY, setCgY] = useState(initial.airframe.cg ? String(round1(initial.airframe.cg.y)) : '');
   const cg = readCg(cgX, cgY);
 
   const applyPreset = () => {
     const info = layoutPresets[preset];
     const arm = Number(armMm);
     const built = presetAirframe(preset, { armMm: arm > 0 ? arm : info.defaults.armMm });
-    // A tenth of a millimetre is finer than any frame is built to.
     motors.replace(built.motors.map((m) => ({ ...m, x: round1(m.x), y: round1(m.y) })));
     // Typical build values only fill what the pilot has not typed yet.
     const a = dirtyFields.airframe;

@@ -2,7 +2,7 @@ import { useWatch, type Control } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import type { AirframeForm } from '../model/airframe-form';
 import { MM_PER_INCH, overlappingProps } from '../../../components/airframe/top-view-geometry';
-import { AirframeTopView } from './airframe-top-view';
+import { AirframeTopView } from '../../../components/airframe/airframe-top-view';
 
 /** The top view drawn from what is typed, with the spin count and overlapping props called out. */
 export function AirframePreview({
@@ -25,7 +25,7 @@ export function AirframePreview({
   const cw = motors.filter((m) => m.spin === 'cw').length;
   return (
     <aside className="space-y-2 lg:sticky lg:top-4 lg:self-start">
-      <AirframeTopView motors={motors} propDiameterIn={diameter} cg={cg} />
+      <AirframeTopView motors={motors} propDiameterIn={diameter} designCg={cg} scaleBar />
       <p className="text-xs text-ink-soft">
         <span className="num">{motors.length}</span> motors · <span className="num">{cw}</span>{' '}
         clockwise · <span className="num">{motors.length - cw}</span> counter-clockwise

@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
-import { inkSeries } from '../../../components/charts/palette';
+import { inkSeries, seriesMarker } from '../../../components/charts/palette';
 import { PaintedChart } from '../../../components/charts/painted-chart';
+import { trendAxes } from '../model/trend-axis';
 
 export interface TrendSeries {
   name: string;
@@ -18,11 +19,14 @@ export interface TrendEvent {
 
 /**
  * One quantity across an aircraft's flights on a time axis, with service-log events drawn as
- * vertical lines so a step in the trend can be read against the repair that caused it.
+ * vertical lines so a step in the trend can be read against the repair that caused it. The
+ * value axis spans at least `minSpan`, so noise between flights does not fill it, and every
+ * month the time axis crosses is labelled.
  */
 export function TrendChart({
   series,
   yName,
+  minSpan,
   events = [],
   band,
   height = 200,
@@ -30,12 +34,15 @@ export function TrendChart({
 }: {
   series: TrendSeries[];
   yName: string;
+  /** Smallest value-axis span, in the chart's unit. */
+  minSpan: number;
   events?: TrendEvent[];
   /** Shaded range, e.g. the watch limits around zero deviation. */
   band?: { from: number; to: number; label: string };
   height?: number;
   ariaLabel: string;
 }) {
+  const axes = useMemo(() => trendAxes(series, minSpan), [series, minSpan]);
   const option = useMemo(
     () => ({
       animation: false,
@@ -43,8 +50,8 @@ export function TrendChart({
       legend: {
         top: 0,
         left: 48,
-        itemWidth: 14,
-        itemHeight: 3,
+        itemWidth: 18,
+        itemHeight: 8,
         textStyle: { fontSize: 11, color: inkSeries.axis },
       },
       tooltip: {
@@ -52,15 +59,13 @@ export function TrendChart({
         textStyle: { fontSize: 11 },
         valueFormatter: (v: unknown) => (typeof v === 'number' ? v.toFixed(2) : '–'),
       },
-      xAxis: {
-        type: 'time',
-        axisLabel: { color: inkSeries.axis, fontSize: 10 },
-        splitLine: { show: false },
-      },
+      xAxis: axes.x,
       yAxis: {
         type: 'value',
         name: yName,
         scale: true,
+        min: axes.y?.min,
+        max: axes.y?.max,
         nameTextStyle: { fontSize: 10, color: inkSeries.axis, align: 'left' },
         axisLabel: { color: inkSeries.axis, fontSize: 10 },
         splitLine: { lineStyle: { color: inkSeries.grid } },
@@ -73,6 +78,7 @@ export function TrendChart({
         showSymbol: true,
         symbolSize: 5,
         color: s.color,
+        ...seriesMarker(s.color),
         lineStyle: { width: 1.4, type: s.dashed ? 'dashed' : 'solid' },
         emphasis: { disabled: true },
         markArea:
@@ -104,7 +110,7 @@ export function TrendChart({
             : undefined,
       })),
     }),
-    [series, yName, events, band],
+    [series, yName, events, band, axes],
   );
   return <PaintedChart option={option} height={height} ariaLabel={ariaLabel} />;
 }

@@ -13,6 +13,19 @@ const axisColors = {
 } as Record<string, string>;
 const extraColors = ['#4a5866', '#8a5a2b', '#6b4c7a', '#3f6e8c', '#1f3a4d', '#7d8894'];
 
+/**
+ * Smallest axis span per chart, in its unit: differences below these are within what one flight
+ * differs from the next on the same aircraft (our own choice for display, not a limit the
+ * verdict uses), so a steady aircraft draws a flat line instead of a steep one.
+ */
+const MIN_SPAN = {
+  deviationPct: 6,
+  bandRms: 2,
+  torqueAndCg: 6,
+  volts: 0.2,
+  milliohms: 5,
+};
+
 function seriesOf(
   points: TrendPoint[],
   name: string,
@@ -91,7 +104,13 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
           Hover output against what the airframe predicts. A motor drifting up is working harder:
           check its bearings, prop and mounting.
         </p>
-        <TrendChart ariaLabel="Balance trend" yName="%" series={charts.balance} events={events} />
+        <TrendChart
+          ariaLabel="Balance trend"
+          yName="%"
+          minSpan={MIN_SPAN.deviationPct}
+          series={charts.balance}
+          events={events}
+        />
       </section>
       <section>
         <h2 className="text-sm font-semibold text-slate-brand">Vibration: band RMS above 50 Hz</h2>
@@ -102,6 +121,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
         <TrendChart
           ariaLabel="Vibration trend"
           yName="RMS"
+          minSpan={MIN_SPAN.bandRms}
           series={charts.vibration}
           events={events}
         />
@@ -111,6 +131,7 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
         <TrendChart
           ariaLabel="Torque split and CG trend"
           yName="% / mm"
+          minSpan={MIN_SPAN.torqueAndCg}
           series={charts.torque}
           events={events}
         />
@@ -118,10 +139,17 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
       <section>
         <h2 className="text-sm font-semibold text-slate-brand">Battery: sag and lowest cell</h2>
         <p className="text-xs text-ink-soft">More sag at the same load means the pack is ageing.</p>
-        <TrendChart ariaLabel="Battery trend" yName="V" series={charts.battery} events={events} />
+        <TrendChart
+          ariaLabel="Battery trend"
+          yName="V"
+          minSpan={MIN_SPAN.volts}
+          series={charts.battery}
+          events={events}
+        />
         <TrendChart
           ariaLabel="Pack resistance trend"
           yName="mΩ"
+          minSpan={MIN_SPAN.milliohms}
           series={charts.resistance}
           height={150}
         />

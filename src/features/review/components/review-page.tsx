@@ -125,8 +125,7 @@ export function ReviewPage(props: ReviewPageProps) {
         {report.warnings.length > 0 && (
           <details className="rounded border border-line bg-paper-sunk px-3 py-1.5 text-xs text-ink-soft">
             <summary className="cursor-pointer">
-              {report.warnings.length} note{report.warnings.length === 1 ? '' : 's'} from reading
-              the log
+              {report.warnings.length} import remark{report.warnings.length === 1 ? '' : 's'}
             </summary>
             <ul className="mt-1 list-disc pl-5">
               {report.warnings.map((w, i) => (

@@ -2,8 +2,10 @@ import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
 import { motorColor } from '../../../../components/charts/palette';
-import { CgDetail, TopView } from '../top-view';
-import { signedFixed } from '../../model/format';
+import { AirframeTopView } from '../../../../components/airframe/airframe-top-view';
+import { CgDetail } from '../cg-detail';
+import { topViewSummary } from '../../model/top-view-summary';
+import { signedFixed } from '../../../../lib/signed-fixed';
 import { MotorMarker } from '../../../../components/ui/motor-marker';
 
 export interface BalanceSectionProps {
@@ -41,7 +43,16 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
   return (
     <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,26rem)_1fr]">
       <figure className="flex flex-col items-center gap-2">
-        <TopView airframe={airframe} deviationPct={deviationPct} cg={report.cg} flagged={flagged} />
+        <AirframeTopView
+          motors={airframe.motors}
+          propDiameterIn={airframe.prop.diameterIn}
+          designCg={design}
+          estimatedCg={report.cg}
+          deviationPct={deviationPct}
+          flagged={flagged}
+          label={topViewSummary(airframe, deviationPct, report.cg, flagged)}
+          className="h-auto w-full max-w-[26rem]"
+        />
         <figcaption className="text-xs text-ink-faint">
           {airframe.name}
           {assumed && ' (assumed — pick the aircraft on import for its own geometry)'} · ring:

@@ -7,7 +7,7 @@ import { newAirframeForm } from '../../../../../src/features/aircraft/model/airf
 
 afterEach(cleanup);
 
-const motorsIn = (svg: HTMLElement) => within(svg).getAllByRole('group', { name: /^Motor \d+/ });
+const motorsIn = (svg: HTMLElement) => svg.querySelectorAll('[data-motor]');
 
 describe('airframe editor', () => {
   it('fills the motor table from a hex preset and draws six motors in the preview', async () => {
@@ -42,7 +42,7 @@ describe('airframe editor', () => {
     const user = userEvent.setup();
     render(<AirframeEditor initial={newAirframeForm('Kite')} onSubmit={vi.fn()} />);
     await user.selectOptions(screen.getByLabelText('Motor 1 spin'), 'cw');
-    expect(screen.getByRole('group', { name: 'Motor 1, cw' })).toBeTruthy();
+    expect(document.querySelector('[data-motor="1"] title')?.textContent).toMatch(/, cw$/);
     await user.click(screen.getByRole('button', { name: 'Add motor' }));
     expect(motorsIn(screen.getByRole('img', { name: /Top view/ }))).toHaveLength(5);
   });
@@ -92,7 +92,9 @@ describe('airframe editor', () => {
       .slice(1);
     expect(within(rows[0]!).getByText('28.2 %')).toBeTruthy();
     expect(within(rows[1]!).getByText('21.8 %')).toBeTruthy();
-    expect(screen.getByRole('group', { name: 'Design CG at x 10 mm, y 0 mm' })).toBeTruthy();
+    expect(document.querySelector('[data-design-cg] title')?.textContent).toBe(
+      'Design CG at x 10.0 mm, y 0.0 mm',
+    );
 
     await user.click(screen.getByRole('button', { name: 'Save airframe' }));
     expect(onSubmit.mock.calls[0]![0].airframe.cg).toEqual({ x: 10, y: 0 });
@@ -106,5 +108,18 @@ describe('airframe editor', () => {
     // 5-inch quad X arms are 110 mm: neighbours sit 155.6 mm apart; 7-inch discs (177.8 mm) overlap.
     await user.type(diameter, '7');
     expect(screen.getByText(/Prop discs overlap: 1–2, 1–4, 2–3, 3–4/)).toBeTruthy();
+  });
+
+  it('shows a stored airframe to 0.1 mm, and read-only for a role that cannot edit', () => {
+    // A quad X from its preset has arms at 110 · cos 45° = 77.781745… mm.
+    const stored = newAirframeForm('Kite');
+    expect(stored.airframe.motors[0]!.x).not.toBe(77.8);
+    render(<AirframeEditor initial={stored} onSubmit={vi.fn()} readOnly />);
+    const x = screen.getByLabelText('Motor 1 x (mm)') as HTMLInputElement;
+    expect(x.value).toBe('77.8');
+    expect(x.matches(':disabled')).toBe(true);
+    expect(screen.queryByRole('button', { name: 'Save airframe' })).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Add motor' })).toBeNull();
+    expect(screen.queryByRole('button', { name: /Move motor/ })).toBeNull();
   });
 });
