@@ -32,21 +32,30 @@ describe('restart durability', () => {
   const tmp = tempDir();
   let env: Record<string, string> = { DATA_DIR: tmp.dir };
   let stores: Stores | undefined;
-  const servers: SpawnedServer[] = [];
+  // Starts, including one still under way when a timeout ends the test: afterAll waits for it
+  // and stops it, so no server outlives the suite.
+  const starting: Promise<SpawnedServer>[] = [];
+  const start = () => {
+    const s = spawnServer(env);
+    starting.push(s);
+    return s;
+  };
+  let over = false;
   beforeAll(async () => {
     stores = await freshStores();
     env = { ...env, ...stores.env };
   });
   afterAll(async () => {
-    // Whatever happened above, no server outlives the test.
-    for (const s of servers) await s.stop('SIGKILL');
+    over = true;
+    for (const s of await Promise.allSettled(starting)) {
+      if (s.status === 'fulfilled') await s.value.stop('SIGKILL');
+    }
     await stores?.cleanup();
     tmp.cleanup();
   });
 
   it('keeps every comment acknowledged before the process is killed mid-write', async () => {
-    const first = await spawnServer(env);
-    servers.push(first);
+    const first = await start();
     const c = client(first.url);
     expect(
       (
@@ -73,7 +82,7 @@ describe('restart durability', () => {
     let killed = false;
     const writer = async (w: number) => {
       const me = client(first.url, c.cookie);
-      for (let i = 0; !killed; i++) {
+      for (let i = 0; !killed && !over; i++) {
         const id = randomUUID();
         const res = await me
           .call('PUT', `/api/comments/${id}`, { flightId, tS: i, body: `writer ${w}, ${i}` })
@@ -83,7 +92,7 @@ describe('restart durability', () => {
       }
     };
     const writers = Array.from({ length: 4 }, (_, w) => writer(w));
-    while (acknowledged.length < 40) await new Promise((r) => setTimeout(r, 10));
+    while (acknowledged.length < 40 && !over) await new Promise((r) => setTimeout(r, 10));
     first.child.kill('SIGKILL');
     killed = true;
     expect(await first.exited).toBeNull();
@@ -92,8 +101,8 @@ describe('restart durability', () => {
     // The process is gone, not just one of its wrappers: nothing answers on its port.
     expect(await portClosed(first.url)).toBe(true);
 
-    const second = await spawnServer(env);
-    servers.push(second);
+    if (over) return;
+    const second = await start();
     c.setBase(second.url);
     // The session survived too: the cookie still works.
     const list = await c.call('GET', `/api/flights/${flightId}/comments`);
