@@ -3,7 +3,7 @@ import type { Column, ParsedLog } from '../log/types';
 import type { Airframe } from '../schemas/airframe';
 import { analyseBalance, hoverMeans, type BalanceResult } from './balance';
 import { diagnose } from './diagnosis';
-import { computeDrift, type Baseline } from './drift';
+import { computeDrift, driftSample } from './drift';
 import { downsampleMinMax } from './downsample';
 import { decomposeEffort } from './effort';
 import { buildFindings } from './findings';
@@ -29,7 +29,7 @@ export interface AnalyzeOptions {
    */
   benchRun?: BenchRunTable;
   /** Earlier reports of the same aircraft, oldest first: the flight is also judged against them (drift). */
-  baseline?: Baseline;
+  baseline?: { reports: readonly FlightReport[]; label?: string };
 }
 
 export interface FlightAnalysis {
@@ -290,7 +290,12 @@ export function analyzeFlight(log: ParsedLog, options: AnalyzeOptions = {}): Fli
     drift: null,
   };
   if (options.baseline) {
-    const d = computeDrift(report, options.baseline, th);
+    const { reports, label } = options.baseline;
+    const d = computeDrift(
+      driftSample(report),
+      { samples: reports.map(driftSample), ...(label !== undefined ? { label } : {}) },
+      th,
+    );
     report.drift = d.drift;
     if (d.warning) warnings.push(d.warning);
     report.findings = [...findings, ...d.findings].sort(mostSevereFirst);

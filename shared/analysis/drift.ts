@@ -1,11 +1,27 @@
 import type { Drift, Finding, FlightReport } from '../schemas/report';
+import type { DriftSample } from '../schemas/baseline';
 import type { Thresholds } from '../schemas/thresholds';
 
-/** Earlier reports of the same aircraft, oldest first, and how to name them in the verdict. */
+/** Earlier flights of the same aircraft, oldest first, and how to name them in the verdict. */
 export interface Baseline {
-  reports: readonly FlightReport[];
+  samples: readonly DriftSample[];
   /** "Kite's last 6 flights, since the motor swap on 2 Dec"; default "this aircraft's last N flights". */
   label?: string;
+}
+
+/** What drift compares of one flight, from its report. */
+export function driftSample(r: FlightReport): DriftSample {
+  return {
+    hoverS: r.segments.hoverS,
+    deviationPct: r.balance.deviationPct,
+    asymmetryPct: r.torqueSplit.asymmetryPct,
+    cg: r.cg,
+    bandRms: Object.fromEntries(Object.entries(r.vibration).map(([ch, v]) => [ch, v.bandRms])),
+    internalResistanceOhm: r.power?.internalResistanceOhm ?? null,
+    lagMs: r.tracking
+      ? { roll: r.tracking.roll.lagMs, pitch: r.tracking.pitch.lagMs, yaw: r.tracking.yaw.lagMs }
+      : null,
+  };
 }
 
 /** Median of the finite values, NaN for none. */
@@ -34,15 +50,12 @@ const num = (v: number | null | undefined) => (v === null || v === undefined ? N
  * the most recent `driftMaxFlights` of them.
  */
 export function usableBaseline(
-  now: FlightReport,
-  reports: readonly FlightReport[],
+  now: DriftSample,
+  samples: readonly DriftSample[],
   th: Thresholds,
-): FlightReport[] {
-  const ok = reports.filter(
-    (r) =>
-      r.motorCount === now.motorCount &&
-      r.balance.deviationPct.length === now.balance.deviationPct.length &&
-      r.segments.hoverS >= th.minHoverForVerdictS,
+): DriftSample[] {
+  const ok = samples.filter(
+    (r) => r.deviationPct.length === now.deviationPct.length && r.hoverS >= th.minHoverForVerdictS,
   );
   return ok.slice(-th.driftMaxFlights);
 }
@@ -54,12 +67,12 @@ export function usableBaseline(
  * `driftMinFlights` earlier flights qualify.
  */
 export function computeDrift(
-  now: FlightReport,
+  now: DriftSample,
   baseline: Baseline,
   th: Thresholds,
 ): { drift: Drift | null; findings: Finding[]; warning?: string } {
-  const base = usableBaseline(now, baseline.reports, th);
-  if (base.length < th.driftMinFlights || now.balance.deviationPct.length === 0) {
+  const base = usableBaseline(now, baseline.samples, th);
+  if (base.length < th.driftMinFlights || now.deviationPct.length === 0) {
     return {
       drift: null,
       findings: [],
@@ -69,8 +82,8 @@ export function computeDrift(
     };
   }
   const label = baseline.label ?? `this aircraft's last ${base.length} flights`;
-  const motors = now.balance.deviationPct.map((nowPct, i) => {
-    const values = base.map((r) => r.balance.deviationPct[i]!);
+  const motors = now.deviationPct.map((nowPct, i) => {
+    const values = base.map((r) => r.deviationPct[i]!);
     const baselinePct = median(values);
     return {
       motor: i + 1,
@@ -80,12 +93,12 @@ export function computeDrift(
       changePts: round(nowPct - baselinePct),
     };
   });
-  const asym = base.map((r) => r.torqueSplit.asymmetryPct);
+  const asym = base.map((r) => r.asymmetryPct);
   const torqueSplit = {
     baselinePct: round(median(asym)),
     spreadPct: round(spread(asym)),
-    nowPct: round(now.torqueSplit.asymmetryPct),
-    changePts: round(now.torqueSplit.asymmetryPct - median(asym)),
+    nowPct: round(now.asymmetryPct),
+    changePts: round(now.asymmetryPct - median(asym)),
   };
   const cgs = base.flatMap((r) => (r.cg ? [r.cg] : []));
   const cg =
@@ -103,22 +116,22 @@ export function computeDrift(
         })()
       : null;
   const vibration: Drift['vibration'] = {};
-  for (const [channel, v] of Object.entries(now.vibration)) {
+  for (const [channel, nowRms] of Object.entries(now.bandRms)) {
     const values = base.flatMap((r) =>
-      r.vibration[channel] ? [r.vibration[channel]!.bandRms] : [],
+      r.bandRms[channel] !== undefined ? [r.bandRms[channel]] : [],
     );
     const m = median(values);
     if (!(m > 0)) continue;
     vibration[channel] = {
       baselineRms: round(m, 4),
       spreadRms: round(spread(values), 4),
-      nowRms: v.bandRms,
-      ratio: round(v.bandRms / m, 3),
+      nowRms,
+      ratio: round(nowRms / m, 3),
     };
   }
-  const ohms = base.map((r) => num(r.power?.internalResistanceOhm));
+  const ohms = base.map((r) => num(r.internalResistanceOhm));
   const baseOhm = median(ohms);
-  const nowOhm = num(now.power?.internalResistanceOhm);
+  const nowOhm = num(now.internalResistanceOhm);
   const power =
     Number.isFinite(baseOhm) && Number.isFinite(nowOhm) && baseOhm > 0
       ? {
@@ -129,9 +142,9 @@ export function computeDrift(
         }
       : null;
   const lagOf = (axis: 'roll' | 'pitch' | 'yaw') => {
-    const values = base.map((r) => num(r.tracking?.[axis].lagMs));
+    const values = base.map((r) => num(r.lagMs?.[axis]));
     const m = median(values);
-    const n = num(now.tracking?.[axis].lagMs);
+    const n = num(now.lagMs?.[axis]);
     if (!Number.isFinite(m) || !Number.isFinite(n)) return null;
     return {
       baselineMs: round(m),
@@ -140,7 +153,7 @@ export function computeDrift(
       changeMs: round(n - m),
     };
   };
-  const tracking = now.tracking
+  const tracking = now.lagMs
     ? { roll: lagOf('roll'), pitch: lagOf('pitch'), yaw: lagOf('yaw') }
     : null;
   const drift: Drift = {

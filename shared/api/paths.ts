@@ -32,6 +32,7 @@ export const paths = {
   benchRuns: '/api/aircraft/:id/bench-runs',
   benchRun: '/api/aircraft/:id/bench-runs/:runId',
   trends: '/api/aircraft/:id/trends',
+  aircraftBaseline: '/api/aircraft/:id/baseline',
 
   teamFlights: '/api/teams/:teamId/flights',
   flight: '/api/flights/:id',

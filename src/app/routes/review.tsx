@@ -8,6 +8,7 @@ import { ReviewPage } from '../../features/review/components/review-page';
 import { useAircraftAirframe } from '../../features/review/model/use-aircraft-airframe';
 import { defaultSection, isSectionId } from '../../features/review/model/sections';
 import { useCursor } from '../../features/review/model/use-cursor';
+import { useDrift } from '../../features/review/model/use-drift';
 import {
   CommentsRail,
   type CommentsRailHandle,
@@ -44,6 +45,10 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
   const signedIn = me !== null;
 
   const aircraft = useAircraftAirframe(flight, signedIn);
+  const drift = useDrift(flight, {
+    signedIn,
+    aircraftName: aircraft.aircraftName ?? flight.aircraftName,
+  });
   const role = me?.teams.find((t) => t.id === flight.teamId)?.role ?? null;
 
   const onServer = signedIn && flight.teamId !== null && flight.syncedToTeam;
@@ -138,6 +143,7 @@ function LoadedReview({ flight }: { flight: ReviewFlight }) {
       pins={pins}
       onPin={onPin}
       onCommentAtCursor={() => rail.current?.composeAtCursor()}
+      drift={drift}
       status={
         <>
           {status}

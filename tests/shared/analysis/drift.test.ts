@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeFlight } from '../../../shared/analysis/analyze-flight';
-import { computeDrift } from '../../../shared/analysis/drift';
+import { computeDrift, driftSample } from '../../../shared/analysis/drift';
 import type { FlightReport } from '../../../shared/schemas/report';
 import { defaultThresholds } from '../../../shared/schemas/thresholds';
 import { scenarios, withFaults } from '../../../shared/sim/scenarios';
@@ -61,16 +61,27 @@ describe('drift against the aircraft’s own recent flights', () => {
   });
 
   it('needs three earlier flights with enough hover, and says so', () => {
-    const r = computeDrift(healthy[0]!, { reports: healthy.slice(1) }, defaultThresholds);
+    const r = computeDrift(
+      driftSample(healthy[0]!),
+      { samples: healthy.slice(1).map(driftSample) },
+      defaultThresholds,
+    );
     expect(r.drift).toBeNull();
     expect(r.warning).toMatch(/at least 3 earlier flights/);
     const short = { ...healthy[0]!, segments: { ...healthy[0]!.segments, hoverS: 1 } };
-    const r2 = computeDrift(healthy[0]!, { reports: [short, short, short] }, defaultThresholds);
+    const r2 = computeDrift(
+      driftSample(healthy[0]!),
+      { samples: [short, short, short].map(driftSample) },
+      defaultThresholds,
+    );
     expect(r2.drift).toBeNull();
   });
 
   it('keeps only the most recent flights the team settings allow', () => {
     const th = { ...defaultThresholds, driftMaxFlights: 2, driftMinFlights: 2 };
-    expect(computeDrift(healthy[0]!, { reports: healthy }, th).drift!.flights).toBe(2);
+    expect(
+      computeDrift(driftSample(healthy[0]!), { samples: healthy.map(driftSample) }, th).drift!
+        .flights,
+    ).toBe(2);
   });
 });

@@ -19,6 +19,9 @@ import { TorqueSection } from './sections/torque-section';
 import { TrackingSection } from './sections/tracking-section';
 import { VibrationSection } from './sections/vibration-section';
 import type { TimeContext } from './sections/time-context';
+import type { DriftOutcome } from '../../../../shared/analysis/baseline';
+import { DriftLine } from './drift-line';
+import { withDrift } from '../model/with-drift';
 
 export interface ReviewPageProps {
   flight: ReviewFlight;
@@ -41,6 +44,8 @@ export interface ReviewPageProps {
   compare?: ReactNode;
   /** Sync state line for the header, composed by the route. */
   status?: ReactNode;
+  /** The flight against its aircraft's recent flights; null while loading, absent to leave it out. */
+  drift?: DriftOutcome | null;
 }
 
 function isTyping(target: EventTarget | null): boolean {
@@ -62,6 +67,7 @@ export function ReviewPage(props: ReviewPageProps) {
     rail,
     compare,
     status,
+    drift,
   } = props;
   const { report, detail } = flight;
   const { airframe, assumed: airframeAssumed } = drawnAirframe(flight, {
@@ -106,6 +112,7 @@ export function ReviewPage(props: ReviewPageProps) {
     if (f.tS !== undefined) onCursor(f.tS);
   };
   const info = sections.find((s) => s.id === section)!;
+  const findings = useMemo(() => withDrift(report.findings, drift), [report.findings, drift]);
 
   return (
     <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-[minmax(0,1fr)_20rem]">
@@ -136,9 +143,10 @@ export function ReviewPage(props: ReviewPageProps) {
         )}
         <VerdictList
           flightId={flight.id}
-          findings={report.findings}
+          findings={findings}
           hoverS={report.segments.hoverS}
           onSelect={selectFinding}
+          comparedWith={drift !== undefined && <DriftLine outcome={drift} />}
         />
         <FlightStrip effort={detail.effort} strip={strip} time={time} pins={pins} onPin={onPin} />
         <SectionNav flightId={flight.id} current={section} />

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { Finding } from '../../../../shared/schemas/report';
 import { rankFindings, sectionForFinding, sections } from '../model/sections';
@@ -10,13 +11,21 @@ export interface VerdictListProps {
   hoverS: number;
   /** Selecting a finding moves the shared cursor to its moment. */
   onSelect?: (finding: Finding) => void;
+  /** What the flight was judged against for drift, under the findings. */
+  comparedWith?: ReactNode;
 }
 
 const sectionLabel = (f: Finding) =>
   sections.find((s) => s.id === sectionForFinding(f))?.label ?? 'Evidence';
 
 /** The verdict: findings most severe first, each with what to do and where the evidence is. */
-export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictListProps) {
+export function VerdictList({
+  flightId,
+  findings,
+  hoverS,
+  onSelect,
+  comparedWith,
+}: VerdictListProps) {
   const ranked = rankFindings(findings);
   const counts = { act: 0, watch: 0, note: 0 };
   for (const f of findings) counts[f.severity]++;
@@ -81,6 +90,7 @@ export function VerdictList({ flightId, findings, hoverS, onSelect }: VerdictLis
           })}
         </ol>
       )}
+      {comparedWith}
       <p className="border-t border-line px-4 py-2 text-xs text-ink-faint">
         Findings are advice drawn from the log. Local aviation rules and licensed maintenance
         practice come first; check on the bench with props off before you change anything.
