@@ -23,6 +23,10 @@ test('a pilot drops a log with a weak motor and sees that motor named and marked
   await expect(verdict).toBeVisible();
   const findings = verdict.getByRole('list', { name: 'Findings' });
   await expect(findings.getByRole('listitem').first()).toContainText('Motor 3');
+  // Read before any team: drift has no aircraft to compare with, and says so.
+  await expect(verdict.getByTestId('drift-line')).toHaveText(
+    'No drift: this flight is not filed under an aircraft.',
+  );
   await expect(page.getByText(/40,00\d rows/)).toBeVisible();
 
   // Balance section: motor 3 ringed on the top view, the others not.

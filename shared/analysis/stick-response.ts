@@ -18,7 +18,7 @@ const MAX_HZ = 100;
  */
 const REF_HZ = 3;
 /** A bin whose magnitude-squared coherence reaches this is read; below it the input said too little. */
-const USABLE_COHERENCE = 0.6;
+export const USABLE_COHERENCE = 0.6;
 /** Setpoint RMS below this, deg/s, carries no timing or gain worth reading. */
 const MIN_INPUT_RMS = 2;
 /** Fewest Welch segments for an average worth the name. */

@@ -190,7 +190,12 @@ export function ReviewPage(props: ReviewPageProps) {
             />
           )}
           {evidenceShown && section === 'tracking' && (
-            <TrackingSection report={report} tracking={detail.tracking} time={time} />
+            <TrackingSection
+              report={report}
+              tracking={detail.tracking}
+              response={detail.stickResponse}
+              time={time}
+            />
           )}
           {evidenceShown && section === 'compare' && compare}
         </section>

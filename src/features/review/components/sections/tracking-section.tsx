@@ -1,8 +1,9 @@
 import type { FlightReport } from '../../../../../shared/schemas/report';
-import type { Trace } from '../../../../../shared/analysis/review-detail';
+import type { ReviewDetail, Trace } from '../../../../../shared/analysis/review-detail';
 import { TimeChart } from '../../../../components/charts/time-chart';
 import { inkSeries } from '../../../../components/charts/palette';
 import { followReviewTime, type TimeContext } from './time-context';
+import { StickResponse } from './stick-response';
 
 const axes = [
   { key: 'roll', gyro: 'gyro_x', sp: 'sp_roll', label: 'Roll' },
@@ -13,10 +14,13 @@ const axes = [
 export function TrackingSection({
   report,
   tracking,
+  response,
   time,
 }: {
   report: FlightReport;
   tracking: Trace | null;
+  /** Stick response curves from the review detail; absent in flights stored before them. */
+  response?: ReviewDetail['stickResponse'];
   time: TimeContext;
 }) {
   const t = report.tracking;
@@ -48,6 +52,7 @@ export function TrackingSection({
           ))}
         </tbody>
       </table>
+      <StickResponse tracking={t} curves={response} />
       {axes.map((a) => {
         const g = tracking.series[a.gyro];
         const s = tracking.series[a.sp];
