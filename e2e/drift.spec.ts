@@ -42,7 +42,10 @@ test('a flight is judged against its aircraft’s earlier flights, and Stick res
     .getByRole('link', { name: 'Tracking', exact: true })
     .click();
   const response = page.getByRole('table', { name: 'Stick response per axis' });
-  await expect(response).toContainText(/Roll\s*[\d.]+ Hz|Roll\s*beyond input/);
+  // This short hover-heavy flight may not move the sticks enough to read; either way it says so.
+  await expect(response).toContainText(
+    /Roll\s*(?:[\d.]+ Hz|beyond input)\s*[−-]?[\d.]+ dB|Roll\s*too little stick movement/,
+  );
   await expect(
     page.getByRole('img', { name: /Stick response, gain and phase against frequency\. Roll: / }),
   ).toBeVisible();

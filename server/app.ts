@@ -8,6 +8,7 @@ import type { Config } from './config';
 import { authRouter } from './auth/auth.router';
 import { commentsRouter } from './comments/comments.router';
 import { aircraftRouter } from './aircraft/aircraft.router';
+import { baselineRouter } from './baseline/baseline.router';
 import { flightsRouter } from './flights/flights.router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { healthRouter } from './http/health.router';
@@ -80,6 +81,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(teamsRouter(services));
   app.use(invitesRouter(services));
   app.use(aircraftRouter(services));
+  app.use(baselineRouter(services));
   app.use(presetsRouter(services));
   app.use(flightsRouter(services, config));
   app.use(commentsRouter(services));

@@ -3,6 +3,7 @@ import { AuthService } from './auth/auth.service';
 import { CommentsService } from './comments/comments.service';
 import type { Config } from './config';
 import { AircraftService } from './aircraft/aircraft.service';
+import { BaselineService } from './baseline/baseline.service';
 import { FlightsService } from './flights/flights.service';
 import { openRawStore } from './flights/open-raw-store';
 import { RawLogsService } from './flights/raw-logs.service';
@@ -23,6 +24,7 @@ export interface Services {
   invites: InvitesService;
   thresholds: ThresholdsService;
   aircraft: AircraftService;
+  baseline: BaselineService;
   flights: FlightsService;
   rawLogs: RawLogsService;
   reviews: ReviewsService;
@@ -51,12 +53,15 @@ export function createServices(
     rawLogs.release(key),
   );
   const rawLogs: RawLogsService = new RawLogsService(dataSource, flights, rawStore);
+  const thresholds = new ThresholdsService(dataSource, teams);
+  const aircraft = new AircraftService(dataSource, teams, (key) => rawLogs.release(key));
   return {
     auth: new AuthService(dataSource, config, mailer),
     teams,
     invites: new InvitesService(dataSource, config, mailer, teams),
-    thresholds: new ThresholdsService(dataSource, teams),
-    aircraft: new AircraftService(dataSource, teams, (key) => rawLogs.release(key)),
+    thresholds,
+    aircraft,
+    baseline: new BaselineService(dataSource, aircraft, thresholds),
     flights,
     rawLogs,
     reviews: new ReviewsService(

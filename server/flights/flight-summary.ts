@@ -33,5 +33,14 @@ export function trendOf(
     minCellV: report.power?.minCellV ?? null,
     internalResistanceOhm: report.power?.internalResistanceOhm ?? null,
     saturationS: report.headroom.saturationS,
+    // What drift reads of each earlier flight (shared/analysis/baseline.ts).
+    hoverS: report.segments.hoverS,
+    lagMs: report.tracking
+      ? {
+          roll: report.tracking.roll.lagMs,
+          pitch: report.tracking.pitch.lagMs,
+          yaw: report.tracking.yaw.lagMs,
+        }
+      : null,
   };
 }

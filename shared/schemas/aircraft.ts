@@ -162,6 +162,16 @@ export const TrendPoint = z.object({
   internalResistanceOhm: z.number().nullable(),
   saturationS: z.number(),
   worstSeverity: Severity.nullable(),
+  /** Seconds of steady hover and lag per axis, which drift reads; absent for flights stored before. */
+  hoverS: z.number().optional(),
+  lagMs: z
+    .object({
+      roll: z.number().nullable(),
+      pitch: z.number().nullable(),
+      yaw: z.number().nullable(),
+    })
+    .nullable()
+    .optional(),
 });
 export type TrendPoint = z.infer<typeof TrendPoint>;
 /** Oldest first, so charts draw left to right. */

@@ -3,6 +3,7 @@ import { FlightListIndexes1764806400000 } from '../migrations/1764806400000-flig
 import { Initial1764633600000 } from './1764633600000-initial';
 import { InviteWithdrawal1764720000000 } from './1764720000000-invite-withdrawal';
 import { Versions1764892800000 } from './1764892800000-versions';
+import { DriftSamples1764979200000 } from './1764979200000-drift-samples';
 
 /**
  * Every PostgreSQL migration in the order it must run. Each has the name of its SQLite twin in
@@ -14,4 +15,5 @@ export const postgresMigrations: (new () => MigrationInterface)[] = [
   InviteWithdrawal1764720000000,
   FlightListIndexes1764806400000,
   Versions1764892800000,
+  DriftSamples1764979200000,
 ];

@@ -23,6 +23,7 @@ describe('migrations', () => {
       'InviteWithdrawal1764720000000',
       'FlightListIndexes1764806400000',
       'Versions1764892800000',
+      'DriftSamples1764979200000',
     ]);
     const pending = await ds.driver.createSchemaBuilder().log();
     expect(pending.upQueries.map((q) => q.query)).toEqual([]);
