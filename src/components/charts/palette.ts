@@ -33,6 +33,8 @@ export const inkSeries = {
   after: '#1f3a4d',
   band: 'rgba(47,125,91,0.10)',
   cursor: '#c7771a',
+  /** A flight that raised drift, on the trend charts. */
+  drift: '#b4411e',
   grid: '#e6e1d6',
   axis: '#4a5866',
 } as const;

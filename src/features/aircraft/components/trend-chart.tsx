@@ -28,6 +28,7 @@ export function TrendChart({
   yName,
   minSpan,
   events = [],
+  marks = [],
   band,
   height = 200,
   ariaLabel,
@@ -37,6 +38,8 @@ export function TrendChart({
   /** Smallest value-axis span, in the chart's unit. */
   minSpan: number;
   events?: TrendEvent[];
+  /** Flights that raised drift against the aircraft's recent flights, drawn as solid lines. */
+  marks?: TrendEvent[];
   /** Shaded range, e.g. the watch limits around zero deviation. */
   band?: { from: number; to: number; label: string };
   height?: number;
@@ -91,7 +94,7 @@ export function TrendChart({
               }
             : undefined,
         markLine:
-          i === 0 && events.length > 0
+          i === 0 && events.length + marks.length > 0
             ? {
                 symbol: 'none',
                 silent: true,
@@ -101,16 +104,23 @@ export function TrendChart({
                   color: inkSeries.axis,
                   position: 'insideEndTop',
                 },
-                data: events.map((e) => ({
-                  xAxis: e.t,
-                  name: e.label,
-                  lineStyle: { color: inkSeries.cursor, type: 'dotted', width: 1 },
-                })),
+                data: [
+                  ...events.map((e) => ({
+                    xAxis: e.t,
+                    name: e.label,
+                    lineStyle: { color: inkSeries.cursor, type: 'dotted', width: 1 },
+                  })),
+                  ...marks.map((m) => ({
+                    xAxis: m.t,
+                    name: m.label,
+                    lineStyle: { color: inkSeries.drift, type: 'solid', width: 1.5 },
+                  })),
+                ],
               }
             : undefined,
       })),
     }),
-    [series, yName, events, band, axes],
+    [series, yName, events, marks, band, axes],
   );
   return <PaintedChart option={option} height={height} ariaLabel={ariaLabel} />;
 }

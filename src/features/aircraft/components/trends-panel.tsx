@@ -5,6 +5,22 @@ import { ErrorNote } from '../../../components/ui/alert';
 import { Empty, Loading } from '../../../components/ui/panel';
 import { useServiceLog, useTrends } from '../../../api/aircraft-records';
 import { TrendChart, type TrendEvent, type TrendSeries } from './trend-chart';
+import { useDriftMarks, type DriftMark } from '../model/drift-marks';
+
+/** Drift marks of the given codes as chart lines, and in words for the chart's label. */
+function marksOf(marks: DriftMark[], codes: string[]) {
+  const hits = marks.filter((m) => m.codes.some((c) => codes.includes(c)));
+  const lines = hits.map((m) => ({
+    t: m.t,
+    label: m.motors.length ? `drift m${m.motors.join(',')}` : 'drift',
+  }));
+  const words = hits.length
+    ? `; drift raised by ${hits.length} flight${hits.length === 1 ? '' : 's'} (${hits
+        .map((m) => m.recordedAt.slice(0, 10))
+        .join(', ')})`
+    : '';
+  return { lines, words };
+}
 
 const axisColors = {
   gyro_x: inkSeries.roll,
@@ -51,6 +67,10 @@ function seriesOf(
 export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
   const trends = useTrends(aircraftId);
   const service = useServiceLog(aircraftId);
+  const drift = useDriftMarks(aircraftId, trends.data?.points, service.data?.entries);
+  const balanceMarks = marksOf(drift, ['motor-drift']);
+  const vibrationMarks = marksOf(drift, ['vibration-drift']);
+  const packMarks = marksOf(drift, ['pack-ageing']);
   const events: TrendEvent[] = useMemo(
     () =>
       (service.data?.entries ?? []).map((e: ServiceEntry) => ({
@@ -102,14 +122,16 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
         <h2 className="text-sm font-semibold text-slate-brand">Balance: deviation per motor</h2>
         <p className="text-xs text-ink-soft">
           Hover output against what the airframe predicts. A motor drifting up is working harder:
-          check its bearings, prop and mounting.
+          check its bearings, prop and mounting. A solid line marks a flight that raised drift
+          against the aircraft’s recent flights; dotted lines are service-log entries.
         </p>
         <TrendChart
-          ariaLabel="Balance trend"
+          ariaLabel={`Balance trend${balanceMarks.words}`}
           yName="%"
           minSpan={MIN_SPAN.deviationPct}
           series={charts.balance}
           events={events}
+          marks={balanceMarks.lines}
         />
       </section>
       <section>
@@ -119,11 +141,12 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
           means a bent prop or shaft.
         </p>
         <TrendChart
-          ariaLabel="Vibration trend"
+          ariaLabel={`Vibration trend${vibrationMarks.words}`}
           yName="RMS"
           minSpan={MIN_SPAN.bandRms}
           series={charts.vibration}
           events={events}
+          marks={vibrationMarks.lines}
         />
       </section>
       <section>
@@ -147,10 +170,11 @@ export function TrendsPanel({ aircraftId }: { aircraftId: string }) {
           events={events}
         />
         <TrendChart
-          ariaLabel="Pack resistance trend"
+          ariaLabel={`Pack resistance trend${packMarks.words}`}
           yName="mΩ"
           minSpan={MIN_SPAN.milliohms}
           series={charts.resistance}
+          marks={packMarks.lines}
           height={150}
         />
       </section>
