@@ -7,6 +7,7 @@ import { analyzeFlight } from '../../shared/analysis/analyze-flight';
 import { DEMO_PASSWORD, demoMembers, demoTeam } from '../../shared/sim/demo/crew';
 import { demoComments } from '../../shared/sim/demo/comments';
 import { demoFleet } from '../../shared/sim/demo/fleet';
+import { demoBenchRuns } from '../../shared/sim/demo/bench-runs';
 import { demoFlights, demoServiceLog } from '../../shared/sim/demo/flights';
 import { demoFlightLog } from '../../shared/sim/demo/demo-flight-log';
 import { writeCanonicalCsvBytes } from '../../shared/sim/csv-writer';
@@ -93,6 +94,8 @@ export async function loadDemo(
       note: `${entry.title}. ${entry.body}`,
     });
   }
+  for (const b of demoBenchRuns)
+    await services.fleet.addBenchRun(idOf(b.author), aircraftIds.get(b.aircraft)!, b.run);
 
   const staging = await mkdtemp(join(tmpdir(), 'hoverprint-demo-'));
   const flightIds: string[] = [];

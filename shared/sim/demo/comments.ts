@@ -37,7 +37,7 @@ export const demoComments: DemoComment[] = [
     flight: 8,
     author: 'wren',
     tS: moment(8, 'hover', 1),
-    body: 'Motor 3 is sitting about 5 % above its neighbours in every hover, and it has crept up since September. Worth feeling the bearings and checking the prop nut before the next session.',
+    body: 'Drift caught it: motor 3 works about 4 points harder than in Kite’s three flights before, though still under the fixed limits. Worth feeling the bearings and checking the prop nut before the next session.',
     replies: [{ author: 'tobin', body: 'It was warmer than the others after the last pack.' }],
   },
   {

@@ -1,6 +1,11 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { judgeAgainst } from '../../../shared/analysis/baseline';
+import { driftSample } from '../../../shared/analysis/drift';
+import { BenchRunList, ServiceLog } from '../../../shared/schemas/aircraft';
+import { AircraftBaseline } from '../../../shared/schemas/baseline';
 import { FlightDetail, FlightPage } from '../../../shared/schemas/flights';
+import { defaultThresholds } from '../../../shared/schemas/thresholds';
 import { DEMO_PASSWORD, demoMembers } from '../../../shared/sim/demo/crew';
 import { demoFlights } from '../../../shared/sim/demo/flights';
 import { demoComments } from '../../../shared/sim/demo/comments';
@@ -80,6 +85,58 @@ describe('demo loader', () => {
     );
     const finding = detail.report.findings.find((f) => f.code === 'motor-working-hard');
     expect(finding?.motor).toBe(3);
+  });
+
+  it("catches Kite's worn motor 3 by drift a flight before the fixed limits do", async () => {
+    const { agent } = await signedIn('tobin');
+    const worn = demoFlights.filter(
+      (f) =>
+        f.aircraft === 'kite' &&
+        f.faults.some((x) => x.kind === 'weak-motor' && x.efficiency < 0.99),
+    );
+    const [first, second] = worn;
+    const judge = async (f: (typeof demoFlights)[number]) => {
+      const detail = FlightDetail.parse(
+        (await agent.get(`/api/flights/${demoId('flight', f.index)}`).expect(200)).body,
+      );
+      const baseline = AircraftBaseline.parse(
+        (
+          await agent
+            .get(`/api/aircraft/${detail.aircraftId}/baseline`)
+            .query({ before: f.date, exclude: detail.id })
+            .expect(200)
+        ).body,
+      );
+      return {
+        fixed: detail.report.findings.filter((x) => x.code === 'motor-working-hard'),
+        drift: judgeAgainst(driftSample(detail.report), f.date, baseline, defaultThresholds),
+      };
+    };
+    const a = await judge(first!);
+    expect(a.fixed).toEqual([]);
+    expect(a.drift.kind).toBe('compared');
+    if (a.drift.kind === 'compared') {
+      expect(a.drift.against).toBe('Kite’s last 3 flights');
+      expect(a.drift.findings.map((x) => [x.code, x.motor])).toEqual([['motor-drift', 3]]);
+    }
+    const b = await judge(second!);
+    expect(b.fixed.map((x) => x.motor)).toEqual([3]);
+  });
+
+  it('keeps the bench runs its service log cites', async () => {
+    const { agent, teamId } = await signedIn('maren');
+    const aircraft = (await agent.get(`/api/teams/${teamId}/aircraft`).expect(200)).body as {
+      aircraft: { id: string; name: string }[];
+    };
+    const kite = aircraft.aircraft.find((a) => a.name === 'Kite')!;
+    const log = ServiceLog.parse((await agent.get(`/api/aircraft/${kite.id}/service-log`)).body);
+    const runs = BenchRunList.parse((await agent.get(`/api/aircraft/${kite.id}/bench-runs`)).body);
+    const citing = log.entries.filter((e) => /bench run/i.test(e.note));
+    expect(citing.length).toBeGreaterThan(0);
+    for (const e of citing) {
+      const runsBefore = runs.runs.filter((r) => r.date <= e.date);
+      expect(runsBefore.some((r) => /motor 3/i.test(r.motor))).toBe(true);
+    }
   });
 
   it("tells Heron's story: the CG estimate moves forward after the camera swap", async () => {
