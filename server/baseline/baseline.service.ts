@@ -1,12 +1,16 @@
 import { And, In, LessThan, LessThanOrEqual, MoreThanOrEqual, type DataSource } from 'typeorm';
-import { CONFIG_CHANGES, selectBaseline } from '../../shared/analysis/baseline';
+import {
+  CONFIG_CHANGES,
+  sampleOfTrend,
+  selectBaseline,
+  type StoredTrend,
+} from '../../shared/analysis/baseline';
 import type { ServiceKind } from '../../shared/schemas/aircraft';
 import type {
   AircraftBaseline,
   BaselineCut,
   BaselineFlight,
   BaselineQuery,
-  DriftSample,
 } from '../../shared/schemas/baseline';
 import type { AircraftService } from '../aircraft/aircraft.service';
 import { ServiceEntry } from '../aircraft/service-entry.entity';
@@ -21,21 +25,6 @@ import { iso } from '../util';
  */
 const SCAN_PER_FLIGHT = 4;
 const SCAN_MAX = 200;
-
-type StoredTrend = Partial<DriftSample> & Pick<DriftSample, 'deviationPct' | 'asymmetryPct'>;
-
-/** A stored flight's trend JSON as a drift sample; flights stored before hover was kept count as short. */
-function sampleOf(trend: StoredTrend): DriftSample {
-  return {
-    hoverS: trend.hoverS ?? 0,
-    deviationPct: trend.deviationPct,
-    asymmetryPct: trend.asymmetryPct,
-    cg: trend.cg ?? null,
-    bandRms: trend.bandRms ?? {},
-    internalResistanceOhm: trend.internalResistanceOhm ?? null,
-    lagMs: trend.lagMs ?? null,
-  };
-}
 
 /** The aircraft's recent flights a flight's drift is judged against (shared/analysis/baseline.ts). */
 export class BaselineService {
@@ -74,7 +63,7 @@ export class BaselineService {
     const candidates: BaselineFlight[] = rows.map((f) => ({
       flightId: f.id,
       recordedAt: iso(f.recordedAt),
-      sample: sampleOf(JSON.parse(f.trend) as StoredTrend),
+      sample: sampleOfTrend(JSON.parse(f.trend) as StoredTrend),
     }));
     const picked = selectBaseline(
       candidates,

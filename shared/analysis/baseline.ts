@@ -22,6 +22,22 @@ export const CONFIG_CHANGES: readonly ServiceKind[] = [
   'tune',
 ];
 
+/** A stored flight's trend numbers, which carry hover and lag only since drift existed. */
+export type StoredTrend = Partial<DriftSample> & Pick<DriftSample, 'deviationPct' | 'asymmetryPct'>;
+
+/** A stored trend as a drift sample; flights stored before hover was kept never join a baseline. */
+export function sampleOfTrend(trend: StoredTrend): DriftSample {
+  return {
+    hoverS: trend.hoverS ?? 0,
+    deviationPct: trend.deviationPct,
+    asymmetryPct: trend.asymmetryPct,
+    cg: trend.cg ?? null,
+    bandRms: trend.bandRms ?? {},
+    internalResistanceOhm: trend.internalResistanceOhm ?? null,
+    lagMs: trend.lagMs ?? null,
+  };
+}
+
 /** UTC day (YYYY-MM-DD) of an ISO time. */
 const dayOf = (iso: string) => new Date(iso).toISOString().slice(0, 10);
 

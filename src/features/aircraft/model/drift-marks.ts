@@ -5,10 +5,11 @@ import { thresholdQueries } from '../../../api/thresholds';
 import {
   judgeAgainst,
   latestConfigChange,
+  sampleOfTrend,
   selectBaseline,
 } from '../../../../shared/analysis/baseline';
 import type { ServiceEntry, TrendPoint } from '../../../../shared/schemas/aircraft';
-import type { BaselineFlight, DriftSample } from '../../../../shared/schemas/baseline';
+import type { BaselineFlight } from '../../../../shared/schemas/baseline';
 import type { FindingCode } from '../../../../shared/schemas/report';
 import { defaultThresholds, type Thresholds } from '../../../../shared/schemas/thresholds';
 
@@ -20,17 +21,6 @@ export interface DriftMark {
   /** Motors with `motor-drift`. */
   motors: number[];
 }
-
-const sampleOf = (p: TrendPoint): DriftSample => ({
-  // Flights stored before hover was kept never join a baseline.
-  hoverS: p.hoverS ?? 0,
-  deviationPct: p.deviationPct,
-  asymmetryPct: p.asymmetryPct,
-  cg: p.cg,
-  bandRms: p.bandRms,
-  internalResistanceOhm: p.internalResistanceOhm,
-  lagMs: p.lagMs ?? null,
-});
 
 /**
  * Each trend flight judged as its review judges it (shared/analysis/baseline.ts): against the
@@ -44,7 +34,7 @@ export function driftMarks(
   const flights: BaselineFlight[] = points.map((p) => ({
     flightId: p.flightId,
     recordedAt: p.recordedAt,
-    sample: sampleOf(p),
+    sample: sampleOfTrend(p),
   }));
   const marks: DriftMark[] = [];
   for (const f of flights) {
