@@ -95,7 +95,7 @@ export async function loadDemo(
     });
   }
   for (const b of demoBenchRuns)
-    await services.fleet.addBenchRun(idOf(b.author), aircraftIds.get(b.aircraft)!, b.run);
+    await services.aircraft.addBenchRun(idOf(b.author), aircraftIds.get(b.aircraft)!, b.run);
 
   const staging = await mkdtemp(join(tmpdir(), 'hoverprint-demo-'));
   const flightIds: string[] = [];
