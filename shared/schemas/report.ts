@@ -12,6 +12,8 @@ export const REPORT_VERSION = 1;
 export const Severity = z.enum(['note', 'watch', 'act']);
 export type Severity = z.infer<typeof Severity>;
 export const SEVERITIES: readonly Severity[] = Severity.options;
+/** The same order read most severe first, as verdict counts are written ("1 act · 2 watch"). */
+export const SEVERITIES_MOST_FIRST: readonly Severity[] = [...SEVERITIES].reverse();
 
 /** 0 for `note` up to 2 for `act`. */
 export function severityRank(s: Severity): number {

@@ -1,4 +1,5 @@
 import type { FlightFilter } from '../../../api/flight-list';
+import { SEVERITIES } from '../../../../shared/schemas/report';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 
@@ -62,9 +63,11 @@ export function FlightFilters({
         }
       >
         <option value="">Any</option>
-        <option value="note">note</option>
-        <option value="watch">watch</option>
-        <option value="act">act</option>
+        {SEVERITIES.map((s) => (
+          <option key={s} value={s}>
+            {s}
+          </option>
+        ))}
       </SelectField>
       <SelectField
         label="Review"

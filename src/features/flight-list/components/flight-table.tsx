@@ -6,6 +6,7 @@ import {
 } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import type { FlightSummary, ReviewState } from '../../../../shared/schemas/flights';
+import { SEVERITIES_MOST_FIRST } from '../../../../shared/schemas/report';
 import { SeverityBadge } from '../../../components/ui/severity-badge';
 import { formatDuration, formatWhen } from './format';
 
@@ -40,13 +41,13 @@ const columns = [
   column.accessor('worstSeverity', {
     header: 'Verdict',
     cell: (c) => {
-      const { act, watch, note } = c.row.original.findingCounts;
+      const counts = c.row.original.findingCounts;
       return (
         <span className="flex items-center gap-2">
           <SeverityBadge severity={c.getValue()} />
           <span className="num text-xs text-ink-faint">
-            {[act > 0 && `${act} act`, watch > 0 && `${watch} watch`, note > 0 && `${note} note`]
-              .filter(Boolean)
+            {SEVERITIES_MOST_FIRST.filter((s) => counts[s] > 0)
+              .map((s) => `${counts[s]} ${s}`)
               .join(' · ')}
           </span>
         </span>

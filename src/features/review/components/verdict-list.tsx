@@ -1,6 +1,11 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import type { Finding } from '../../../../shared/schemas/report';
+import {
+  SEVERITIES,
+  SEVERITIES_MOST_FIRST,
+  type Finding,
+  type Severity,
+} from '../../../../shared/schemas/report';
 import { rankFindings, sectionForFinding, sections } from '../model/sections';
 import { SeverityBadge } from '../../../components/ui/severity-badge';
 import { MotorMarker } from '../../../components/ui/motor-marker';
@@ -27,7 +32,7 @@ export function VerdictList({
   comparedWith,
 }: VerdictListProps) {
   const ranked = rankFindings(findings);
-  const counts = { act: 0, watch: 0, note: 0 };
+  const counts = Object.fromEntries(SEVERITIES.map((s) => [s, 0])) as Record<Severity, number>;
   for (const f of findings) counts[f.severity]++;
   return (
     <section aria-labelledby="verdict-title" className="rounded border border-line bg-paper-raised">
@@ -36,8 +41,8 @@ export function VerdictList({
           Verdict
         </h2>
         <p className="num text-xs text-ink-soft">
-          {counts.act} act · {counts.watch} watch · {counts.note} note · {hoverS.toFixed(1)} s of
-          hover measured
+          {SEVERITIES_MOST_FIRST.map((s) => `${counts[s]} ${s}`).join(' · ')} · {hoverS.toFixed(1)}{' '}
+          s of hover measured
         </p>
       </header>
       {ranked.length === 0 ? (
