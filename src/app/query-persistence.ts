@@ -36,6 +36,9 @@ export function restoreQueries(client: QueryClient, storage: Storage = localStor
   try {
     const raw = storage.getItem(KEY);
     if (raw) hydrate(client, JSON.parse(raw));
+    // What was kept is shown at once but read again on first use: a copy saved seconds ago
+    // would otherwise count as fresh and hide a change made meanwhile on another device.
+    void client.invalidateQueries({ predicate: (q) => isKept(q.queryKey), refetchType: 'none' });
   } catch {
     storage.removeItem(KEY); // unreadable: start empty rather than fail to start
   }

@@ -43,6 +43,9 @@ describe('query persistence', () => {
     expect(after.getQueryData(['aircraft', 'detail', 'a1', 'service-log'])).toBeUndefined();
     expect(after.getQueryData(['review', 'flight', 'f1'])).toBeUndefined();
     expect(after.getQueryData(flightKeys.detail('f1'))).toBeUndefined();
+    // Shown at once, but read again on first use: a change made meanwhile elsewhere shows up.
+    expect(after.getQueryState(flightKeys.list('team-1', {}))?.isInvalidated).toBe(true);
+    expect(after.getQueryState(teamKeys.members('team-1'))?.isInvalidated).toBe(true);
   });
 
   it('keeps nothing of a key that only starts like a kept one', () => {
