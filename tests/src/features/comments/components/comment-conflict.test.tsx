@@ -4,30 +4,18 @@ import userEvent from '@testing-library/user-event';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { Comment } from '../../../../../shared/schemas/comments';
+import { comment, flightId, pilot } from '../../../helpers/comment-fixture';
 import type { Role } from '../../../../../shared/schemas/common';
 import { CommentsRail } from '../../../../../src/features/comments/components/comments-rail';
 
 const teamId = '0b7e6d1a-2f43-4c1e-9d7a-5a3c2b1e0f01';
-const flightId = '7d2f1c3b-4e5a-4b6c-8d7e-9f0a1b2c3d4e';
-const pilot = { id: '11111111-1111-4111-8111-111111111111', name: 'Rosa Kite' };
 const coach = { id: '22222222-2222-4222-8222-222222222222', name: 'Dev Heron' };
 
-const mine: Comment = {
+const mine = comment({
   id: 'aaaaaaaa-0000-4000-8000-000000000001',
-  flightId,
-  parentId: null,
   tS: 7.5,
-  channel: null,
   body: 'Hover drifts left here.',
-  deleted: false,
-  author: pilot,
-  mentions: [],
-  resolvedAt: null,
-  resolvedBy: null,
-  editedAt: null,
-  createdAt: '2026-05-02T10:00:00.000Z',
-  version: 1,
-};
+});
 
 let patches: { ifMatch: string | null; body: unknown }[];
 /** What the server holds: the coach resolved the thread (version 2) after this page loaded. */
