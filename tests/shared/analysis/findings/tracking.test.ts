@@ -11,6 +11,8 @@ const analyse = (name: string) => {
 };
 const axis = (lagMs: number) => ({ rmsDegS: 2, lagMs, worstAtS: 1, response: null });
 
+// The lag limits (note 10, watch 25, act 50 ms at 5 in, scaled by (prop/5)^1.5) are from
+// memory of common tuning practice, not a published standard; these tests pin that rule.
 describe('tracking lag findings', () => {
   it('a 5-inch aircraft trailing by more than 10 ms gets a note naming the usual causes', () => {
     const f = trackingFindings(
