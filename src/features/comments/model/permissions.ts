@@ -1,4 +1,4 @@
-import { can } from '../../../../shared/auth/permissions';
+import { can, canOnRecord } from '../../../../shared/auth/permissions';
 import type { Role } from '../../../../shared/schemas/common';
 
 export interface CommentRights {
@@ -13,8 +13,9 @@ export interface CommentRights {
 
 /**
  * What the rail shows, from the shared roles table (the server checks it again): viewers read
- * only; coaches, tuners and owners resolve; a pilot resolves on their own flights. Editing or
- * deleting one's own comment follows the current role, so a member demoted to viewer loses it.
+ * only; coaches, tuners and owners resolve; a pilot resolves, and asks for a review, on their own
+ * flights only. Editing or deleting one's own comment follows the current role, so a member
+ * demoted to viewer loses it.
  */
 export function commentRights(
   role: Role | null,
@@ -28,7 +29,9 @@ export function commentRights(
     canResolve:
       member &&
       (can(role, 'comments.resolveAny') || (ownFlight && can(role, 'comments.resolveOnOwnFlight'))),
-    canRequestReview: member && can(role, 'flights.requestReview'),
+    // The server refuses a pilot's request on a flight someone else flew; owners and tuners ask for any.
+    canRequestReview:
+      member && canOnRecord(role, 'flights.requestReviewAny', 'flights.requestReview', ownFlight),
     canEditOwn: member && can(role, 'comments.editOwn'),
     canDeleteOwn: member && can(role, 'comments.deleteOwn'),
     canDeleteAny: member && can(role, 'comments.deleteAny'),

@@ -39,6 +39,8 @@ describe('comment rights in the rail', () => {
   it('keeps requesting review to those who upload and deleting others’ comments to the owner', () => {
     expect(commentRights('coach', 'u1', 'u2').canRequestReview).toBe(false);
     expect(commentRights('pilot', 'u1', 'u1').canRequestReview).toBe(true);
+    expect(commentRights('pilot', 'u1', 'u2').canRequestReview).toBe(false);
+    expect(commentRights('tuner', 'u1', 'u2').canRequestReview).toBe(true);
     expect(commentRights('tuner', 'u1', 'u2').canDeleteAny).toBe(false);
     expect(commentRights('owner', 'u1', 'u2').canDeleteAny).toBe(true);
   });
