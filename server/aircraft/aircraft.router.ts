@@ -20,7 +20,7 @@ import {
   TeamIdParam,
 } from '../../shared/schemas/common';
 import { requireUser } from '../http/session';
-import { expectedVersion, sendVersion } from '../http/versions';
+import { createRoute, deleteRoute, versionedWriteRoute } from '../http/routes';
 import type { Services } from '../services';
 
 export function aircraftRouter({ aircraft: service }: Services) {
@@ -32,36 +32,33 @@ export function aircraftRouter({ aircraft: service }: Services) {
       aircraft: await service.list(user.id, TeamIdParam.parse(req.params).teamId),
     } satisfies AircraftList);
   });
-  router.post(paths.teamAircraft, async (req, res) => {
-    const user = requireUser(req);
-    const { teamId } = TeamIdParam.parse(req.params);
-    res
-      .status(201)
-      .json(
-        (await service.create(user.id, teamId, AircraftInput.parse(req.body))) satisfies Aircraft,
-      );
-  });
+  router.post(
+    paths.teamAircraft,
+    createRoute(
+      TeamIdParam,
+      AircraftInput,
+      (userId, { teamId }, input) =>
+        service.create(userId, teamId, input) satisfies Promise<Aircraft>,
+    ),
+  );
   router.get(paths.aircraft, async (req, res) => {
     const user = requireUser(req);
     res.json((await service.get(user.id, IdParam.parse(req.params).id)) satisfies Aircraft);
   });
-  router.patch(paths.aircraft, async (req, res) => {
-    const user = requireUser(req);
-    const { id } = IdParam.parse(req.params);
-    const aircraft = await service.update(
-      user.id,
-      id,
-      AircraftPatch.parse(req.body),
-      expectedVersion(req),
-    );
-    // No ETag on GET: the answer also carries flight counts that change without a new version.
-    sendVersion(res, aircraft.version).json(aircraft satisfies Aircraft);
-  });
-  router.delete(paths.aircraft, async (req, res) => {
-    const user = requireUser(req);
-    await service.remove(user.id, IdParam.parse(req.params).id);
-    res.status(204).end();
-  });
+  // No ETag on GET: the answer also carries flight counts that change without a new version.
+  router.patch(
+    paths.aircraft,
+    versionedWriteRoute(
+      IdParam,
+      AircraftPatch,
+      (userId, { id }, patch, version) =>
+        service.update(userId, id, patch, version) satisfies Promise<Aircraft>,
+    ),
+  );
+  router.delete(
+    paths.aircraft,
+    deleteRoute(IdParam, (userId, { id }) => service.remove(userId, id)),
+  );
 
   router.get(paths.serviceLog, async (req, res) => {
     const user = requireUser(req);
@@ -69,26 +66,22 @@ export function aircraftRouter({ aircraft: service }: Services) {
       entries: await service.serviceLog(user.id, IdParam.parse(req.params).id),
     } satisfies ServiceLog);
   });
-  router.post(paths.serviceLog, async (req, res) => {
-    const user = requireUser(req);
-    const { id } = IdParam.parse(req.params);
-    res
-      .status(201)
-      .json(
-        (await service.addServiceEntry(
-          user.id,
-          id,
-          ServiceEntryInput.parse(req.body),
-        )) satisfies ServiceEntry,
-      );
-  });
+  router.post(
+    paths.serviceLog,
+    createRoute(
+      IdParam,
+      ServiceEntryInput,
+      (userId, { id }, input) =>
+        service.addServiceEntry(userId, id, input) satisfies Promise<ServiceEntry>,
+    ),
+  );
 
-  router.delete(paths.serviceEntry, async (req, res) => {
-    const user = requireUser(req);
-    const { id, entryId } = ServiceEntryParam.parse(req.params);
-    await service.removeServiceEntry(user.id, id, entryId);
-    res.status(204).end();
-  });
+  router.delete(
+    paths.serviceEntry,
+    deleteRoute(ServiceEntryParam, (userId, { id, entryId }) =>
+      service.removeServiceEntry(userId, id, entryId),
+    ),
+  );
 
   router.get(paths.benchRuns, async (req, res) => {
     const user = requireUser(req);
@@ -96,22 +89,21 @@ export function aircraftRouter({ aircraft: service }: Services) {
       runs: await service.benchRuns(user.id, IdParam.parse(req.params).id),
     } satisfies BenchRunList);
   });
-  router.post(paths.benchRuns, async (req, res) => {
-    const user = requireUser(req);
-    const { id } = IdParam.parse(req.params);
-    res
-      .status(201)
-      .json(
-        (await service.addBenchRun(user.id, id, BenchRunInput.parse(req.body))) satisfies BenchRun,
-      );
-  });
+  router.post(
+    paths.benchRuns,
+    createRoute(
+      IdParam,
+      BenchRunInput,
+      (userId, { id }, input) => service.addBenchRun(userId, id, input) satisfies Promise<BenchRun>,
+    ),
+  );
 
-  router.delete(paths.benchRun, async (req, res) => {
-    const user = requireUser(req);
-    const { id, runId } = BenchRunParam.parse(req.params);
-    await service.removeBenchRun(user.id, id, runId);
-    res.status(204).end();
-  });
+  router.delete(
+    paths.benchRun,
+    deleteRoute(BenchRunParam, (userId, { id, runId }) =>
+      service.removeBenchRun(userId, id, runId),
+    ),
+  );
 
   router.get(paths.trends, async (req, res) => {
     const user = requireUser(req);

@@ -8,7 +8,7 @@ import {
 } from '../../shared/schemas/comments';
 import { IdParam } from '../../shared/schemas/common';
 import { requireUser } from '../http/session';
-import { expectedVersion, sendVersion } from '../http/versions';
+import { deleteRoute, versionedWriteRoute } from '../http/routes';
 import type { Services } from '../services';
 
 export function commentsRouter({ comments }: Services) {
@@ -29,23 +29,20 @@ export function commentsRouter({ comments }: Services) {
     res.status(created ? 201 : 200).json(comment satisfies Comment);
   });
 
-  router.patch(paths.comment, async (req, res) => {
-    const user = requireUser(req);
-    const { id } = IdParam.parse(req.params);
-    const comment = await comments.patch(
-      user.id,
-      id,
-      CommentPatch.parse(req.body),
-      expectedVersion(req),
-    );
-    sendVersion(res, comment.version).json(comment satisfies Comment);
-  });
+  router.patch(
+    paths.comment,
+    versionedWriteRoute(
+      IdParam,
+      CommentPatch,
+      (userId, { id }, patch, version) =>
+        comments.patch(userId, id, patch, version) satisfies Promise<Comment>,
+    ),
+  );
 
-  router.delete(paths.comment, async (req, res) => {
-    const user = requireUser(req);
-    await comments.remove(user.id, IdParam.parse(req.params).id);
-    res.status(204).end();
-  });
+  router.delete(
+    paths.comment,
+    deleteRoute(IdParam, (userId, { id }) => comments.remove(userId, id)),
+  );
 
   return router;
 }

@@ -15,6 +15,7 @@ import {
 } from '../../shared/schemas/flights';
 import type { Config } from '../config';
 import { BadRequestError, TooLargeError } from '../http/errors';
+import { deleteRoute } from '../http/routes';
 import { requireUser } from '../http/session';
 import type { Services } from '../services';
 import { rawUpload, type StagedFile } from './raw-upload';
@@ -65,11 +66,10 @@ export function flightsRouter({ flights, rawLogs, reviews }: Services, config: C
     res.json((await flights.get(user.id, IdParam.parse(req.params).id)) satisfies FlightDetail);
   });
 
-  router.delete(paths.flight, async (req, res) => {
-    const user = requireUser(req);
-    await flights.remove(user.id, IdParam.parse(req.params).id);
-    res.status(204).end();
-  });
+  router.delete(
+    paths.flight,
+    deleteRoute(IdParam, (userId, { id }) => flights.remove(userId, id)),
+  );
 
   /** multipart/form-data with one part `file`: the log exactly as dropped (.csv or .csv.gz). */
   router.put(paths.flightRaw, async (req, res) => {

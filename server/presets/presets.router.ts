@@ -8,7 +8,7 @@ import {
   type PresetList,
 } from '../../shared/schemas/presets';
 import { requireUser } from '../http/session';
-import { expectedVersion, sendVersion } from '../http/versions';
+import { createRoute, deleteRoute, versionedWriteRoute } from '../http/routes';
 import type { Services } from '../services';
 
 /** A team's import presets: saved column maps for log layouts it meets often. */
@@ -21,29 +21,28 @@ export function presetsRouter({ presets }: Services) {
       presets: await presets.list(user.id, TeamIdParam.parse(req.params).teamId),
     } satisfies PresetList);
   });
-  router.post(paths.presets, async (req, res) => {
-    const user = requireUser(req);
-    const { teamId } = TeamIdParam.parse(req.params);
-    res
-      .status(201)
-      .json((await presets.create(user.id, teamId, PresetInput.parse(req.body))) satisfies Preset);
-  });
-  router.patch(paths.preset, async (req, res) => {
-    const user = requireUser(req);
-    const { id } = IdParam.parse(req.params);
-    const preset = await presets.update(
-      user.id,
-      id,
-      PresetPatch.parse(req.body),
-      expectedVersion(req),
-    );
-    sendVersion(res, preset.version).json(preset satisfies Preset);
-  });
-  router.delete(paths.preset, async (req, res) => {
-    const user = requireUser(req);
-    await presets.remove(user.id, IdParam.parse(req.params).id);
-    res.status(204).end();
-  });
+  router.post(
+    paths.presets,
+    createRoute(
+      TeamIdParam,
+      PresetInput,
+      (userId, { teamId }, input) =>
+        presets.create(userId, teamId, input) satisfies Promise<Preset>,
+    ),
+  );
+  router.patch(
+    paths.preset,
+    versionedWriteRoute(
+      IdParam,
+      PresetPatch,
+      (userId, { id }, patch, version) =>
+        presets.update(userId, id, patch, version) satisfies Promise<Preset>,
+    ),
+  );
+  router.delete(
+    paths.preset,
+    deleteRoute(IdParam, (userId, { id }) => presets.remove(userId, id)),
+  );
 
   return router;
 }

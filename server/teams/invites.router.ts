@@ -9,6 +9,7 @@ import {
   type InvitePreview,
 } from '../../shared/schemas/teams';
 import { inviteRateLimits } from '../http/rate-limit';
+import { deleteRoute } from '../http/routes';
 import { requireUser } from '../http/session';
 import type { Services } from '../services';
 
@@ -27,12 +28,12 @@ export function invitesRouter({ invites, rateLimits }: Services) {
     const { invite, created } = await invites.create(user.id, teamId, InviteInput.parse(req.body));
     res.status(created ? 201 : 200).json(invite satisfies Invite);
   });
-  router.delete(paths.teamInvite, async (req, res) => {
-    const user = requireUser(req);
-    const { teamId, inviteId } = InviteParam.parse(req.params);
-    await invites.withdraw(user.id, teamId, inviteId);
-    res.status(204).end();
-  });
+  router.delete(
+    paths.teamInvite,
+    deleteRoute(InviteParam, (userId, { teamId, inviteId }) =>
+      invites.withdraw(userId, teamId, inviteId),
+    ),
+  );
   /** Shown on the invite page before signing in. */
   router.get(paths.invite, async (req, res) => {
     res.json((await invites.preview(TokenParam.parse(req.params).token)) satisfies InvitePreview);

@@ -12,7 +12,8 @@ import {
 } from '../../shared/schemas/teams';
 import { ThresholdsInput, type TeamThresholds } from '../../shared/schemas/thresholds';
 import { requireUser } from '../http/session';
-import { expectedVersion, sendVersion } from '../http/versions';
+import { deleteRoute, versionedWriteRoute } from '../http/routes';
+import { sendVersion } from '../http/versions';
 import type { Services } from '../services';
 
 export function teamsRouter({ teams, thresholds }: Services) {
@@ -55,29 +56,27 @@ export function teamsRouter({ teams, thresholds }: Services) {
       )) satisfies Member,
     );
   });
-  router.delete(paths.member, async (req, res) => {
-    const actor = requireUser(req);
-    const { teamId, userId } = MemberParam.parse(req.params);
-    await teams.removeMember(actor.id, teamId, userId);
-    res.status(204).end();
-  });
+  router.delete(
+    paths.member,
+    deleteRoute(MemberParam, (actorId, { teamId, userId }) =>
+      teams.removeMember(actorId, teamId, userId),
+    ),
+  );
 
   router.get(paths.thresholds, async (req, res) => {
     const user = requireUser(req);
     const t = await thresholds.get(user.id, TeamIdParam.parse(req.params).teamId);
     sendVersion(res, t.version).json(t satisfies TeamThresholds);
   });
-  router.put(paths.thresholds, async (req, res) => {
-    const user = requireUser(req);
-    const { teamId } = TeamIdParam.parse(req.params);
-    const t = await thresholds.put(
-      user.id,
-      teamId,
-      ThresholdsInput.parse(req.body),
-      expectedVersion(req),
-    );
-    sendVersion(res, t.version).json(t satisfies TeamThresholds);
-  });
+  router.put(
+    paths.thresholds,
+    versionedWriteRoute(
+      TeamIdParam,
+      ThresholdsInput,
+      (userId, { teamId }, input, version) =>
+        thresholds.put(userId, teamId, input, version) satisfies Promise<TeamThresholds>,
+    ),
+  );
 
   return router;
 }
