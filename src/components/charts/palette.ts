@@ -1,3 +1,6 @@
+import { contrast } from '../ui/contrast';
+import { palette } from '../ui/palette';
+
 /**
  * Okabe & Ito (2008), "Color Universal Design": eight colours that stay apart for the common
  * colour-vision deficiencies. Motor N always gets entry N−1 (cycling past eight), on every
@@ -39,23 +42,29 @@ export const inkSeries = {
   axis: '#4a5866',
 } as const;
 
-/**
- * Motor colours under 3:1 against the paper tones (WCAG 2.1 §1.4.11, non-text contrast):
- * orange, sky blue, bluish green, yellow and reddish purple. Their markers get an ink outline so
- * the shape reads on paper while the fill keeps the motor's colour;
- * `tests/src/components/palette.test.ts` checks this list against the contrast formula.
- */
-export const lowContrastMotorColours: ReadonlySet<string> = new Set([
-  '#E69F00',
-  '#56B4E9',
-  '#009E73',
-  '#F0E442',
-  '#CC79A7',
-]);
+/** The paper tones a chart or a swatch is drawn on. */
+const papers = [palette.paper.DEFAULT, palette.paper.raised, palette.paper.sunk];
 
-/** The outline for a marker in `colour`: ink where the colour alone is under 3:1, else none. */
+/**
+ * WCAG 2.1 §1.4.11 (non-text contrast) asks 3:1 of a mark against what is around it; a colour
+ * under that on some paper gets an ink outline so the shape reads while the fill keeps its colour.
+ */
+const underThreeToOne = (colour: string) => papers.some((bg) => contrast(colour, bg) < 3);
+
+/**
+ * Motor colours under 3:1 against the paper tones: orange, sky blue, bluish green, yellow and
+ * reddish purple; `tests/src/components/palette.test.ts` names them.
+ */
+export const lowContrastMotorColours: ReadonlySet<string> = new Set(
+  okabeIto.filter(underThreeToOne),
+);
+
+/**
+ * The outline for a mark in `colour` (a `#rrggbb` motor colour or any other chart colour): ink
+ * where the colour alone is under 3:1 on paper, else none.
+ */
 export function outlineFor(colour: string): string | undefined {
-  return lowContrastMotorColours.has(colour.toUpperCase()) ? '#1c2733' : undefined;
+  return underThreeToOne(colour) ? palette.ink.DEFAULT : undefined;
 }
 
 /** The outline for motor `n`'s markers. */

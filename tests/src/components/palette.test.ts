@@ -1,33 +1,13 @@
 import { describe, expect, it } from 'vitest';
+import { contrast, rgb } from '../../../src/components/ui/contrast';
 import { palette } from '../../../src/components/ui/palette';
 import {
   lowContrastMotorColours,
   motorOutline,
   okabeIto,
+  outlineFor,
 } from '../../../src/components/charts/palette';
 
-/**
- * WCAG 2.1, "relative luminance" and "contrast ratio" (definitions used by success criteria
- * 1.4.3 Contrast (Minimum) and 1.4.11 Non-text Contrast): sRGB channels linearised with the
- * 0.03928 knee (W3C has since noted 0.04045 is the sRGB figure; no 8-bit value lies between
- * them), L = 0.2126 R + 0.7152 G + 0.0722 B, ratio = (L1 + 0.05) / (L2 + 0.05).
- */
-function channel(c8: number): number {
-  const c = c8 / 255;
-  return c <= 0.03928 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
-}
-function rgb(hex: string): [number, number, number] {
-  const m = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(hex);
-  if (!m) throw new Error(`not a #rrggbb colour: ${hex}`);
-  return [parseInt(m[1]!, 16), parseInt(m[2]!, 16), parseInt(m[3]!, 16)];
-}
-function luminance([r, g, b]: [number, number, number]): number {
-  return 0.2126 * channel(r) + 0.7152 * channel(g) + 0.0722 * channel(b);
-}
-function contrast(a: string, b: string): number {
-  const [hi, lo] = [luminance(rgb(a)), luminance(rgb(b))].sort((x, y) => y - x) as [number, number];
-  return (hi + 0.05) / (lo + 0.05);
-}
 /** A colour laid over a background at an opacity, as Tailwind's `bg-x/15` paints it. */
 function over(fg: string, alpha: number, bg: string): string {
   const f = rgb(fg);
@@ -51,6 +31,7 @@ const papers = {
   'accent soft': palette.accent.soft,
 };
 
+// The ratio is WCAG 2.1's "relative luminance" and "contrast ratio" (src/components/ui/contrast.ts).
 describe('contrast formula', () => {
   it('matches the end points and a known grey', () => {
     // WCAG 2.1 §1.4.3 understanding: ratios run from 1:1 to 21:1 (black on white).
@@ -107,6 +88,17 @@ describe('motor markers (§1.4.11)', () => {
   it('outlines exactly the motor colours that fall under 3:1 on some paper', () => {
     const under = okabeIto.filter((c) => papers3.some((bg) => contrast(c, bg) < 3));
     expect([...lowContrastMotorColours].sort()).toEqual([...under].sort());
+    // Orange, sky blue, bluish green, yellow and reddish purple (Okabe & Ito 2008 names).
+    expect([...lowContrastMotorColours].sort()).toEqual(
+      ['#E69F00', '#56B4E9', '#009E73', '#F0E442', '#CC79A7'].sort(),
+    );
+  });
+
+  it('outlines any other chart colour that is faint on paper, whatever its case', () => {
+    // The blade-pass order line is drawn in paper over the dark heatmap; its legend icon is not.
+    expect(outlineFor(palette.paper.DEFAULT)).toBe(palette.ink.DEFAULT);
+    expect(outlineFor('#e69f00')).toBe(palette.ink.DEFAULT);
+    expect(outlineFor(palette.sev.act)).toBeUndefined();
   });
 
   it('the outline itself reads at 3:1 on every paper, and motors past eight cycle with it', () => {

@@ -2,10 +2,11 @@ import { useMemo, useState } from 'react';
 import type { FlightReport } from '../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../shared/analysis/review-detail';
 import { XyChart } from '../../../components/charts/xy-chart';
-import { inkSeries, motorColor } from '../../../components/charts/palette';
+import { inkSeries } from '../../../components/charts/palette';
 import type { Airframe } from '../../../../shared/schemas/airframe';
 import { describeDifferences, describeGeometryChange } from '../model/compare-words';
 import { MotorMarker } from '../../../components/ui/motor-marker';
+import { DeviationBar } from '../../../components/ui/deviation-bar';
 
 export interface CompareFlight {
   label: string;
@@ -53,7 +54,6 @@ function Deviations({ f }: { f: CompareFlight }) {
   return (
     <ul className="flex flex-col gap-1">
       {f.report.balance.deviationPct.map((d, i) => {
-        const frac = Math.max(-1, Math.min(1, d / 20));
         return (
           <li key={i} className="flex items-center gap-2 text-sm">
             <MotorMarker motor={i + 1} />
@@ -62,17 +62,7 @@ function Deviations({ f }: { f: CompareFlight }) {
               {airframe?.motors[i]?.spin ?? ''}
             </span>
             <span className="num w-16 text-right">{signedPct(d)}</span>
-            <span className="relative h-2 w-24 bg-paper-sunk" aria-hidden>
-              <span className="absolute inset-y-0 left-1/2 w-px bg-ink-faint" />
-              <span
-                className="absolute inset-y-0"
-                style={{
-                  left: frac >= 0 ? '50%' : `${50 + frac * 50}%`,
-                  width: `${Math.abs(frac) * 50}%`,
-                  background: motorColor(i + 1),
-                }}
-              />
-            </span>
+            <DeviationBar motor={i + 1} pct={d} className="h-2 w-24" />
           </li>
         );
       })}

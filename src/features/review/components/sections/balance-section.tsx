@@ -1,12 +1,12 @@
 import type { FlightReport } from '../../../../../shared/schemas/report';
 import type { ReviewDetail } from '../../../../../shared/analysis/review-detail';
 import type { Airframe } from '../../../../../shared/schemas/airframe';
-import { motorColor } from '../../../../components/charts/palette';
 import { AirframeTopView } from '../../../../components/airframe/airframe-top-view';
 import { CgDetail } from '../cg-detail';
 import { topViewSummary } from '../../model/top-view-summary';
 import { signedFixed } from '../../../../lib/signed-fixed';
 import { MotorMarker } from '../../../../components/ui/motor-marker';
+import { DeviationBar } from '../../../../components/ui/deviation-bar';
 
 export interface BalanceSectionProps {
   report: FlightReport;
@@ -89,7 +89,6 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
           <tbody>
             {deviationPct.map((dev, i) => {
               const n = i + 1;
-              const frac = Math.max(-1, Math.min(1, dev / 20));
               return (
                 <tr
                   key={n}
@@ -109,17 +108,7 @@ export function BalanceSection({ report, diagnosis, airframe, assumed }: Balance
                   <td className="py-1 pl-4">
                     <div className="flex items-center gap-2">
                       <span className="num w-16 text-right">{signed(dev)} %</span>
-                      <span className="relative hidden h-2 w-28 bg-paper-sunk sm:block" aria-hidden>
-                        <span className="absolute inset-y-0 left-1/2 w-px bg-ink-faint" />
-                        <span
-                          className="absolute inset-y-0"
-                          style={{
-                            left: frac >= 0 ? '50%' : `${50 + frac * 50}%`,
-                            width: `${Math.abs(frac) * 50}%`,
-                            background: motorColor(n),
-                          }}
-                        />
-                      </span>
+                      <DeviationBar motor={n} pct={dev} className="hidden h-2 w-28 sm:block" />
                     </div>
                   </td>
                 </tr>
