@@ -2,6 +2,8 @@ import Dexie, { type EntityTable } from 'dexie';
 import type { FlightReport } from '../../shared/schemas/report';
 import type { ReviewDetail } from '../../shared/analysis/review-detail';
 import type { ColumnMap } from '../../shared/log/column-map';
+import { driftSample } from '../../shared/analysis/drift';
+import type { DriftSample } from '../../shared/schemas/baseline';
 
 /**
  * The device's own store: every log read on this device is kept here before any network is
@@ -79,10 +81,35 @@ export interface RereadMap {
   savedAt: number;
 }
 
+/**
+ * What drift needs of a stored flight, kept beside it: the offline baseline reads these few
+ * numbers instead of whole records with their traces and raw logs.
+ */
+export interface LocalDriftSample {
+  flightId: string;
+  aircraftId?: string;
+  /** ISO 8601: when it was recorded, or else when it was stored on this device. */
+  recordedAt: string;
+  sample: DriftSample;
+}
+
+/** The drift sample of a flight record (on save, and once for flights stored before v3). */
+function driftSampleOf(
+  f: Pick<LocalFlight, 'id' | 'aircraftId' | 'recordedAt' | 'savedAt' | 'report'>,
+): LocalDriftSample {
+  return {
+    flightId: f.id,
+    aircraftId: f.aircraftId,
+    recordedAt: f.recordedAt ?? new Date(f.savedAt).toISOString(),
+    sample: driftSample(f.report),
+  };
+}
+
 export class LocalDatabase extends Dexie {
   flights!: EntityTable<LocalFlight, 'id'>;
   outbox!: EntityTable<OutboxEntry, 'seq'>;
   rereadMaps!: EntityTable<RereadMap, 'flightId'>;
+  driftSamples!: EntityTable<LocalDriftSample, 'flightId'>;
 
   constructor(name = 'hoverprint') {
     super(name);
@@ -98,6 +125,22 @@ export class LocalDatabase extends Dexie {
       outbox: '++seq, id, state',
       rereadMaps: 'flightId',
     });
+    // v3: each flight's drift sample in a table of its own, filled once from the flights
+    // already kept (one record at a time, so no more than one log is in memory).
+    this.version(3)
+      .stores({
+        flights: 'id, savedAt, syncState, teamId, aircraftId',
+        outbox: '++seq, id, state',
+        rereadMaps: 'flightId',
+        driftSamples: 'flightId, aircraftId',
+      })
+      .upgrade(async (tx) => {
+        const samples: LocalDriftSample[] = [];
+        await tx
+          .table<LocalFlight, string>('flights')
+          .each((f) => void samples.push(driftSampleOf(f)));
+        await tx.table<LocalDriftSample, string>('driftSamples').bulkPut(samples);
+      });
   }
 }
 
@@ -140,7 +183,11 @@ export async function saveLocalFlight(input: SaveLocalFlightInput): Promise<Loca
     attempts: 0,
     nextAttemptAt: 0,
   };
-  await localDb().flights.put(record);
+  const db = localDb();
+  await db.transaction('rw', db.flights, db.driftSamples, async () => {
+    await db.flights.put(record);
+    await db.driftSamples.put(driftSampleOf(record));
+  });
   return record;
 }
 
@@ -164,13 +211,17 @@ export async function assignLocalFlight(
   id: string,
   target: { teamId: string; aircraftId?: string },
 ): Promise<void> {
-  await localDb().flights.update(id, {
-    teamId: target.teamId,
-    aircraftId: target.aircraftId,
-    syncState: 'pending',
-    summarySynced: false,
-    nextAttemptAt: 0,
-    lastError: undefined,
+  const db = localDb();
+  await db.transaction('rw', db.flights, db.driftSamples, async () => {
+    await db.flights.update(id, {
+      teamId: target.teamId,
+      aircraftId: target.aircraftId,
+      syncState: 'pending',
+      summarySynced: false,
+      nextAttemptAt: 0,
+      lastError: undefined,
+    });
+    await db.driftSamples.update(id, { aircraftId: target.aircraftId });
   });
 }
 

@@ -17,6 +17,8 @@ import {
   saveLocalFlight,
   saveRereadMap,
 } from '../../../src/lib/local-db';
+import { deviceBaselineFlights } from '../../../src/lib/local-baseline';
+import { driftSample } from '../../../shared/analysis/drift';
 import { sampleDetail, sampleFile, sampleReport } from '../helpers/flight-fixture';
 
 const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;
@@ -134,7 +136,7 @@ describe('reading a kept log again', () => {
     expect(await getRereadMap(id(8))).toEqual(other);
   });
 
-  it('opens a database written by the first version with its flights and outbox intact', async () => {
+  it('opens a database written by the first version with its flights, outbox and drift intact', async () => {
     await localDb().delete();
     await closeLocalDb();
     const v1 = new Dexie('hoverprint');
@@ -148,6 +150,7 @@ describe('reading a kept log again', () => {
       file: sampleFile(),
       report: sampleReport(),
       detail: sampleDetail(),
+      aircraftId: id(5),
       savedAt: 1,
       syncState: 'pending',
       attempts: 0,
@@ -164,12 +167,20 @@ describe('reading a kept log again', () => {
     });
     v1.close();
 
-    expect(localDb().verno).toBe(2);
+    expect(localDb().verno).toBe(3);
     const old = await getLocalFlight(id(9));
     expect(old?.fileName).toBe('old.csv');
     expect(old?.columnMap).toBeUndefined();
     expect((await listOutbox()).map((e) => e.path)).toEqual(['/api/comments/9']);
     await saveRereadMap(id(9), kiteMap);
     expect(await getRereadMap(id(9))).toEqual(kiteMap);
+    // v3 kept each flight's drift sample beside it, filled from the flights already stored.
+    expect(await deviceBaselineFlights(id(5))).toEqual([
+      {
+        flightId: id(9),
+        recordedAt: new Date(1).toISOString(),
+        sample: driftSample(sampleReport()),
+      },
+    ]);
   });
 });
