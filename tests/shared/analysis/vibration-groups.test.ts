@@ -6,10 +6,13 @@ import {
   type GroupablePeak,
 } from '../../../shared/analysis/vibration-groups';
 
+// The bin width of 256-sample segments at 1000 Hz (tests/REFERENCES.md §2.2: Δf = 3.90625 Hz).
 const df = 3.90625;
 const peak = (p: Partial<GroupablePeak> & { channel: string; hz: number; db: number }) =>
   ({ label: null, ...p }) as GroupablePeak;
 
+// The peaks below are made up for these cases, and every expectation is our own rule, defined
+// in shared/analysis/vibration-groups.ts (which peaks share a cause, and in what order).
 describe('grouping vibration peaks by cause', () => {
   it('puts one motor’s once-per-turn line at several speeds and axes, and its 2×, in one group', () => {
     const peaks = [
@@ -79,6 +82,8 @@ describe('grouping vibration peaks by cause', () => {
     ]);
   });
 
+  // aliasOfHz marks a line folded down from the motors' electrical frequency (folding as in
+  // tests/REFERENCES.md §3); here it is set by hand, so only the grouping is under test.
   it('gathers the motors’ folded electrical lines into one cause and other lines by frequency', () => {
     const causes = groupPeaks(
       [
@@ -95,6 +100,8 @@ describe('grouping vibration peaks by cause', () => {
     ]);
   });
 
+  // Three bins or 3 %: our own rule (sameLine in shared/analysis/vibration-groups.ts), the
+  // tolerance the peak labelling uses; each pair sits just inside and just outside it.
   it('tells lines apart at three bins or 3 %, whichever is wider', () => {
     expect(sameLine(100, 100 + 3 * df, df)).toBe(true);
     expect(sameLine(100, 100 + 3 * df + 0.1, df)).toBe(false);

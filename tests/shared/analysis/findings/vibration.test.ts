@@ -10,17 +10,26 @@ const analyse = (name: string) => {
   return analyzeFlight(log, { airframe: truth.airframe }).report;
 };
 
+// No outside source in this file: the faults are injected by the synthesiser (scenarios in
+// shared/sim/scenarios.ts, applied by shared/sim/faults.ts) and the severities follow our own
+// rules in shared/analysis/findings/vibration.ts with the limits of shared/schemas/thresholds.ts.
 describe('vibration findings below the absolute limits', () => {
   it('a frame line that dominates the roll gyro is a note though under the gyro limit', () => {
+    // 'quiet-frame-line': a 260 Hz roll mode of 3 deg/s RMS, under gyroToneWatchDegS (5 deg/s,
+    // common practice per thresholds.ts). 4 Hz is this test's allowance, about one bin.
     const r = analyse('quiet-frame-line');
     const peak = r.vibration.gyro_x!.peaks.find((p) => Math.abs(p.hz - 260) < 4);
     expect(peak?.label).toBe('frame');
     const f = r.findings.filter((x) => x.code === 'frame-resonance');
     expect(f).toHaveLength(1);
+    // `note` by our own rule (peakSeverity): the line carries at least toneDominantShare (half)
+    // of its axis's band power, on an axis at least AXIS_RATIO (2) times the others' median.
     expect(f[0]).toMatchObject({ severity: 'note', axis: 'gyro_x' });
+    // 1.8 against pitch alone is this test's margin, not the rule's factor of 2.
     expect(r.vibration.gyro_x!.bandRms).toBeGreaterThan(1.8 * r.vibration.gyro_y!.bandRms);
   });
 
+  // The synthesiser's healthy quad: no fault injected, so any vibration finding is a false alarm.
   it('the healthy rotors’ own lines, alike on every axis, raise nothing', () => {
     const r = analyse('clean-quad-x');
     const vib = ['vibration-peak', 'rotor-harmonic', 'frame-resonance'];
@@ -44,6 +53,7 @@ function vibrationFindings(scenario: Scenario): { findings: Finding[]; report: F
 
 describe('a chipped prop is one vibration finding', () => {
   it('motor 2 (the scenario): one rotor-harmonic finding, motor 2, listing every speed and axis', () => {
+    // 'rotor-imbalance': 2 g·mm of unbalance on motor 2, injected by the synthesiser.
     const { findings, report } = vibrationFindings(scenarios['rotor-imbalance']!);
     expect(findings).toHaveLength(1);
     const f = findings[0]!;
@@ -56,6 +66,8 @@ describe('a chipped prop is one vibration finding', () => {
     const oneX = Object.entries(report.vibration).flatMap(([channel, v]) =>
       v.peaks.filter((p) => p.label === 'rotor-1x').map((p) => ({ channel, hz: p.hz })),
     );
+    // The counts below (more than 4 lines, 3 speeds in 5 Hz steps, 3 axes) are this test's:
+    // enough to show the lines were gathered across speeds and axes, not one of each.
     expect(oneX.length).toBeGreaterThan(4);
     expect(f.seen).toHaveLength(oneX.length);
     for (const p of oneX) expect(f.seen).toContainEqual(expect.objectContaining(p));
@@ -86,6 +98,7 @@ describe('a chipped prop is one vibration finding', () => {
     const frame = findings.find((f) => f.code === 'frame-resonance')!;
     expect(rotor.motor).toBe(2);
     expect(frame.motor).toBeUndefined();
+    // The 290 Hz mode injected above; 8 Hz (about two bins) is this test's allowance.
     expect(frame.seen!.every((s) => s.label === 'frame' && Math.abs(s.hz - 290) < 8)).toBe(true);
     expect(rotor.seen!.every((s) => s.label === 'rotor-1x')).toBe(true);
   });
