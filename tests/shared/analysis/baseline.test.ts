@@ -113,6 +113,8 @@ describe('judging a flight against its baseline', () => {
     if (r.kind !== 'compared') return;
     expect(r.against).toBe('Kite’s last 4 flights, since the motor 3 swap on 1 Dec');
     expect(r.findings.map((f) => [f.code, f.motor])).toEqual([['motor-drift', 2]]);
+    // Worked by hand from the definition (shared/README.md §7.3): 3.4 − (−0.4) = 3.8 points,
+    // past motorDriftPts 1.5 (common practice, shared/schemas/thresholds.ts).
     expect(r.drift.motors[1]!.changePts).toBeCloseTo(3.8, 5);
   });
 

@@ -15,6 +15,7 @@ describe('internal resistance from sag (IEC 61960 two-step ΔV/ΔI; tests/REFERE
     const q = Float64Array.from({ length: n }, (_, k) => k * 0.5); // mAh drawn
     const i = Float64Array.from({ length: n }, (_, k) => 10 + 15 * Math.sin(k / 7));
     const v = Float64Array.from({ length: n }, (_, k) => 16.8 - 0.03 * i[k]! - 0.0008 * q[k]!);
+    // 0.03 Ω is the resistance built into v above (synthetic data, not a measurement).
     expect(fitSag(v, i, q)!.ohm).toBeCloseTo(0.03, 9);
   });
 
@@ -23,6 +24,7 @@ describe('internal resistance from sag (IEC 61960 two-step ΔV/ΔI; tests/REFERE
   });
 
   it('integrates 10 A for 360 s into 1000 mAh and, at 15 V, 15 Wh', () => {
+    // Worked by hand from the units: 10 A · 360 s = 3600 C = 1000 mAh; 15 V · 10 A · 0.1 h = 15 Wh.
     const t = [0, 120, 240, 360];
     const r = energyUsed(t, [10, 10, 10, 10], [15, 15, 15, 15]);
     expect(r.mAh).toBeCloseTo(1000, 9);

@@ -62,6 +62,7 @@ describe('segments', () => {
     expect(Math.abs(seg.hoverS - 14)).toBeLessThan(1.2);
   });
 
+  // Armed 2 → 20 s and 3 s of rolls, read off the script above; the allowances are this test's.
   it('counts armed time from idle spin-up to disarm, and idle on the ground', () => {
     expect(Math.abs(sec(seg.armed) - 18)).toBeLessThan(0.1);
     expect(seg.idle.some(([a, b]) => a / fs <= 2.05 && b / fs >= 2.95)).toBe(true);

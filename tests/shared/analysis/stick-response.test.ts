@@ -104,6 +104,10 @@ describe('stick response: H1 and coherence (Bendat & Piersol; tests/REFERENCES.m
   });
 });
 
+// Faults injected by the synthesiser (scenarios in shared/sim/scenarios.ts): 40 ms of link
+// latency, a softened rate loop. The allowances (3, 6, 8 ms; 8 Hz) are this block's own.
+// With stick-like input the correlation lag sits near the low-frequency phase delay
+// (tests/REFERENCES.md §14).
 describe('stick response on the synthesiser’s loops', () => {
   const run = (name: string) => {
     const { log, truth } = simulate(scenarios[name]!, { seconds: 60, seed: 3 });

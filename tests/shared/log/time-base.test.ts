@@ -19,12 +19,17 @@ describe('time base', () => {
   it('takes the sample rate from the median step, not the mean', () => {
     const t = Array.from({ length: 2001 }, (_, i) => i / 2000);
     const withGap = [...t.slice(0, 1000), ...t.slice(1100).map((x) => x)];
+    // Worked by hand: every step but one is 1/2000 s, so the median gives 2000 Hz where the
+    // mean (1 s over 1900 steps) would give 1900 Hz.
     const log = parseLog(enc(csv(withGap)));
     expect(log.sampleRateHz).toBeCloseTo(2000, 6);
     expect(log.durationS).toBeCloseTo(1, 12);
   });
 
   it('reports a gap with its time, length and line', () => {
+    // A 50 ms step against a 1 ms median: past GAP_FACTOR, 4 median steps (common practice,
+    // shared/log/time-base.ts); 49 missing samples and line 7 (a comment line, the header,
+    // then the rows) worked by hand.
     const times = [0, 0.001, 0.002, 0.003, 0.053, 0.054, 0.055];
     const log = parseLog(enc('# aircraft: Heron\n' + csv(times)));
     expect(log.timeBase?.gaps).toEqual([
@@ -40,6 +45,8 @@ describe('time base', () => {
     for (let i = 0; i < 60; i++)
       times.push(i * 0.1, i * 0.1 + 0.001, i * 0.1 + 0.002, i * 0.1 + 0.003);
     const log = parseLog(enc(csv(times)));
+    // 60 bursts make 59 gaps; 20 are listed and one line sums up the rest: our own rule,
+    // MAX_GAP_WARNINGS in shared/log/time-base.ts.
     const gaps = log.warnings.filter((w) => w.code === 'log-gap');
     expect(log.timeBase?.gaps.length).toBe(59);
     expect(gaps.length).toBe(21);
@@ -51,6 +58,9 @@ describe('time base', () => {
     for (let i = 1; i < 200; i++)
       times.push(times[i - 1]! + (i === 150 ? 0.0018 : i % 2 ? 0.0012 : 0.0008));
     const log = parseLog(enc(csv(times.map((t) => Number(t.toFixed(6))))));
+    // Steps alternate 1.2 and 0.8 ms about a 1 ms median, ±20 % (worked by hand), past
+    // JITTER_WARN_PCT, 10 % (common practice, shared/log/time-base.ts); the 1.8 ms step is the
+    // worst, row 150, line 152 after the header.
     const w = log.warnings.find((x) => x.code === 'time-jitter');
     expect(log.timeBase!.jitterPct).toBeGreaterThan(10);
     expect(w?.line).toBe(152);

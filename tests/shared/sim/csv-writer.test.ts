@@ -107,6 +107,8 @@ describe('writeCanonicalCsv', () => {
         expect(Math.abs(row[header]! - c[i]!)).toBeLessThanOrEqual(tol),
       );
     };
+    // Each allowance is half a unit in the last decimal the writer prints for that channel
+    // (FORMATS in shared/sim/csv-writer.ts, after shared/log/FORMAT.md): rounding, nothing more.
     check('time', 'time [s]', 5e-7);
     check('motor2', 'motor2 [frac]', 5e-5);
     check('rpm3', 'rpm3 [rpm]', 0.5);

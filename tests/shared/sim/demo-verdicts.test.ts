@@ -42,7 +42,8 @@ describe('demo verdicts', () => {
       const named = report(f)
         .findings.filter((x) => x.code === 'motor-working-hard')
         .map((x) => x.motor);
-      // 1/√0.91 ≈ 4.8 % more output than the others, over the 4 % watch level.
+      // 1/√0.91 ≈ 4.8 % more output than the others, over the 4 % watch level (motorWatchPct,
+      // common practice per shared/schemas/thresholds.ts).
       if (weak(f) <= 0.91) expect(named, `flight ${f.index}`).toEqual([3]);
       else expect(named, `flight ${f.index}`).toEqual([]);
     }
@@ -52,6 +53,8 @@ describe('demo verdicts', () => {
     for (const f of demoFlights.filter((d) => d.aircraft === 'heron')) {
       const r = report(f);
       const codes = r.findings.map((x) => x.code);
+      // The offset the demo injected (shared/sim/demo/flights.ts), within this test's 3 mm; from
+      // 10 mm it is past the 5 %-of-arm watch level (cgWatchPctOfArm, common practice).
       expect(Math.abs(r.cg!.xMm - cgMm(f)), `flight ${f.index}`).toBeLessThan(3);
       if (cgMm(f) >= 10) expect(codes, `flight ${f.index}`).toContain('cg-offset');
       expect(codes, `flight ${f.index}`).not.toContain('tracking-lag');
@@ -62,6 +65,7 @@ describe('demo verdicts', () => {
     for (const f of demoFlights.filter((d) => d.aircraft === 'osprey')) {
       const r = report(f);
       const ringing = f.faults.some((x) => x.kind === 'frame-resonance');
+      // The 140 Hz mode the demo injects after the repair; 4 Hz is this test's allowance (a bin).
       const frame = r.vibration.gyro_x!.peaks.find((p) => Math.abs(p.hz - 140) < 4);
       if (ringing) {
         expect(frame?.label, `flight ${f.index}`).toBe('frame');

@@ -3,6 +3,8 @@ import { antiAlias, FrameMode } from '../../../shared/sim/disturbances';
 import { streamFor } from '../../../shared/sim/prng';
 
 describe('sensor anti-alias roll-off', () => {
+  // The roll-off's corners are our own model of a sensor's filter (antiAlias in
+  // shared/sim/disturbances.ts), not a particular part's datasheet.
   it('passes up to 0.4·fs, halves at 0.45·fs and stops at Nyquist', () => {
     expect(antiAlias(399, 1000)).toBe(1);
     expect(antiAlias(450, 1000)).toBeCloseTo(0.5, 12);

@@ -16,6 +16,11 @@ const scenario = (name: string) => {
 const clean = run(scenario('clean-quad-x'));
 const cleanOut = hoverOutputs(clean.log, clean.truth);
 
+// These tests check the synthesiser against its own fault model: each fault is injected by the
+// scenarios of shared/sim/scenarios.ts through shared/sim/faults.ts, and the expected effect
+// follows from the synthesiser's physics (shared/sim/plant.ts) or from a published relation
+// named beside the check. The tolerances are this file's own, set to the sampling noise of a
+// 30 s flight; none is a published limit.
 describe('simulate: each fault changes what it should and nothing else', () => {
   it('a 12 % weaker motor 3 needs 1/√0.88 more output; the others stay put', () => {
     // Thrust ∝ output² for our motor model, so equal thrust needs output × 1/√0.88.
@@ -40,6 +45,8 @@ describe('simulate: each fault changes what it should and nothing else', () => {
 
   it('a CG 15 mm forward loads the front pair, with no yaw part', () => {
     const { log, truth } = run(scenario('cg-offset'));
+    // Moments about the CG vanish in a steady hover (shared/README.md §4, tests/REFERENCES.md
+    // §5.3), so the thrust-weighted motor position is the CG the scenario injected.
     expect(truth.trueCg).toEqual({ x: 15, y: 0 });
     const t = hoverThrusts(log, truth);
     const total = t.reduce((a, b) => a + b, 0);
@@ -60,6 +67,7 @@ describe('simulate: each fault changes what it should and nothing else', () => {
     const hz = meanOver([[a, b]], (r) => rpm2[r]!) / 60;
     const faulty = tonePower(col(log, 'acc_y'), a, b, hz, 500);
     const base = tonePower(col(clean.log, 'acc_y'), a, b, hz, 500);
+    // 2 g·mm of unbalance (injected) must stand 13 dB above the healthy rotor's line: this test's margin.
     expect(faulty / base).toBeGreaterThan(20);
   });
 
@@ -76,6 +84,7 @@ describe('simulate: each fault changes what it should and nothing else', () => {
       for (let f = hz - 3; f <= hz + 3; f += 0.5) s += tonePower(gx, a, b, f, 1000);
       return s;
     };
+    // The injected 290 Hz mode stands 10 dB over a quiet stretch of spectrum: this test's margin.
     expect(at(290) / at(250)).toBeGreaterThan(10);
     expect(res.truth.params.frameResonanceHz).toBe(290);
   });
@@ -102,11 +111,14 @@ describe('simulate: each fault changes what it should and nothing else', () => {
       const dI = meanOver(during, (r) => i[r]!) - meanOver(before, (r) => i[r]!);
       expect(dI).toBeGreaterThan(10);
       expect(dV / dI / truth.params.batteryResistanceOhm).toBeCloseTo(1, 1);
+      // 8 mΩ a cell × 4 cells, the synthesiser’s healthy pack (shared/sim/build.ts, plant.ts),
+      // × 3.5 when tired.
       expect(truth.params.batteryResistanceOhm).toBeCloseTo(0.032 * scale, 6);
     }
   });
 
   it('undersized ESCs go over their rating in the punch-out only', () => {
+    // 'esc-overcurrent' injects 8 A ESCs; the punch-out is the only phase past their rating.
     const { log, truth } = run(scenario('esc-overcurrent'));
     expect(truth.airframe.escMaxA).toBe(8);
     expect(log.channels).toContain('imotor1');
@@ -120,6 +132,7 @@ describe('simulate: each fault changes what it should and nothing else', () => {
   });
 
   it('an underpowered build hovers high and saturates where the healthy one does not', () => {
+    // 'underpowered' injects 30 % of the thrust; 0.75 and 0.98 are this test's bounds.
     const { log, truth } = run(scenario('underpowered'));
     hoverOutputs(log, truth).forEach((v) => expect(v).toBeGreaterThan(0.75));
     expect(truth.params.saturationS).toBeGreaterThan(0.1);
@@ -146,6 +159,7 @@ describe('simulate: each fault changes what it should and nothing else', () => {
       }
       return (bestK / 500) * 1000;
     };
+    // 'tracking-delay' injects 40 ms; 8 ms (4 samples at 500 Hz) is this test's allowance.
     const extra = lagMs('tracking-delay') - lagMs('clean-quad-x');
     expect(Math.abs(extra - 40)).toBeLessThanOrEqual(8);
   });

@@ -78,6 +78,8 @@ describe('simulate: the log it returns', () => {
 
   it('keeps the scripted hovers steady: low body rates and a steady collective', () => {
     // shared/README.md §6 calls a hover steady when body rates are low and the collective steady.
+    // 10 deg/s and 0.02 RMS are this test's bounds, inside our own hover rule (hoverRateDegS
+    // 20 deg/s, hoverCollectiveBand 0.03 in shared/schemas/thresholds.ts).
     const { log, truth } = run(scenario('clean-quad-x'), { seconds: 60, rateHz: 500, seed: 4 });
     for (const range of hoverRows(log, truth)) {
       for (const axis of ['gyro_x', 'gyro_y', 'gyro_z']) {
@@ -115,6 +117,8 @@ describe('simulate: airframes beyond the presets', () => {
       faults: [],
     });
     const total = hoverThrusts(log, truth).reduce((a, b) => a + b, 0);
+    // In a steady hover the thrusts carry the weight (Newton's second law; shared/README.md §4),
+    // g0 = 9.80665 m/s² (tests/REFERENCES.md §8); two decimals is this test's allowance.
     expect(total / (truth.params.massKg * G0)).toBeCloseTo(1, 2);
   });
 });
