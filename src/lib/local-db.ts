@@ -4,6 +4,7 @@ import type { ReviewDetail } from '../../shared/analysis/review-detail';
 import type { ColumnMap } from '../../shared/log/column-map';
 import { driftSample } from '../../shared/analysis/drift';
 import type { DriftSample } from '../../shared/schemas/baseline';
+import { storeProblemText } from './store-problem-text';
 
 /**
  * The device's own store: every log read on this device is kept here before any network is
@@ -293,8 +294,14 @@ export async function enqueue(input: EnqueueInput): Promise<OutboxEntry> {
     attempts: 0,
     nextAttemptAt: 0,
   };
-  const seq = await localDb().outbox.add(entry);
-  return { ...entry, seq };
+  try {
+    const seq = await localDb().outbox.add(entry);
+    return { ...entry, seq };
+  } catch (error) {
+    throw new Error(`offline, and it can’t be kept on this device: ${storeProblemText(error)}`, {
+      cause: error,
+    });
+  }
 }
 
 /** Everything still waiting (pending and failed), in the order it was written. */

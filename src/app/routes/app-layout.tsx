@@ -8,6 +8,7 @@ import { AccountMenu } from '../../features/session/components/account-menu';
 import { TeamSwitcher } from '../../features/session/components/team-switcher';
 import { ServerStatus } from '../../features/status/components/server-status';
 import { SyncIndicator } from '../../features/sync/components/sync-indicator';
+import { LocalStoreNote } from '../../features/sync/components/local-store-note';
 import type { SyncPassResult } from '../../features/sync/sync-runner';
 import { useSyncDriver } from '../../features/sync/use-sync';
 import { refreshAfterSync } from '../../api/flights';
@@ -66,6 +67,7 @@ export function AppLayout() {
           </div>
         </div>
       </header>
+      <LocalStoreNote />
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
         <Outlet />
       </main>

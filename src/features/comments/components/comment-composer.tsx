@@ -4,6 +4,8 @@ import { insertMention, matchMembers, mentionQuery, mentionedIn } from '../model
 
 export interface ComposerHandle {
   focus: () => void;
+  /** Put back a comment that could not be saved, ahead of anything typed since. */
+  restore: (body: string) => void;
 }
 
 export interface CommentComposerProps {
@@ -38,6 +40,7 @@ export const CommentComposer = forwardRef<ComposerHandle, CommentComposerProps>(
         cameFrom.current = from instanceof HTMLElement && from !== area.current ? from : null;
         area.current?.focus();
       },
+      restore: (body) => setText((now) => (now.trim() === '' ? body : `${body}\n${now}`)),
     }));
     const giveFocusBack = () => {
       const to = cameFrom.current;

@@ -125,7 +125,11 @@ export const CommentsRail = forwardRef<CommentsRailHandle, CommentsRailProps>(
             submitLabel="Comment"
             busy={add.isPending}
             onSubmit={(body, mentions) =>
-              add.mutate({ id: crypto.randomUUID(), flightId, tS: cursorT ?? 0, body, mentions })
+              add.mutate(
+                { id: crypto.randomUUID(), flightId, tS: cursorT ?? 0, body, mentions },
+                // Refused, or offline with nowhere to keep it: the text goes back in the box.
+                { onError: () => composer.current?.restore(body) },
+              )
             }
           />
         )}

@@ -5,7 +5,7 @@ import {
   retryFailed,
   type LocalFlight,
 } from '../../../lib/local-db';
-import { useLiveQuery } from 'dexie-react-hooks';
+import { useLocalLiveQuery, useLocalStoreProblem } from '../../../lib/local-store-status';
 import { Button } from '../../../components/ui/button';
 import { syncEngine } from '../sync-engine';
 import { useSyncSummary } from '../use-sync';
@@ -34,13 +34,18 @@ export function LocalFlightsPanel({
   canUpload: boolean;
 }) {
   const summary = useSyncSummary();
-  const flights = useLiveQuery(
+  const storeProblem = useLocalStoreProblem();
+  const flights = useLocalLiveQuery(
     async () =>
       (await listLocalFlights())
         .filter((f) => f.syncState !== 'synced')
         .map(({ file: _file, detail: _detail, ...rest }) => rest),
     [],
+    [],
   );
+  // Nothing is kept here, so nothing waits here either; the header note says why.
+  if (storeProblem !== null)
+    return <p className="text-sm text-ink-soft">Nothing is kept on this device.</p>;
   const writes = summary ? summary.pendingWrites + summary.failedWrites + summary.conflicts : 0;
   if (!flights || flights.length === 0) {
     if (writes > 0)

@@ -1,5 +1,4 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useLiveQuery } from 'dexie-react-hooks';
 import { commentKeys } from '../../../api/comments';
 import { Button } from '../../../components/ui/button';
 import {
@@ -9,6 +8,7 @@ import {
   type OutboxEntry,
 } from '../../../lib/local-db';
 import { syncEngine } from '../sync-engine';
+import { useLocalLiveQuery } from '../../../lib/local-store-status';
 
 const describe = (e: OutboxEntry) =>
   e.label ?? (e.method === 'PUT' ? 'New comment' : `${e.method} ${e.path}`);
@@ -29,7 +29,7 @@ const stateText = (e: OutboxEntry) =>
  */
 export function OutboxList() {
   const queryClient = useQueryClient();
-  const entries = useLiveQuery(listOutbox, []);
+  const entries = useLocalLiveQuery(listOutbox, [], []);
   if (!entries || entries.length === 0) return null;
   return (
     <ul className="divide-y divide-line/70 text-sm" aria-label="Changes on this device">

@@ -177,7 +177,7 @@ describe('comment thread', () => {
     expect(await screen.findByText('@Dev Heron')).toBeTruthy();
   });
 
-  it('takes the comment back out and says why when the server refuses it', async () => {
+  it('takes the comment back out of the thread, into the box, and says why when the server refuses it', async () => {
     const { user } = renderRail(pilot, 'pilot');
     await screen.findByText('Hover drifts left here.');
     await user.type(
@@ -188,7 +188,11 @@ describe('comment thread', () => {
     expect(await screen.findByText('Landing was hard')).toBeTruthy();
     await act(async () => putGate!.release(403));
     expect((await screen.findByRole('alert')).textContent).toContain('Viewers cannot comment.');
-    expect(screen.queryByText('Landing was hard')).toBeNull();
+    expect(threads().queryByText('Landing was hard')).toBeNull();
+    // What was typed is not lost: it is back in the box.
+    expect(
+      (screen.getByRole('textbox', { name: 'Comment at the cursor' }) as HTMLTextAreaElement).value,
+    ).toBe('Landing was hard');
   });
 
   it('lets a coach resolve a thread', async () => {
