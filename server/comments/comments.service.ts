@@ -19,9 +19,9 @@ import { assertCan } from '../teams/permissions';
 import { can, canOnRecord } from '../../shared/auth/permissions';
 import { iso, isoOrNull } from '../util';
 import { isDuplicateKey } from '../db/duplicate-key';
-import { cachedQuery, insertSql } from '../db/sql';
 import { VersionConflictError } from '../http/versions';
 import { Comment } from './comment.entity';
+import { commentInserter } from './comment-insert';
 
 export class CommentsService {
   constructor(
@@ -36,33 +36,7 @@ export class CommentsService {
     return this.ds.getRepository(Comment);
   }
 
-  private readonly insertComment = insertSql(this.ds, 'comments', [
-    'id',
-    'flightId',
-    'authorId',
-    'parentId',
-    'tS',
-    'channel',
-    'body',
-    'mentions',
-    'createdAt',
-  ]);
-
-  private readonly bumpRoot = cachedQuery<{ fid: string }, never>(this.ds, (p) =>
-    this.ds
-      .createQueryBuilder()
-      .update(Flight)
-      .set({ commentCount: () => '"commentCount" + 1', openComments: () => '"openComments" + 1' })
-      .where('id = :fid', { fid: p.fid }),
-  );
-
-  private readonly bumpReply = cachedQuery<{ fid: string }, never>(this.ds, (p) =>
-    this.ds
-      .createQueryBuilder()
-      .update(Flight)
-      .set({ commentCount: () => '"commentCount" + 1' })
-      .where('id = :fid', { fid: p.fid }),
-  );
+  private readonly insertComment = commentInserter(this.ds);
 
   private async names(ids: Iterable<string>): Promise<Map<string, string>> {
     const unique = [...new Set(ids)];
@@ -182,17 +156,7 @@ export class CommentsService {
     // Insert first and treat a key clash as the retry it almost always is: one query fewer on
     // the path every comment takes.
     try {
-      await this.ds.query(this.insertComment, [
-        comment.id,
-        comment.flightId,
-        comment.authorId,
-        comment.parentId,
-        comment.tS,
-        comment.channel,
-        comment.body,
-        JSON.stringify(comment.mentions),
-        comment.createdAt,
-      ]);
+      await this.insertComment(comment);
     } catch (err) {
       if (!isDuplicateKey(err)) throw err;
       const existing = await this.repo.findOneBy({ id });
@@ -201,8 +165,6 @@ export class CommentsService {
       }
       return { comment: await this.dto(existing), created: false };
     }
-    // A new comment only adds to the counters; resolve and delete recount.
-    await (parentId === null ? this.bumpRoot : this.bumpReply)({ fid: input.flightId });
     this.notify(comment, flight.teamId, flight.pilotId, parent?.authorId ?? null, mentions);
     const names = mentions.length > 0 ? await this.names(mentions) : new Map<string, string>();
     names.set(userId, flight.userName);

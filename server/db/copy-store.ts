@@ -69,6 +69,7 @@ export async function copyStore(options: {
   const source = new Database(options.sqlitePath, { readonly: true, fileMustExist: true });
   const report: CopyReport = { tables: [], raw: undefined, ok: true };
   const qr = target.createQueryRunner();
+  let copiedAny = false;
   try {
     for (const m of tablesInOrder(target)) {
       const table = m.tableName;
@@ -103,6 +104,14 @@ export async function copyStore(options: {
       log(
         `${table}: ${seen} rows, ${copied} copied, ${seen - copied} already there; ${targetCount} in PostgreSQL`,
       );
+      copiedAny ||= copied > 0;
+    }
+    // The planner's statistics still describe the empty tables until autovacuum's next round;
+    // until then a team's flight list can be planned as a full scan and sort. PostgreSQL's
+    // advice after a bulk load: run ANALYZE (postgresql.org/docs/15/populate.html §14.4.9).
+    if (copiedAny) {
+      await target.query('ANALYZE');
+      log('statistics updated (ANALYZE)');
     }
 
     if (options.bucket) {

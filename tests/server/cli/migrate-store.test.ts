@@ -115,6 +115,14 @@ describe.runIf(engine === 'postgres')('npm run migrate-store', () => {
         'SELECT COUNT(*)::int AS n FROM comments WHERE "parentId" IS NOT NULL',
       );
       expect(replies.rows[0]).toEqual({ n: 1 });
+      // A bulk load is followed by ANALYZE (postgresql.org/docs/15/populate.html §14.4.9).
+      // reltuples is -1 until a table is first analysed or vacuumed (postgresql.org/docs/15/
+      // catalog-pg-class.html); one flight is far below autovacuum's thresholds.
+      expect(stdout).toMatch(/^statistics updated \(ANALYZE\)$/m);
+      const stats = await db.query(
+        "SELECT reltuples::int AS n FROM pg_class WHERE relname = 'flights'",
+      );
+      expect(stats.rows[0]).toEqual({ n: 1 });
     } finally {
       await db.end();
     }
@@ -133,6 +141,7 @@ describe.runIf(engine === 'postgres')('npm run migrate-store', () => {
     expect(stdout).toMatch(/^users: 2 rows, 0 copied, 2 already there; 2 in PostgreSQL$/m);
     expect(stdout).toMatch(/^comments: 2 rows, 0 copied, 2 already there; 2 in PostgreSQL$/m);
     expect(stdout).toMatch(/^raw logs: 1 referenced, 0 copied to s3:\/\/\S+, 1 already there$/m);
+    expect(stdout).not.toMatch(/ANALYZE/);
     expect(stdout).toMatch(/^Count check passed/m);
   }, 120_000);
 });

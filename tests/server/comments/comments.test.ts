@@ -50,9 +50,29 @@ describe('comments', () => {
       channel: 'motor3',
     };
     const first = await coach.agent.put(`/api/comments/${id}`).send(body).expect(201);
+    const counted = await counts();
     const again = await coach.agent.put(`/api/comments/${id}`).send(body).expect(200);
     expect(Comment.parse(again.body)).toEqual(Comment.parse(first.body));
     expect(await t.dataSource.getRepository(CommentEntity).countBy({ id })).toBe(1);
+    // The retry leaves the flight's counters as they were.
+    expect(await counts()).toEqual(counted);
+  });
+
+  it('counts a reply as a comment but not as another open thread', async () => {
+    const root = randomUUID();
+    await coach.agent
+      .put(`/api/comments/${root}`)
+      .send({ flightId, tS: 12, body: 'Yaw wobble here' })
+      .expect(201);
+    const before = await counts();
+    await pilot.agent
+      .put(`/api/comments/${randomUUID()}`)
+      .send({ flightId, tS: 12, body: 'Props were swapped', parentId: root })
+      .expect(201);
+    expect(await counts()).toEqual({
+      commentCount: before.commentCount + 1,
+      openComments: before.openComments,
+    });
   });
 
   it('refuses another author reusing a comment id', async () => {
