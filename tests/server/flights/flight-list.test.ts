@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Flight } from '../../../server/flights/flight.entity';
 import { User } from '../../../server/auth/user.entity';
 import { Membership } from '../../../server/teams/membership.entity';
@@ -9,6 +9,7 @@ import {
   type FlightListQueryInput,
 } from '../../../shared/schemas/flights';
 import { engine } from '../helpers/engine';
+import { watchSql } from '../helpers/sql-watch';
 import { describeStep, explainPostgres, type PgPlanStep } from '../helpers/explain';
 import { kite } from '../helpers/fixtures';
 import { startTestApp, type TestApp } from '../helpers/test-app';
@@ -204,7 +205,7 @@ describe('flight list', () => {
       teamId,
       FlightListQuery.parse({ ...q, limit: 2 }),
     );
-    const spy = vi.spyOn(t.dataSource, 'query');
+    const watch = watchSql(t.dataSource);
     try {
       await t.services.flights.list(
         ownerId,
@@ -215,12 +216,12 @@ describe('flight list', () => {
           ...(withCursor && first.nextCursor ? { cursor: first.nextCursor } : {}),
         }),
       );
-      const call = spy.mock.calls.find(([sql]) => /FROM "flights"/.test(sql));
+      const call = watch.calls.find(([sql]) => /FROM "flights"/.test(sql));
       expect(call, 'the list query').toBeDefined();
       const [sql, params] = call! as [string, unknown[]];
       return { sql, params };
     } finally {
-      spy.mockRestore();
+      watch.restore();
     }
   }
 

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { FlightPage } from '../../../shared/schemas/flights';
 import { flightBody, kite } from '../helpers/fixtures';
+import { watchSql } from '../helpers/sql-watch';
 import { signedUpAgent, startTestApp, type TestApp } from '../helpers/test-app';
 import { randomUUID } from 'node:crypto';
 
@@ -51,19 +52,19 @@ describe('request cost', () => {
     const first = FlightPage.parse(
       (await owner.agent.get(`/api/teams/${teamId}/flights`).query({ limit: 2 }).expect(200)).body,
     );
-    const spy = vi.spyOn(t.dataSource, 'query');
+    const watch = watchSql(t.dataSource);
     try {
       await owner.agent
         .get(`/api/teams/${teamId}/flights`)
         .query({ limit: 2, cursor: first.nextCursor!, severity: 'watch' })
         .expect(200);
-      const sql = spy.mock.calls.map(([q]) => q);
+      const sql = watch.calls.map(([q]) => q);
       expect(sql, sql.join('\n')).toHaveLength(3);
       expect(sql[0]).toMatch(/FROM "sessions"/);
       expect(sql[1]).toMatch(/FROM "memberships"/);
       expect(sql[2]).toMatch(/FROM "flights"/);
     } finally {
-      spy.mockRestore();
+      watch.restore();
     }
   });
 });
