@@ -23,7 +23,7 @@
  *   This is the load the target describes; the burst figure is kept to compare with past runs.
  */
 import { randomUUID } from 'node:crypto';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
@@ -39,6 +39,7 @@ import { freshStores, type Stores } from '../server/helpers/engine';
 import { spawnServer } from '../server/helpers/spawn-server';
 import { servicesDown, servicesUp } from '../services/local-services';
 import { paced } from './paced';
+import { processCpuMs, processTreeCpuMs } from './process-cpu';
 import type { Bench, BenchOptions } from './registry';
 
 interface Histogram {
@@ -77,8 +78,11 @@ const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
 const FLIGHTS = 10_000;
 const PASSWORD = 'bench passphrase long';
 
+/** The stores, and the PostgreSQL postmaster's pid when the benchmark started it itself. */
+type BenchStores = Stores & { postmasterPid?: number };
+
 /** A fresh database and bucket on PostgreSQL, S3 and Redis; services started when none run. */
-async function postgresStores(log: (s: string) => void): Promise<Stores> {
+async function postgresStores(log: (s: string) => void): Promise<BenchStores> {
   if (process.env.DATABASE_URL) return freshStores();
   const dir = mkdtempSync(join(tmpdir(), 'hoverprint-bench-services-'));
   log('starting throwaway PostgreSQL, Redis and S3…');
@@ -87,6 +91,7 @@ async function postgresStores(log: (s: string) => void): Promise<Stores> {
   const stores = await freshStores();
   return {
     env: stores.env,
+    postmasterPid: Number(readFileSync(join(dir, 'pg', 'postmaster.pid'), 'utf8').split('\n')[0]),
     async cleanup() {
       await stores.cleanup();
       await servicesDown(dir);
@@ -187,6 +192,46 @@ async function cursors(url: string, cookie: string, teamId: string) {
   return out;
 }
 
+/**
+ * CPU milliseconds per request over one run: the server process, the database's processes (when
+ * the benchmark started PostgreSQL; SQLite works inside the server) and this load generator.
+ */
+function cpuMeter(serverPid: number, postmasterPid: number | undefined) {
+  const read = () => ({
+    server: processCpuMs(serverPid),
+    database: postmasterPid === undefined ? null : processTreeCpuMs(postmasterPid),
+    client: process.cpuUsage(),
+  });
+  const start = read();
+  return (requests: number) => {
+    const end = read();
+    const per = (a: number | null, b: number | null) =>
+      a === null || b === null ? null : Number(((b - a) / requests).toFixed(2));
+    const client = process.cpuUsage(start.client);
+    return {
+      server: per(start.server, end.server),
+      database: per(start.database, end.database),
+      client: Number(((client.user + client.system) / 1000 / requests).toFixed(2)),
+    };
+  };
+}
+
+type CpuPerRequest = ReturnType<ReturnType<typeof cpuMeter>>;
+
+const describeCpu = (c: CpuPerRequest) =>
+  `CPU per request: server ${c.server ?? '?'} ms` +
+  (c.database === null ? '' : `, PostgreSQL ${c.database} ms`) +
+  `, load generator ${c.client} ms`;
+
+/** `writeServerCpuMs` and the like, leaving out what could not be measured. */
+function flatCpu(prefix: string, c: CpuPerRequest): Record<string, number> {
+  const out: Record<string, number> = {};
+  if (c.server !== null) out[`${prefix}ServerCpuMs`] = c.server;
+  if (c.database !== null) out[`${prefix}DatabaseCpuMs`] = c.database;
+  out[`${prefix}ClientCpuMs`] = c.client;
+  return out;
+}
+
 function check(name: string, r: Result) {
   if (r.errors || r.timeouts || r.non2xx) {
     throw new Error(
@@ -200,7 +245,7 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
   const log = (s: string) => {
     if (!json) console.log(s);
   };
-  const stores: Stores =
+  const stores: BenchStores =
     engine === 'postgres' ? await postgresStores(log) : { env: {}, cleanup: async () => undefined };
   const server = await (async () => {
     log(`seeding ${FLIGHTS} flights (${engine})…`);
@@ -249,6 +294,7 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
         body: 'Motor 3 runs warm after the punch-out; check the bearing.',
       }),
     });
+    const writeCpu = cpuMeter(server.child.pid!, stores.postmasterPid);
     const writes = await autocannon({
       ...closed,
       duration: 8,
@@ -256,6 +302,7 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
       requests: [{ setupRequest: writeRequest }],
     });
     check('comment writes', writes);
+    const writeCpuMs = writeCpu(writes['2xx']);
     const writesAt500 = await autocannon({
       ...base,
       duration: 8,
@@ -282,6 +329,7 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
         path: `/api/teams/${server.teamId}/flights?limit=50${c ? `&cursor=${c}` : ''}`,
       };
     };
+    const listCpu = cpuMeter(server.child.pid!, stores.postmasterPid);
     const list = await autocannon({
       ...closed,
       duration: 8,
@@ -289,6 +337,7 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
       requests: [{ setupRequest: listRequest }],
     });
     check('flight list', list);
+    const listCpuMs = listCpu(list['2xx']);
     const listAt200 = await autocannon({
       ...base,
       duration: 8,
@@ -312,16 +361,18 @@ const bench: Bench = async ({ json, dir, engine }: BenchOptions) => {
       writeP99PacedMs: writesPaced.p99,
       listP99Ms: listAt200.latency.p99,
       listP99PacedMs: listPaced.p99,
+      ...flatCpu('write', writeCpuMs),
+      ...flatCpu('list', listCpuMs),
     };
     const ref = perS(health);
     log(
       `reference GET /api/health: ${Math.round(ref)} req/s (closed loop, 10 connections), p50 ${health.latency.p50} ms, p99 ${health.latency.p99} ms`,
     );
     log(
-      `comment writes: ${figures.writesPerS} /s closed loop (${(perS(writes) / ref).toFixed(2)}× health); at 500 /s offered — paced: p50 ${writesPaced.p50} ms, p99 ${writesPaced.p99} ms, max ${writesPaced.max} ms; in per-second bursts on 10 connections: p50 ${writesAt500.latency.p50} ms, p99 ${writesAt500.latency.p99} ms — target ≥ 500 /s with p99 ≤ 50 ms`,
+      `comment writes: ${figures.writesPerS} /s closed loop (${(perS(writes) / ref).toFixed(2)}× health); at 500 /s offered — paced: p50 ${writesPaced.p50} ms, p99 ${writesPaced.p99} ms, max ${writesPaced.max} ms; in per-second bursts on 10 connections: p50 ${writesAt500.latency.p50} ms, p99 ${writesAt500.latency.p99} ms — target ≥ 500 /s with p99 ≤ 50 ms; closed-loop ${describeCpu(writeCpuMs)}`,
     );
     log(
-      `flight list, 50 a page over ${FLIGHTS} flights (${pages.length} cursors): ${Math.round(perS(list))} /s closed loop (${(perS(list) / ref).toFixed(2)}× health); at 200 /s offered — paced: p50 ${listPaced.p50} ms, p99 ${listPaced.p99} ms, max ${listPaced.max} ms; in per-second bursts on 10 connections: p50 ${listAt200.latency.p50} ms, p99 ${listAt200.latency.p99} ms — target p99 ≤ 30 ms`,
+      `flight list, 50 a page over ${FLIGHTS} flights (${pages.length} cursors): ${Math.round(perS(list))} /s closed loop (${(perS(list) / ref).toFixed(2)}× health); at 200 /s offered — paced: p50 ${listPaced.p50} ms, p99 ${listPaced.p99} ms, max ${listPaced.max} ms; in per-second bursts on 10 connections: p50 ${listAt200.latency.p50} ms, p99 ${listAt200.latency.p99} ms — target p99 ≤ 30 ms; closed-loop ${describeCpu(listCpuMs)}`,
     );
     return figures;
   } finally {
