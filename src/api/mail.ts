@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { pathTo } from '../../shared/api/paths';
 import { DevMailList } from '../../shared/schemas/mail';
 import { ApiError, apiFetch } from '../lib/api-fetch';
+import { useHealth } from './health';
 
 /** Caught messages, or null when this server sends real mail (the route is not mounted). */
 async function fetchDevMail() {
@@ -33,14 +34,19 @@ export const mailQueries = {
 export const useDevMail = () => useQuery(mailQueries.inbox());
 
 /**
- * Whether this server has a dev inbox at all, for the navigation: asked once, and remembered
+ * Whether this server has a dev inbox at all, for the navigation. The health answer says so
+ * when it can, so a server sending real mail is never asked for an inbox it lacks (a 404 in the
+ * console). Otherwise the inbox is asked once an hour, and the answer remembered
  * (src/app/query-persistence.ts) so the link does not disappear while the network is away.
  */
 export const useDevMailAvailable = () => {
-  const available = useQuery({
+  const health = useHealth();
+  const said = health.data?.devMail;
+  const probe = useQuery({
     queryKey: mailKeys.available(),
     queryFn: async () => (await fetchDevMail()) !== null,
     staleTime: 60 * 60 * 1000,
+    enabled: health.isSuccess && said === undefined,
   });
-  return available.data === true;
+  return said ?? probe.data === true;
 };
