@@ -3,6 +3,8 @@ import { HOUR_MS, limits } from '../limits';
 import type { Config } from '../config';
 import { AppError } from './errors';
 import { errorCodes } from '../../shared/api/error';
+import { Email } from '../../shared/schemas/auth';
+import { TeamIdParam } from '../../shared/schemas/common';
 
 const tooMany =
   (what: string): Options['handler'] =>
@@ -44,10 +46,12 @@ export function signInRateLimit(config: Pick<Config, 'authRateLimit'>, store?: S
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     skipSuccessfulRequests: true,
+    // The account is the address as sign-in reads it. Anything else counts under the client
+    // address alone: the limiter runs before the route's parse, and raw text as a key would
+    // let each request open a fresh counter and park up to a body's size in the store.
     keyGenerator: (req) => {
-      const email = (req.body as { email?: unknown } | undefined)?.email;
-      const account = typeof email === 'string' ? email.trim().toLowerCase() : '';
-      return `${ipKeyGenerator(req.ip ?? '')}|${account}`;
+      const email = Email.safeParse((req.body as { email?: unknown } | undefined)?.email);
+      return `${ipKeyGenerator(req.ip ?? '')}|${email.success ? email.data : ''}`;
     },
     handler: tooMany('Too many failed sign-ins.'),
   });
@@ -78,7 +82,11 @@ export function inviteRateLimits(stores: { store(name: string): Store | undefine
       ...common,
       ...(perTeam && { store: perTeam }),
       limit: limits.invitesPerTeamPerHour,
-      keyGenerator: (req) => `team:${String(req.params.teamId)}`,
+      // Parsed like the route's own path: a malformed id is refused there, so never counted.
+      keyGenerator: (req) => {
+        const team = TeamIdParam.safeParse(req.params);
+        return `team:${team.success ? team.data.teamId : 'malformed'}`;
+      },
     }),
   ];
 }

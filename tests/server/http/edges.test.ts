@@ -63,31 +63,35 @@ describe('request ids', () => {
 });
 
 describe('sign-in limiter', () => {
+  const signIn = (t: TestApp, email: string, password = 'wrong guess') =>
+    request(t.app).post('/api/auth/sign-in').send({ email, password });
+
   it('lets 30 good sign-ins in a row through and counts failures per account', async () => {
     const t = await startTestApp({ env: { AUTH_RATE_LIMIT: '5' } });
     try {
       const user = await signedUpAgent(t.app, 'Jonah');
-      for (let i = 0; i < 30; i++) {
-        await request(t.app)
-          .post('/api/auth/sign-in')
-          .send({ email: user.email, password: PASSWORD })
-          .expect(200);
-      }
+      for (let i = 0; i < 30; i++) await signIn(t, user.email, PASSWORD).expect(200);
       // Failures against another account do not lock this one out.
-      for (let i = 0; i < 5; i++) {
-        await request(t.app)
-          .post('/api/auth/sign-in')
-          .send({ email: 'someone.else@crew.example', password: 'wrong guess' })
-          .expect(401);
-      }
-      await request(t.app)
-        .post('/api/auth/sign-in')
-        .send({ email: 'someone.else@crew.example', password: 'wrong guess' })
-        .expect(429);
-      await request(t.app)
-        .post('/api/auth/sign-in')
-        .send({ email: user.email, password: PASSWORD })
-        .expect(200);
+      for (let i = 0; i < 5; i++) await signIn(t, 'someone.else@crew.example').expect(401);
+      await signIn(t, 'someone.else@crew.example').expect(429);
+      await signIn(t, user.email, PASSWORD).expect(200);
+    } finally {
+      await t.close();
+    }
+  });
+
+  it('counts failed sign-ins with malformed addresses under the client address alone', async () => {
+    const t = await startTestApp({ env: { AUTH_RATE_LIMIT: '5' } });
+    try {
+      const user = await signedUpAgent(t.app, 'Jonah');
+      // Each body names a different non-address (one far over the 254-character bound): none
+      // may open a counter of its own, or keep its raw text in the limiter's store.
+      const junk = (i: number) => (i === 0 ? `${'x'.repeat(100_000)}@` : `not an address ${i}`);
+      for (let i = 0; i < 5; i++) await signIn(t, junk(i)).expect(400);
+      const sixth = await signIn(t, junk(5)).expect(429);
+      expect(sixth.body.error.code).toBe('rate_limited');
+      // A real account from the same address keeps its own counter.
+      await signIn(t, user.email, PASSWORD).expect(200);
     } finally {
       await t.close();
     }
