@@ -54,6 +54,11 @@ describe('route helpers', () => {
 
   const userId = 'u-1';
   const id = randomUUID();
+  /** A signed-in PATCH of the note, with If-Match when given. */
+  const edit = (text: string, ifMatch?: string) => {
+    const r = request(app).patch(`/things/${id}`).set('x-user', userId);
+    return (ifMatch ? r.set('if-match', ifMatch) : r).send({ text });
+  };
   beforeEach(() => {
     calls = [];
     current = 4;
@@ -70,34 +75,20 @@ describe('route helpers', () => {
   });
 
   it('a versioned write passes If-Match to the service and answers the new version as ETag', async () => {
-    const res = await request(app)
-      .patch(`/things/${id}`)
-      .set('x-user', userId)
-      .set('if-match', '"4"')
-      .send({ text: 'rebalanced' })
-      .expect(200);
+    const res = await edit('rebalanced', '"4"').expect(200);
     expect(res.body).toEqual({ id, text: 'rebalanced', version: 5 });
     expect(res.headers.etag).toBe('"5"');
     expect(calls).toEqual([[userId, id, { text: 'rebalanced' }, 4]]);
   });
 
   it('a versioned write without If-Match passes no expected version', async () => {
-    const res = await request(app)
-      .patch(`/things/${id}`)
-      .set('x-user', userId)
-      .send({ text: 'blind' })
-      .expect(200);
+    const res = await edit('blind').expect(200);
     expect(res.headers.etag).toBe('"5"');
     expect(calls[0]?.[3]).toBeUndefined();
   });
 
   it('a stale versioned write answers 412 with the current version, as body and ETag', async () => {
-    const res = await request(app)
-      .patch(`/things/${id}`)
-      .set('x-user', userId)
-      .set('if-match', '"3"')
-      .send({ text: 'late' })
-      .expect(412);
+    const res = await edit('late', '"3"').expect(412);
     expect(ApiErrorBody.parse(res.body).error).toMatchObject({
       code: 'version_conflict',
       currentVersion: 4,
@@ -138,18 +129,13 @@ describe('route helpers', () => {
       status: 400,
       code: 'bad_request',
       at: ['text'],
-      send: () => request(app).patch(`/things/${id}`).set('x-user', userId).send({ text: ' ' }),
+      send: () => edit(' '),
     },
     {
       name: 'an If-Match that names no version',
       status: 400,
       code: 'bad_request',
-      send: () =>
-        request(app)
-          .patch(`/things/${id}`)
-          .set('x-user', userId)
-          .set('if-match', '"abc"')
-          .send({ text: 'ok' }),
+      send: () => edit('ok', '"abc"'),
     },
     {
       name: 'create with no session',
