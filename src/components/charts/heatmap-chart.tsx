@@ -35,6 +35,24 @@ function edges(centres: number[]): number[] {
   return out;
 }
 
+/**
+ * A value axis spanning the cell edges. Edges are fractional; only the round ticks between them
+ * are labelled.
+ */
+function edgeAxis(name: string, nameGap: number, e: number[]) {
+  return {
+    type: 'value',
+    name,
+    nameLocation: 'middle',
+    nameGap,
+    min: e[0],
+    max: e[e.length - 1],
+    nameTextStyle: { fontSize: 10, color: inkSeries.axis },
+    axisLabel: { color: inkSeries.axis, fontSize: 10, showMinLabel: false, showMaxLabel: false },
+    splitLine: { show: false },
+  };
+}
+
 /** The echarts option for the heatmap and its order lines (kept apart so tests can read it). */
 export function heatmapOption(props: Omit<HeatmapChartProps, 'height' | 'ariaLabel'>) {
   const { x, y, z, xName, yName, zName, lines } = props;
@@ -77,39 +95,8 @@ export function heatmapOption(props: Omit<HeatmapChartProps, 'height' | 'ariaLab
       // Light paper to deep slate: a single-hue ramp reads as "more" without a rainbow.
       inRange: { color: ['#f7f5f0', '#c9d6df', '#6f93aa', '#1f3a4d', '#0d1a24'] },
     },
-    xAxis: {
-      type: 'value',
-      name: xName,
-      nameLocation: 'middle',
-      nameGap: 26,
-      min: xe[0],
-      max: xe[xe.length - 1],
-      nameTextStyle: { fontSize: 10, color: inkSeries.axis },
-      axisLabel: {
-        color: inkSeries.axis,
-        fontSize: 10,
-        showMinLabel: false,
-        showMaxLabel: false,
-      },
-      splitLine: { show: false },
-    },
-    yAxis: {
-      type: 'value',
-      name: yName,
-      nameLocation: 'middle',
-      nameGap: 46,
-      min: ye[0],
-      max: ye[ye.length - 1],
-      nameTextStyle: { fontSize: 10, color: inkSeries.axis },
-      // Edges are fractional; only the round ticks between them are labelled.
-      axisLabel: {
-        color: inkSeries.axis,
-        fontSize: 10,
-        showMinLabel: false,
-        showMaxLabel: false,
-      },
-      splitLine: { show: false },
-    },
+    xAxis: edgeAxis(xName, 26, xe),
+    yAxis: edgeAxis(yName, 46, ye),
     legend: {
       top: 0,
       right: 70,

@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { CommentsRail } from '../../../../../src/features/comments/components/comments-rail';
 import { LocalStoreNote } from '../../../../../src/features/sync/components/local-store-note';
-import { flightId, pilot } from '../../../helpers/comment-fixture';
+import { railProps } from '../../../helpers/rail-props';
 import { jsonResponse, renderWithQuery } from '../../../helpers/render-with-query';
 
 // Storage blocked for the site: IndexedDB is there, but opening a database is refused, as a
@@ -18,8 +18,6 @@ vi.hoisted(() => {
     value: { open: refuse, deleteDatabase: refuse, cmp: (a: number, b: number) => a - b },
   });
 });
-
-const teamId = '0b7e6d1a-2f43-4c1e-9d7a-5a3c2b1e0f01';
 
 beforeEach(() => {
   // The thread came in while online; the comment is written after the link dropped.
@@ -44,17 +42,7 @@ describe('comments when the browser refuses storage', () => {
     renderWithQuery(
       <>
         <LocalStoreNote />
-        <CommentsRail
-          flightId={flightId}
-          teamId={teamId}
-          me={pilot}
-          role="pilot"
-          pilotId={pilot.id}
-          cursorT={7.5}
-          onSeek={vi.fn()}
-          selectedId={null}
-          onSelect={vi.fn()}
-        />
+        <CommentsRail {...railProps({ cursorT: 7.5 })} />
       </>,
     );
     const user = userEvent.setup();

@@ -5,10 +5,9 @@ import userEvent from '@testing-library/user-event';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { CommentsRail } from '../../../../../src/features/comments/components/comments-rail';
-import { comment, flightId, pilot } from '../../../helpers/comment-fixture';
+import { comment, flightId } from '../../../helpers/comment-fixture';
+import { railProps } from '../../../helpers/rail-props';
 import { closeLocalDb, listOutbox, localDb } from '../../../../../src/lib/local-db';
-
-const teamId = '0b7e6d1a-2f43-4c1e-9d7a-5a3c2b1e0f01';
 
 let stored: unknown[] = [];
 
@@ -41,17 +40,7 @@ function renderRail(cursorT: number) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
     <QueryClientProvider client={client}>
-      <CommentsRail
-        flightId={flightId}
-        teamId={teamId}
-        me={pilot}
-        role="pilot"
-        pilotId={pilot.id}
-        cursorT={cursorT}
-        onSeek={vi.fn()}
-        selectedId={null}
-        onSelect={vi.fn()}
-      />
+      <CommentsRail {...railProps({ cursorT })} />
     </QueryClientProvider>,
   );
 }

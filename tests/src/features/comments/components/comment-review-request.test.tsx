@@ -4,10 +4,10 @@ import { cleanup, screen } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../../shared/schemas/common';
 import { CommentsRail } from '../../../../../src/features/comments/components/comments-rail';
-import { flightId, pilot } from '../../../helpers/comment-fixture';
+import { pilot } from '../../../helpers/comment-fixture';
+import { railProps } from '../../../helpers/rail-props';
 import { jsonResponse, renderWithQuery } from '../../../helpers/render-with-query';
 
-const teamId = '0b7e6d1a-2f43-4c1e-9d7a-5a3c2b1e0f01';
 const otherPilot = { id: '22222222-2222-4222-8222-222222222222', name: 'Ivo Sparrow' };
 const coach = {
   userId: '33333333-3333-4333-8333-333333333333',
@@ -35,19 +35,7 @@ afterEach(() => {
 
 /** The rail as `me` with `role` sees it on a flight `pilotId` flew. */
 async function renderRail(me: typeof pilot, role: Role, pilotId: string) {
-  renderWithQuery(
-    <CommentsRail
-      flightId={flightId}
-      teamId={teamId}
-      me={me}
-      role={role}
-      pilotId={pilotId}
-      cursorT={0}
-      onSeek={vi.fn()}
-      selectedId={null}
-      onSelect={vi.fn()}
-    />,
-  );
+  renderWithQuery(<CommentsRail {...railProps({ me, role, pilotId })} />);
   await screen.findByText('No comments yet.');
 }
 
