@@ -76,7 +76,7 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use('/api', sessionMiddleware(services.auth.lucia));
 
-  app.use(healthRouter(dataSource));
+  app.use(healthRouter(dataSource, config.mail.mode === 'fake'));
   app.use(authRouter(services, config));
   app.use(teamsRouter(services));
   app.use(invitesRouter(services));

@@ -4,7 +4,8 @@ import { paths } from '../../shared/api/paths';
 import type { HealthResponse } from '../../shared/schemas/health';
 import { AppError } from './errors';
 
-export function healthRouter(dataSource: DataSource) {
+/** `devMail`: whether the fake inbox is mounted (MAIL_FAKE), told to the client. */
+export function healthRouter(dataSource: DataSource, devMail: boolean) {
   const router = Router();
   router.get(paths.health, async (req, res) => {
     try {
@@ -14,7 +15,7 @@ export function healthRouter(dataSource: DataSource) {
       req.log?.error({ err }, 'health check: database did not answer');
       throw new AppError(503, 'unavailable', 'The database is not answering.');
     }
-    const body: HealthResponse = { ok: true, db: 'ok' };
+    const body: HealthResponse = { ok: true, db: 'ok', devMail };
     res.set('cache-control', 'no-store').json(body);
   });
   return router;

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { HealthResponse } from '../../shared/api/health';
+import { HealthResponse } from '../../shared/schemas/health';
 import { pathTo } from '../../shared/api/paths';
 import { apiFetch } from '../lib/api-fetch';
 import type { ServerAnswer } from '../lib/header-status';

@@ -32,7 +32,7 @@ describe('GET /api/health over real HTTP', () => {
   it('answers ok after querying the SQLite file it created in DATA_DIR', async () => {
     const res = await fetch(`${base}/api/health`);
     expect(res.status).toBe(200);
-    expect(HealthResponse.parse(await res.json())).toEqual({ ok: true, db: 'ok' });
+    expect(HealthResponse.parse(await res.json())).toEqual({ ok: true, db: 'ok', devMail: false });
     expect(existsSync(`${tmp.dir}/hoverprint.sqlite`)).toBe(true);
   });
 

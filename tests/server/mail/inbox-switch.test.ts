@@ -3,6 +3,7 @@ import pino from 'pino';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseConfig } from '../../../server/config';
+import { HealthResponse } from '../../../shared/schemas/health';
 import { startMailer } from '../../../server/mail/mailer';
 import { startTestApp, type TestApp } from '../helpers/test-app';
 
@@ -25,6 +26,17 @@ describe('the dev inbox switch', () => {
     expect(off.config.mail.mode).toBe('log');
     await request(off.app).get('/api/dev/mail').expect(404);
     await request(off.app).delete('/api/dev/mail').expect(404);
+  });
+
+  it('tells the client in the health answer whether the inbox is there, so it never asks in vain', async () => {
+    const offHealth = HealthResponse.parse(
+      (await request(off.app).get('/api/health').expect(200)).body,
+    );
+    expect(offHealth.devMail).toBe(false);
+    const onHealth = HealthResponse.parse(
+      (await request(on.app).get('/api/health').expect(200)).body,
+    );
+    expect(onHealth.devMail).toBe(true);
   });
 
   it('answers a direct request on this machine when MAIL_FAKE=1', async () => {
