@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { pathTo } from '../../shared/api/paths';
+import { HealthResponse } from '../../shared/schemas/health';
 import { DevMailList } from '../../shared/schemas/mail';
 import { ApiError, apiFetch } from '../lib/api-fetch';
 import { useHealth } from './health';
@@ -12,6 +13,12 @@ async function fetchDevMail() {
     if (error instanceof ApiError && error.status === 404) return null;
     throw error;
   }
+}
+
+/** Whether the server has an inbox: its health answer says so, or (an older server) the inbox. */
+async function fetchAvailable() {
+  const { devMail } = await apiFetch(pathTo('health'), HealthResponse);
+  return devMail ?? (await fetchDevMail()) !== null;
 }
 
 export const mailKeys = {
@@ -36,17 +43,17 @@ export const useDevMail = () => useQuery(mailQueries.inbox());
 /**
  * Whether this server has a dev inbox at all, for the navigation. The health answer says so
  * when it can, so a server sending real mail is never asked for an inbox it lacks (a 404 in the
- * console). Otherwise the inbox is asked once an hour, and the answer remembered
- * (src/app/query-persistence.ts) so the link does not disappear while the network is away.
+ * console); otherwise the inbox is asked once an hour. Either answer is remembered under one key
+ * (src/app/query-persistence.ts), so after a reload with no network the link is still there.
  */
 export const useDevMailAvailable = () => {
   const health = useHealth();
   const said = health.data?.devMail;
-  const probe = useQuery({
+  const known = useQuery({
     queryKey: mailKeys.available(),
-    queryFn: async () => (await fetchDevMail()) !== null,
+    queryFn: fetchAvailable,
     staleTime: 60 * 60 * 1000,
-    enabled: health.isSuccess && said === undefined,
+    enabled: health.isSuccess,
   });
-  return said ?? probe.data === true;
+  return said ?? known.data === true;
 };

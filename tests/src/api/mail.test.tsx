@@ -3,7 +3,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { renderHook, waitFor } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { useDevMailAvailable } from '../../../src/api/mail';
+import { mailKeys, useDevMailAvailable } from '../../../src/api/mail';
 import { jsonResponse } from '../helpers/render-with-query';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -27,12 +27,13 @@ function stubServer(health: object, inbox: boolean) {
   return asked;
 }
 
-function renderAvailable() {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+function renderAvailable(
+  client = new QueryClient({ defaultOptions: { queries: { retry: false } } }),
+) {
   const wrapper = ({ children }: { children: ReactNode }) => (
     <QueryClientProvider client={client}>{children}</QueryClientProvider>
   );
-  return renderHook(() => useDevMailAvailable(), { wrapper });
+  return { ...renderHook(() => useDevMailAvailable(), { wrapper }), client };
 }
 
 describe('the dev inbox link', () => {
@@ -51,6 +52,24 @@ describe('the dev inbox link', () => {
     const { result } = renderAvailable();
     await waitFor(() => expect(result.current).toBe(true));
     expect(asked).not.toContain('/api/dev/mail');
+  });
+
+  it('remembers what the health answer said, so the link stays after a reload with no network', async () => {
+    stubServer({ ok: true, db: 'ok', devMail: true }, true);
+    const { client } = renderAvailable();
+    // The kept answer is what query-persistence.ts saves and restores.
+    await waitFor(() => expect(client.getQueryData(mailKeys.available())).toBe(true));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => {
+        throw new TypeError('Failed to fetch');
+      }),
+    );
+    const offline = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    offline.setQueryData(mailKeys.available(), true);
+    const { result } = renderAvailable(offline);
+    await waitFor(() => expect(offline.getQueryState(['status', 'health'])?.status).toBe('error'));
+    expect(result.current).toBe(true);
   });
 
   it('asks the inbox itself when the health answer does not say', async () => {
