@@ -138,10 +138,14 @@ test('a flight imported as an unknown quad is filed under its aircraft later, re
   await page.getByRole('button', { name: 'File under this aircraft' }).click();
   await expect(page.getByText('(assumed airframe)')).toHaveCount(0, { timeout: 60_000 });
   await expect(page.getByRole('img', { name: /Top view of Heron wide-front/ })).toBeVisible();
+  // A request that meets a keep-alive socket the server has just closed (ECONNRESET) is asked
+  // again on the next poll instead of failing the journey.
   await expect
-    .poll(async () => (await context.request.get(`/api/flights/${flightId}`)).status(), {
-      timeout: 60_000,
-    })
+    .poll(
+      async () =>
+        (await context.request.get(`/api/flights/${flightId}`).catch(() => null))?.status() ?? 0,
+      { timeout: 60_000 },
+    )
     .toBe(200);
   // The stored detail carries the geometry the analysis used.
   const stored = (await (await context.request.get(`/api/flights/${flightId}`)).json()) as {
