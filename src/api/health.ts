@@ -10,11 +10,14 @@ export const healthKeys = {
   health: () => [...healthKeys.all, 'health'] as const,
 };
 
+/** The server's health answer (up, database answering, whether it has a dev inbox). */
+export const fetchHealth = () => apiFetch(pathTo('health'), HealthResponse);
+
 export const healthQueries = {
   health: () =>
     queryOptions({
       queryKey: healthKeys.health(),
-      queryFn: () => apiFetch(pathTo('health'), HealthResponse),
+      queryFn: fetchHealth,
       // Not answering: look again less often, so a dead server is not asked every half minute.
       refetchInterval: (q) => (q.state.status === 'error' ? 120_000 : 30_000),
       retry: false,

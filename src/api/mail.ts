@@ -1,9 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { pathTo } from '../../shared/api/paths';
-import { HealthResponse } from '../../shared/schemas/health';
 import { DevMailList } from '../../shared/schemas/mail';
 import { ApiError, apiFetch } from '../lib/api-fetch';
-import { useHealth } from './health';
+import { fetchHealth, useHealth } from './health';
 
 /** Caught messages, or null when this server sends real mail (the route is not mounted). */
 async function fetchDevMail() {
@@ -17,7 +16,7 @@ async function fetchDevMail() {
 
 /** Whether the server has an inbox: its health answer says so, or (an older server) the inbox. */
 async function fetchAvailable() {
-  const { devMail } = await apiFetch(pathTo('health'), HealthResponse);
+  const { devMail } = await fetchHealth();
   return devMail ?? (await fetchDevMail()) !== null;
 }
 
