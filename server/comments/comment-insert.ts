@@ -42,22 +42,20 @@ export function commentInserter(ds: DataSource): (c: NewComment) => Promise<void
     };
   }
 
-  const bumpRoot = cachedQuery<{ fid: string }, never>(ds, (p) =>
+  // A root comment also opens a thread; `open` is 1 or 0.
+  const bump = cachedQuery<{ fid: string; open: number }, never>(ds, (p) =>
     ds
       .createQueryBuilder()
       .update(Flight)
-      .set({ commentCount: () => '"commentCount" + 1', openComments: () => '"openComments" + 1' })
-      .where('id = :fid', { fid: p.fid }),
-  );
-  const bumpReply = cachedQuery<{ fid: string }, never>(ds, (p) =>
-    ds
-      .createQueryBuilder()
-      .update(Flight)
-      .set({ commentCount: () => '"commentCount" + 1' })
+      .set({
+        commentCount: () => '"commentCount" + 1',
+        openComments: () => '"openComments" + :open',
+      })
+      .setParameter('open', p.open)
       .where('id = :fid', { fid: p.fid }),
   );
   return async (c) => {
     await runSql(ds, insert, values(c));
-    await (c.parentId === null ? bumpRoot : bumpReply)({ fid: c.flightId });
+    await bump({ fid: c.flightId, open: c.parentId === null ? 1 : 0 });
   };
 }
